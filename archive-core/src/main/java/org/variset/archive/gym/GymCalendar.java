@@ -1,0 +1,28 @@
+package org.variset.archive.gym;
+
+import java.time.Clock;
+import java.time.LocalDate;
+import java.util.Objects;
+
+/**
+ * The gym's own "today": the calendar date in the gym's time zone, from an injected clock so that tests can
+ * fix it (interchange.md: "Today is the gym's local date").
+ */
+public final class GymCalendar {
+    private final Clock clock;
+
+    /** A calendar on the given clock. */
+    public GymCalendar(Clock clock) {
+        this.clock = Objects.requireNonNull(clock, "clock");
+    }
+
+    /** A calendar on the system clock. */
+    public static GymCalendar system() {
+        return new GymCalendar(Clock.systemUTC());
+    }
+
+    /** Today's date at the gym. */
+    public LocalDate today(Gym gym) {
+        return LocalDate.now(clock.withZone(gym.zone()));
+    }
+}

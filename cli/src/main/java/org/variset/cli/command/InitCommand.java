@@ -1,0 +1,42 @@
+package org.variset.cli.command;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveLocation;
+import org.variset.cli.ExitCode;
+import org.variset.cli.internal.Json;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+
+/** Creates an empty archive. */
+@Command(name = "init", mixinStandardHelpOptions = true,
+        description = {"Create an empty archive (see --archive for where).",
+            "Running it again on an existing archive changes nothing and says so."})
+final class InitCommand extends VarisetSubcommand {
+    @Mixin
+    FormatOptions format;
+
+    @Override
+    ExitCode execute() {
+        ArchiveLocation where = root().location();
+        boolean existed = Archive.existsAt(where.dir());
+        int version;
+        try (Archive archive = existed ? Archive.open(where.dir()) : Archive.create(where.dir())) {
+            version = archive.schemaVersion().version();
+        }
+        if (format.json()) {
+            ObjectNode o = Json.object();
+            o.put("archive", where.dir().toString());
+            o.put("created", !existed);
+            o.put("schema_version", version);
+            out().println(Json.write(o));
+        } else if (existed) {
+            out().println("There is already an archive at " + where.dir() + " (schema version " + version
+                    + "); nothing changed.");
+        } else {
+            out().println("Created an empty archive at " + where.dir() + " (schema version " + version + ", "
+                    + "location from " + where.source() + ").");
+        }
+        return ExitCode.OK;
+    }
+}

@@ -1,0 +1,67 @@
+package org.variset.cli.command;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveException;
+import org.variset.archive.store.ArchiveLocation;
+import org.variset.cli.ExitCode;
+import org.variset.cli.internal.Logging;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Spec;
+
+/**
+ * What every subcommand does the same way: set up logging, run, and turn what went wrong into one clear line
+ * on standard error and an {@link ExitCode}. No stack trace reaches the user unless {@code --verbose}.
+ */
+abstract class VarisetSubcommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    /** The root command of this run (global options and environment). */
+    RootCommand root() {
+        return (RootCommand) spec.root().userObject();
+    }
+
+    /** Where results go. */
+    PrintWriter out() {
+        return root().cli().out();
+    }
+
+    /** Where messages go. */
+    PrintWriter err() {
+        return root().cli().err();
+    }
+
+    /** Opens the archive of this run, migrating it if it is behind. */
+    Archive openArchive() {
+        ArchiveLocation where = root().location();
+        return Archive.open(where.dir());
+    }
+
+    @Override
+    public final Integer call() {
+        Logging.configure(root().verbose);
+        try {
+            return execute().code();
+        } catch (ArchiveException e) {
+            return fail(ExitCode.ARCHIVE, e.getMessage(), e);
+        } catch (IllegalArgumentException e) {
+            return fail(ExitCode.BAD_INPUT, e.getMessage(), e);
+        } catch (RuntimeException e) {
+            return fail(ExitCode.INTERNAL, "internal error: " + e
+                    + (root().verbose ? "" : " (run again with --verbose for the stack trace)"), e);
+        }
+    }
+
+    private int fail(ExitCode code, String message, Throwable e) {
+        err().println("variset " + spec.name() + ": " + message);
+        if (root().verbose) {
+            e.printStackTrace(err());
+        }
+        return code.code();
+    }
+
+    /** Does the command's work; throws for failures, which {@link #call()} reports. */
+    abstract ExitCode execute();
+}
