@@ -123,6 +123,19 @@ public class HoldPlacement {
         this.extraFields = new LinkedHashMap<>(spec.extraFields());
     }
 
+    /**
+     * A placement for bulk loading: it refers to its route (a reference is enough) without adding itself to the
+     * route's hold list, which stays unloaded.
+     *
+     * @param ordinal the placement's position in file order among the route's holds, from 0
+     */
+    public static HoldPlacement placedOn(Route route, int ordinal, Spec spec) {
+        if (ordinal < 0) {
+            throw new IllegalArgumentException("ordinal " + ordinal + " is below 0");
+        }
+        return new HoldPlacement(route, ordinal, spec);
+    }
+
     /** The route. */
     public Route route() {
         return route;

@@ -159,6 +159,20 @@ public class Route {
         return reset;
     }
 
+    /**
+     * Moves the route to another reset of the same wall.
+     *
+     * @throws IllegalArgumentException when the reset is on another wall
+     */
+    public void setReset(Reset other) {
+        Objects.requireNonNull(other, "reset");
+        if (!Objects.equals(other.wall().id(), wall.id())) {
+            throw new IllegalArgumentException("reset " + other.label() + " is on another wall than route " + label);
+        }
+        this.reset = other;
+        other.includeSetOn(setOn);
+    }
+
     /** The gym's label for the route. */
     public String label() {
         return label;

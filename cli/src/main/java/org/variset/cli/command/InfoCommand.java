@@ -50,7 +50,7 @@ final class InfoCommand extends VarisetSubcommand {
         out().printf("Set dates %s%n", s.firstSetOn() == null ? "none yet"
                 : s.firstSetOn() + " to " + s.lastSetOn());
         if (s.routes() == 0) {
-            out().println("The archive is empty.");
+            out().println("The archive is empty: add sets with 'variset import FILE...'.");
         }
         return ExitCode.OK;
     }

@@ -1,0 +1,25 @@
+package org.variset.imports.load;
+
+import java.util.List;
+import java.util.Set;
+
+/**
+ * What an import did, or would do in a dry run.
+ *
+ * @param dryRun true when nothing was written
+ * @param routesNew routes not in the archive before
+ * @param routesUnchanged routes the archive already held exactly (holds included)
+ * @param routesChanged routes whose rows differ from the archive (updated with --update, else refused)
+ * @param wallsNew walls created
+ * @param wallsChanged walls whose attributes changed
+ * @param holdsWritten hold placements written (or that would be)
+ * @param changes one line per changed route or wall, naming what differs
+ * @param skipped problems of rows that were skipped (with --skip-bad-rows), each naming file and line
+ * @param skippedCount how many rows were skipped
+ * @param extraColumns columns the spec does not define, kept as extra fields
+ * @param unknownTerms moves and styles not in the vocabulary, kept as written
+ */
+public record ImportSummary(boolean dryRun, long routesNew, long routesUnchanged, long routesChanged,
+        long wallsNew, long wallsChanged, long holdsWritten, List<String> changes, List<String> skipped,
+        long skippedCount, Set<String> extraColumns, Set<String> unknownTerms) {
+}

@@ -1,0 +1,69 @@
+package org.variset.imports.load;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import org.hibernate.Session;
+import org.variset.imports.ProblemList;
+import org.variset.imports.row.HoldRow;
+import org.variset.imports.row.RouteKey;
+
+/**
+ * Finds the route a hold row names, among the import's routes and the archive's. A hold names its route by
+ * (gym, label, set_on); the wall is needed only when two walls have a route with that label and date.
+ */
+final class RouteResolver {
+    private record Name(String gym, String label, LocalDate setOn) {
+    }
+
+    private final Session session;
+    private final Map<Name, List<RouteKey>> inFile = new HashMap<>();
+    private final Map<Name, List<RouteKey>> inArchive = new HashMap<>();
+
+    RouteResolver(Session session, Iterable<RouteKey> fileRoutes) {
+        this.session = session;
+        for (RouteKey k : fileRoutes) {
+            inFile.computeIfAbsent(new Name(k.gym(), k.label(), k.setOn()), n -> new ArrayList<>()).add(k);
+        }
+    }
+
+    /** The key of the hold's route, or null after recording a problem (when problems is not null). */
+    RouteKey resolve(HoldRow h, ProblemList problems) {
+        Name n = new Name(h.gym(), h.route(), h.setOn());
+        List<RouteKey> candidates = new ArrayList<>(inFile.getOrDefault(n, List.of()));
+        for (RouteKey k : archive(n)) {
+            if (!candidates.contains(k)) {
+                candidates.add(k);
+            }
+        }
+        if (h.wall() != null) {
+            candidates.removeIf(k -> !Objects.equals(k.wall(), h.wall()));
+        }
+        if (candidates.size() == 1) {
+            return candidates.get(0);
+        }
+        if (problems != null) {
+            String route = "route " + h.route() + " of " + h.setOn() + " in " + h.gym();
+            if (candidates.isEmpty()) {
+                problems.add(h.file(), h.line(), "route", route + (h.wall() == null ? "" : " on " + h.wall())
+                        + " is neither in the import nor in the archive (expected a row for it in the routes file)");
+            } else {
+                problems.add(h.file(), h.line(), "wall", route + " is on more than one wall ("
+                        + String.join(", ", candidates.stream().map(RouteKey::wall).toList())
+                        + "); give the wall column");
+            }
+        }
+        return null;
+    }
+
+    private List<RouteKey> archive(Name n) {
+        return inArchive.computeIfAbsent(n, key -> session.createSelectionQuery(
+                "select r.wall.name from Route r where r.gym.name = :g and r.label = :l and r.setOn = :s",
+                String.class).setParameter("g", key.gym()).setParameter("l", key.label())
+                .setParameter("s", key.setOn()).getResultList().stream()
+                .map(w -> new RouteKey(key.gym(), w, key.label(), key.setOn())).toList());
+    }
+}

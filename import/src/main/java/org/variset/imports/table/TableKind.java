@@ -1,0 +1,68 @@
+package org.variset.imports.table;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+
+/** The three tables of the interchange formats, with their columns (interchange.md). */
+public enum TableKind {
+    /** routes.csv: one row per route or boulder problem. */
+    ROUTES("routes", List.of("gym", "wall", "route", "set_on", "discipline", "grade"),
+            List.of("grade_scale", "stripped_on", "reset", "setters", "color", "angle_deg", "moves", "styles",
+                "move_difficulty", "notes")),
+    /** holds.csv: one row per hold placement. */
+    HOLDS("holds", List.of("gym", "route", "set_on", "type"),
+            List.of("wall", "seq", "role", "size", "grip", "hold_ref", "x_m", "y_m")),
+    /** walls.csv: one row per wall. */
+    WALLS("walls", List.of("gym", "wall"), List.of("discipline", "angle_deg", "height_m", "width_m", "cycle_days"));
+
+    private final String word;
+    private final List<String> required;
+    private final List<String> optional;
+
+    TableKind(String word, List<String> required, List<String> optional) {
+        this.word = word;
+        this.required = required;
+        this.optional = optional;
+    }
+
+    /** The table's name, also the XLSX sheet name. */
+    public String word() {
+        return word;
+    }
+
+    /** The columns a file of this table must have. */
+    public List<String> required() {
+        return required;
+    }
+
+    /** The columns in the order the spec lists them: required first, then optional. */
+    public List<String> columns() {
+        return java.util.stream.Stream.concat(required.stream(), optional.stream()).toList();
+    }
+
+    /** True for a column the spec defines for this table. */
+    public boolean knows(String column) {
+        return required.contains(column) || optional.contains(column);
+    }
+
+    /**
+     * Which table a file holds: by its name when that names one (routes.csv, holds-march.csv), else by the header
+     * columns it shares with each table.
+     */
+    public static TableKind detect(String fileName, Set<String> header) {
+        String name = fileName.toLowerCase(Locale.ROOT);
+        for (TableKind k : values()) {
+            if (name.contains(k.word) || name.contains(k.word.substring(0, k.word.length() - 1))) {
+                return k;
+            }
+        }
+        if (header.contains("type") || header.contains("grip") || header.contains("hold_ref")) {
+            return HOLDS;
+        }
+        if (header.contains("grade") || header.contains("route")) {
+            return ROUTES;
+        }
+        return WALLS;
+    }
+}
