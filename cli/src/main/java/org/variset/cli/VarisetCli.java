@@ -1,5 +1,7 @@
 package org.variset.cli;
 
+import java.io.BufferedReader;
+import java.io.InputStreamReader;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
@@ -13,13 +15,15 @@ import picocli.CommandLine;
  * Runs one Variset command in-process, with its environment injected so that tests control the archive
  * location, the clock and the output streams.
  *
+ * @param in where confirmations are read from
  * @param out where results go
  * @param err where messages, warnings and progress go
  * @param env the environment variables
  * @param home the user's home folder
  * @param clock the clock that decides "today"
  */
-public record VarisetCli(PrintWriter out, PrintWriter err, Map<String, String> env, Path home, Clock clock) {
+public record VarisetCli(BufferedReader in, PrintWriter out, PrintWriter err, Map<String, String> env, Path home,
+        Clock clock) {
 
     static {
         // Hibernate logs through JBoss Logging; send it to java.util.logging, which RootCommand keeps quiet.
@@ -28,6 +32,7 @@ public record VarisetCli(PrintWriter out, PrintWriter err, Map<String, String> e
 
     /** Checks the fields. */
     public VarisetCli {
+        Objects.requireNonNull(in, "in");
         Objects.requireNonNull(out, "out");
         Objects.requireNonNull(err, "err");
         Objects.requireNonNull(env, "env");
@@ -37,7 +42,8 @@ public record VarisetCli(PrintWriter out, PrintWriter err, Map<String, String> e
 
     /** The real console, environment, home folder and clock. */
     public static VarisetCli system() {
-        return new VarisetCli(new PrintWriter(System.out, true, StandardCharsets.UTF_8),
+        return new VarisetCli(new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8)),
+                new PrintWriter(System.out, true, StandardCharsets.UTF_8),
                 new PrintWriter(System.err, true, StandardCharsets.UTF_8), System.getenv(),
                 Path.of(System.getProperty("user.home")), Clock.systemUTC());
     }

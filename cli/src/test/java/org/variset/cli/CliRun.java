@@ -2,7 +2,9 @@ package org.variset.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.io.BufferedReader;
 import java.io.PrintWriter;
+import java.io.StringReader;
 import java.io.StringWriter;
 import java.nio.file.Path;
 import java.time.Clock;
@@ -26,9 +28,15 @@ public record CliRun(String[] args, int exit, String out, String err) {
 
     /** Runs a command with the given environment and home folder. */
     public static CliRun run(Map<String, String> env, Path home, String... args) {
+        return withInput("", env, home, args);
+    }
+
+    /** Runs a command that reads the given text from standard input (confirmations). */
+    public static CliRun withInput(String input, Map<String, String> env, Path home, String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int exit = new VarisetCli(new PrintWriter(out, true), new PrintWriter(err, true), env, home, CLOCK).run(args);
+        int exit = new VarisetCli(new BufferedReader(new StringReader(input)), new PrintWriter(out, true),
+                new PrintWriter(err, true), env, home, CLOCK).run(args);
         return new CliRun(args, exit, out.toString(), err.toString());
     }
 

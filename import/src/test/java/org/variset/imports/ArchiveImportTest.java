@@ -50,7 +50,7 @@ class ArchiveImportTest {
     }
 
     private Route route(String label) {
-        return archive.inTransaction(s -> {
+        return archive.fromTransaction(s -> {
             Route r = s.createSelectionQuery("from Route where label = :l", Route.class).setParameter("l", label)
                     .getSingleResult();
             r.holds().size();

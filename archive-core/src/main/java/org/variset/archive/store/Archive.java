@@ -181,7 +181,7 @@ public final class Archive implements AutoCloseable {
     }
 
     /** Runs work in one transaction: committed when it returns, rolled back when it throws. */
-    public <T> T inTransaction(Function<Session, T> work) {
+    public <T> T fromTransaction(Function<Session, T> work) {
         return sessionFactory().fromTransaction(work);
     }
 

@@ -43,6 +43,19 @@ public final class Vocabulary {
         return Optional.ofNullable(spellingToTerm.get(field).get(key(text)));
     }
 
+    /**
+     * The term a text spells, or for a term the vocabulary does not know, the text itself in lower case with
+     * single spaces (so that later spellings of it compare equal).
+     */
+    public String termOrAsWritten(VocabularyField field, String text) {
+        return canonical(field, text).orElse(key(text));
+    }
+
+    /** True when the field lists a term for the text. */
+    public boolean knows(VocabularyField field, String text) {
+        return spellingToTerm.get(field).containsKey(key(text));
+    }
+
     /** The canonical terms of a field, in the order they were listed. */
     public List<String> terms(VocabularyField field) {
         return terms.get(field);

@@ -93,7 +93,7 @@ class ArchivePersistenceTest {
     @Nested
     class StandingSet {
         private List<String> standingOn(LocalDate d) {
-            return archive.inTransaction(s -> {
+            return archive.fromTransaction(s -> {
                 ArchiveQueries q = new ArchiveQueries(s);
                 Gym gym = q.gym(ResetFixture.GYM).orElseThrow();
                 return q.standingSet(gym, d).stream().map(Route::label).toList();

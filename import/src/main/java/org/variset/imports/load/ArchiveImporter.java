@@ -60,7 +60,7 @@ public final class ArchiveImporter {
         Plan plan = new Plan(options, new ProblemList());
         RowParser parser = new RowParser(options.vocabulary(), plan.problems);
         read(sources, parser, plan);
-        return archive.inTransaction(session -> {
+        return archive.fromTransaction(session -> {
             RouteResolver resolver = new RouteResolver(session, plan.routes.keySet());
             checkHolds(sources, parser, resolver, plan, progress);
             refuseUnlessSkipping(plan);

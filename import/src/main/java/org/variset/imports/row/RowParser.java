@@ -165,14 +165,11 @@ public final class RowParser {
     private List<String> terms(CellReader c, VocabularyField field, String column) {
         List<String> out = new ArrayList<>();
         for (String t : c.list(column)) {
-            var term = vocabulary.canonical(field, t);
-            if (term.isPresent()) {
-                out.add(term.get());
-            } else {
-                String kept = t.strip().replaceAll("\\s+", " ").toLowerCase(java.util.Locale.ROOT);
-                unknownTerms.add(column.substring(0, column.length() - 1) + ": " + kept);
-                out.add(kept);
+            String term = vocabulary.termOrAsWritten(field, t);
+            if (!vocabulary.knows(field, t)) {
+                unknownTerms.add(column.substring(0, column.length() - 1) + ": " + term);
             }
+            out.add(term);
         }
         return out;
     }

@@ -1,0 +1,53 @@
+package org.variset.archive.change;
+
+import java.util.List;
+import org.hibernate.Session;
+import org.variset.archive.gym.Gym;
+import org.variset.archive.gym.Wall;
+import org.variset.archive.store.ArchiveQueries;
+
+/**
+ * Finds the gym and wall a command names, with messages that list what there is. The gym may be left out when
+ * the archive holds only one.
+ */
+public final class GymLookup {
+    private final ArchiveQueries q;
+
+    /** Lookups in a session. */
+    public GymLookup(Session session) {
+        this.q = new ArchiveQueries(session);
+    }
+
+    /**
+     * The named gym, or the only one.
+     *
+     * @throws IllegalArgumentException naming the gyms there are
+     */
+    public Gym gym(String name) {
+        List<Gym> gyms = q.gyms();
+        if (name == null) {
+            if (gyms.size() == 1) {
+                return gyms.get(0);
+            }
+            throw new IllegalArgumentException(gyms.isEmpty() ? "the archive holds no gym yet (import a file first)"
+                    : "name the gym with --gym (the archive holds " + names(gyms) + ")");
+        }
+        return q.gym(name).orElseThrow(() -> new IllegalArgumentException("no gym named '" + name
+                + "' (the archive holds " + (gyms.isEmpty() ? "none" : names(gyms)) + ")"));
+    }
+
+    /**
+     * The named wall of the gym.
+     *
+     * @throws IllegalArgumentException naming the gym's walls
+     */
+    public Wall wall(Gym gym, String name) {
+        return q.wall(gym, name).orElseThrow(() -> new IllegalArgumentException("no wall named '" + name + "' in "
+                + gym.name() + " (walls: " + String.join(", ", q.walls(gym).stream().map(Wall::name).toList())
+                + ")"));
+    }
+
+    private static String names(List<Gym> gyms) {
+        return String.join(", ", gyms.stream().map(Gym::name).toList());
+    }
+}

@@ -1,0 +1,72 @@
+package org.variset.archive.change;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.hibernate.Session;
+import org.variset.archive.route.Route;
+import org.variset.archive.route.Setter;
+
+/** Renaming a setter, or merging two names of one person ("K. Ames" and "Kit Ames"), across the archive. */
+public final class SetterChanges {
+    private SetterChanges() {
+    }
+
+    /**
+     * Renames a setter everywhere.
+     *
+     * @throws IllegalArgumentException when the old name is unknown, or the new one is taken (merge instead)
+     */
+    public static void rename(Session s, String from, String to) {
+        Setter old = find(s, from);
+        if (findOrNull(s, to) != null) {
+            throw new IllegalArgumentException("a setter named '" + to.strip() + "' exists already; to make the two "
+                    + "one person, merge them: variset setter merge \"" + from + "\" \"" + to + "\"");
+        }
+        old.rename(to);
+    }
+
+    /**
+     * Gives every route of one setter to another and removes the first.
+     *
+     * @return how many routes changed
+     * @throws IllegalArgumentException when a name is unknown or both are the same
+     */
+    public static int merge(Session s, String from, String into) {
+        Setter gone = find(s, from);
+        Setter kept = find(s, into);
+        if (gone.id().equals(kept.id())) {
+            throw new IllegalArgumentException("'" + from + "' and '" + into + "' are the same setter");
+        }
+        List<Route> routes = s.createSelectionQuery("select r from Route r join r.setters x where x = :s",
+                Route.class).setParameter("s", gone).getResultList();
+        for (Route r : routes) {
+            List<Setter> next = new ArrayList<>();
+            for (Setter x : r.setters()) {
+                Setter y = x.id().equals(gone.id()) ? kept : x;
+                if (!next.contains(y)) {
+                    next.add(y);
+                }
+            }
+            r.setSetters(next);
+        }
+        s.flush();
+        s.remove(gone);
+        return routes.size();
+    }
+
+    private static Setter find(Session s, String name) {
+        Setter x = findOrNull(s, name);
+        if (x == null) {
+            List<String> all = s.createSelectionQuery("select name from Setter order by name", String.class)
+                    .getResultList();
+            throw new IllegalArgumentException("no setter named '" + name + "' (setters: " + String.join(", ", all)
+                    + ")");
+        }
+        return x;
+    }
+
+    private static Setter findOrNull(Session s, String name) {
+        return s.createSelectionQuery("from Setter where name = :n", Setter.class).setParameter("n", name.strip())
+                .uniqueResult();
+    }
+}

@@ -1,0 +1,47 @@
+package org.variset.archive.change;
+
+import java.time.LocalDate;
+import java.util.List;
+import org.hibernate.Session;
+import org.variset.archive.gym.Wall;
+import org.variset.archive.route.Route;
+
+/**
+ * Takes a wall's old routes down when it is reset: every route of the wall set before the date and still up
+ * that day gets the date as its strip date; routes set on the date are the new set and stay.
+ */
+public final class WallStrip {
+
+    /**
+     * What a strip did.
+     *
+     * @param stripped routes marked as stripped on the date
+     * @param setThatDay routes set on the date, left up
+     * @param alreadyDown routes set before the date that were already down
+     */
+    public record Result(int stripped, int setThatDay, int alreadyDown) {
+    }
+
+    private WallStrip() {
+    }
+
+    /** Strips the wall on a date, in the caller's transaction. */
+    public static Result strip(Session session, Wall wall, LocalDate on) {
+        List<Route> routes = session.createSelectionQuery("from Route where wall = :w and setOn <= :d", Route.class)
+                .setParameter("w", wall).setParameter("d", on).getResultList();
+        int stripped = 0;
+        int same = 0;
+        int down = 0;
+        for (Route r : routes) {
+            if (r.setOn().equals(on)) {
+                same++;
+            } else if (r.standingOn(on)) {
+                r.setStrippedOn(on);
+                stripped++;
+            } else {
+                down++;
+            }
+        }
+        return new Result(stripped, same, down);
+    }
+}

@@ -1,0 +1,102 @@
+package org.variset.cli.command;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.hibernate.Session;
+import org.variset.archive.change.GymLookup;
+import org.variset.archive.change.RouteRemoval;
+import org.variset.archive.gym.Gym;
+import org.variset.archive.route.Route;
+import org.variset.archive.store.Archive;
+import org.variset.cli.ExitCode;
+import org.variset.imports.ProblemList;
+import org.variset.imports.ImportException;
+import org.variset.imports.load.RouteKeys;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** Takes back a mistaken import: a reset by its label, or the routes a file lists. */
+@Command(name = "remove", mixinStandardHelpOptions = true,
+        description = {"Take back a mistaken import: remove the routes of a reset (by its label), or the routes a "
+                + "routes file lists, with their holds. Shows what will go and asks first; --yes answers for "
+                + "scripts."},
+        footer = {"", "Examples:", "  variset remove --reset \"Cave 2026-03-02\"",
+            "  variset remove --file routes.csv --yes"})
+final class RemoveCommand extends VarisetSubcommand {
+    static final class Target {
+        @Option(names = "--reset", paramLabel = "LABEL", description = "The reset's label.")
+        String reset;
+
+        @Option(names = "--file", paramLabel = "FILE", description = "A routes file (CSV, XLSX or JSON) whose "
+                + "routes to remove.")
+        Path file;
+    }
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Target target;
+
+    @Option(names = "--gym", paramLabel = "GYM", description = "The gym (needed when the archive holds several).")
+    String gym;
+
+    @Option(names = "--yes", description = "Remove without asking.")
+    boolean yes;
+
+    @Override
+    ExitCode execute() {
+        try (Archive archive = openArchive()) {
+            RouteRemoval.Plan plan = archive.fromTransaction(s -> RouteRemoval.preview(s, routes(s)));
+            if (plan.routes().isEmpty()) {
+                out().println("Nothing to remove: no archived route matches.");
+                return ExitCode.OK;
+            }
+            out().println("This removes " + plan.routes().size() + " routes and " + plan.holds() + " holds"
+                    + (plan.emptiedResets().isEmpty() ? "" : ", and the resets " + String.join(", ",
+                            plan.emptiedResets())) + ":");
+            plan.routes().stream().limit(20).forEach(r -> out().println("  " + r));
+            if (plan.routes().size() > 20) {
+                out().println("  ... and " + (plan.routes().size() - 20) + " more");
+            }
+            if (!yes && !confirmed()) {
+                out().println("Nothing removed.");
+                return ExitCode.OK;
+            }
+            RouteRemoval.Plan done = archive.fromTransaction(s -> RouteRemoval.remove(s, routes(s)));
+            out().println("Removed " + done.routes().size() + " routes and " + done.holds() + " holds.");
+        }
+        return ExitCode.OK;
+    }
+
+    private boolean confirmed() {
+        out().print("Remove them? [y/N] ");
+        out().flush();
+        try {
+            String answer = root().cli().in().readLine();
+            return answer != null && answer.strip().toLowerCase(java.util.Locale.ROOT).startsWith("y");
+        } catch (IOException e) {
+            return false;
+        }
+    }
+
+    private List<Route> routes(Session s) {
+        GymLookup lookup = new GymLookup(s);
+        if (target.reset != null) {
+            return RouteRemoval.ofReset(s, lookup.gym(gym), target.reset);
+        }
+        ProblemList problems = new ProblemList();
+        List<Route> out = new ArrayList<>();
+        for (var key : RouteKeys.read(target.file, problems)) {
+            Gym g = lookup.gym(key.gym());
+            s.createSelectionQuery("from Route r where r.gym = :g and r.wall.name = :w and r.label = :l"
+                    + " and r.setOn = :d", Route.class).setParameter("g", g).setParameter("w", key.wall())
+                    .setParameter("l", key.label()).setParameter("d", key.setOn()).uniqueResultOptional()
+                    .ifPresent(out::add);
+        }
+        if (!problems.isEmpty()) {
+            throw new ImportException(problems);
+        }
+        return out;
+    }
+}

@@ -1,0 +1,43 @@
+package org.variset.cli.command;
+
+import java.time.LocalDate;
+import org.variset.archive.change.GymLookup;
+import org.variset.archive.change.WallStrip;
+import org.variset.archive.gym.Wall;
+import org.variset.archive.store.Archive;
+import org.variset.cli.ExitCode;
+import org.variset.cli.convert.DateConverter;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** Marks a wall's old routes as stripped on the day it was reset. */
+@Command(name = "strip", mixinStandardHelpOptions = true,
+        description = {"Take a wall's old routes down: every route of the wall set before DATE and still up gets "
+                + "DATE as its strip date. Routes set on DATE (the new set) stay up."},
+        footer = {"", "Example:", "  variset strip --wall \"Cave\" --on 2026-04-06"})
+final class StripCommand extends VarisetSubcommand {
+    @Option(names = "--gym", paramLabel = "GYM", description = "The gym (needed when the archive holds several).")
+    String gym;
+
+    @Option(names = "--wall", required = true, paramLabel = "WALL", description = "The wall that was reset.")
+    String wall;
+
+    @Option(names = "--on", required = true, paramLabel = "DATE", converter = DateConverter.class,
+            description = "The day the old routes came down.")
+    LocalDate on;
+
+    @Override
+    ExitCode execute() {
+        WallStrip.Result r;
+        try (Archive archive = openArchive()) {
+            r = archive.fromTransaction(s -> {
+                GymLookup lookup = new GymLookup(s);
+                Wall w = lookup.wall(lookup.gym(gym), wall);
+                return WallStrip.strip(s, w, on);
+            });
+        }
+        out().println("Stripped " + r.stripped() + " routes of " + wall + " on " + on + "; " + r.setThatDay()
+                + " set that day stay up; " + r.alreadyDown() + " were already down.");
+        return ExitCode.OK;
+    }
+}

@@ -1,0 +1,113 @@
+package org.variset.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The commands a setting team uses between imports, on the spec's example files. */
+class DayToDayCommandsTest {
+    @TempDir
+    Path home;
+    private String archive;
+
+    private static Path example(String name) {
+        Path p = Path.of("../../shared/spec/examples", name);
+        return Files.exists(p) ? p : Path.of("../shared/spec/examples", name);
+    }
+
+    private CliRun run(String... args) {
+        String[] all = new String[args.length + 2];
+        all[0] = "--archive";
+        all[1] = archive;
+        System.arraycopy(args, 0, all, 2, args.length);
+        return CliRun.run(home, all);
+    }
+
+    @BeforeEach
+    void importExamples() {
+        archive = home.resolve("a").toString();
+        run("init").exits(ExitCode.OK);
+        CliRun r = run("import", example("routes.csv").toString(), example("holds.csv").toString())
+                .exits(ExitCode.OK);
+        assertThat(r.out()).contains("3 routes new").contains("10 holds written");
+    }
+
+    @Test
+    void reportsAnUnchangedSecondImportAndJsonCounts() throws Exception {
+        CliRun r = run("import", example("routes.csv").toString(), "--format", "json").exits(ExitCode.OK);
+        var j = new ObjectMapper().readTree(r.out());
+        assertThat(j.at("/routes/unchanged").asInt()).isEqualTo(3);
+        assertThat(j.at("/routes/new").asInt()).isZero();
+    }
+
+    @Test
+    void listsLocatedProblemsForABadFileAndWritesNothing() throws Exception {
+        Path bad = Files.writeString(home.resolve("routes.csv"), "gym,wall,route,set_on,discipline,grade\n"
+                + "Example Gym,North Arch,N9,2026-02-30,boulder,V2\n");
+        CliRun r = run("import", bad.toString()).exits(ExitCode.BAD_INPUT);
+        assertThat(r.err()).contains(bad + ":2: set_on: no such date '2026-02-30'");
+        assertThat(r.err()).doesNotContain("\tat ");
+        assertThat(run("info", "--format", "json").out()).contains("\"routes\" : 3");
+    }
+
+    @Test
+    void stripsAWallsOldRoutesOnResetDay() {
+        CliRun r = run("strip", "--wall", "South Lead", "--on", "2026-04-01").exits(ExitCode.OK);
+        assertThat(r.out()).contains("Stripped 1 routes").contains("0 set that day");
+        CliRun again = run("strip", "--wall", "North Arch", "--on", "2026-03-02").exits(ExitCode.OK);
+        assertThat(again.out()).contains("Stripped 0 routes").contains("2 set that day stay up");
+    }
+
+    @Test
+    void correctsOneRouteAndMergesSetters() {
+        run("amend", "N1", "--wall", "North Arch", "--set-on", "2026-03-02", "--grade", "V3", "--setters",
+                "K. Ames").exits(ExitCode.OK);
+        CliRun merge = run("setter", "merge", "K. Ames", "Kit Ames").exits(ExitCode.OK);
+        assertThat(merge.out()).contains("1 routes now name 'Kit Ames'");
+        CliRun rename = run("setter", "rename", "Rui Sol", "Kit Ames").exits(ExitCode.BAD_INPUT);
+        assertThat(rename.err()).contains("exists already").contains("setter merge");
+    }
+
+    @Test
+    void asksBeforeRemovingAResetAndRemovesWithYes() {
+        CliRun no = CliRun.withInput("n\n", Map.of(), home, "--archive", archive, "remove", "--reset",
+                "N-2026-03-02").exits(ExitCode.OK);
+        assertThat(no.out()).contains("This removes 2 routes and 8 holds").contains("Nothing removed");
+        CliRun yes = run("remove", "--reset", "N-2026-03-02", "--yes").exits(ExitCode.OK);
+        assertThat(yes.out()).contains("Removed 2 routes and 8 holds");
+        assertThat(run("info", "--format", "json").out()).contains("\"routes\" : 1").contains("\"resets\" : 1");
+    }
+
+    @Test
+    void removesTheRoutesAFileBrought() {
+        run("remove", "--file", example("routes.csv").toString(), "--yes").exits(ExitCode.OK);
+        assertThat(run("info", "--format", "json").out()).contains("\"routes\" : 0").contains("\"holds\" : 0");
+    }
+
+    @Test
+    void exportsAndRefusesToOverwrite() {
+        Path out = home.resolve("export");
+        run("export", "--gym", "Example Gym", "--format", "csv", "--out", out.toString()).exits(ExitCode.OK);
+        assertThat(out.resolve("holds.csv")).exists();
+        CliRun again = run("export", "--gym", "Example Gym", "--format", "csv", "--out", out.toString())
+                .exits(ExitCode.BAD_INPUT);
+        assertThat(again.err()).contains("--force");
+    }
+
+    @Test
+    void writesTemplatesThatImportCleanly() {
+        Path t = home.resolve("t");
+        CliRun.run(home, "template", "--format", "csv", "--out", t.toString()).exits(ExitCode.OK);
+        CliRun r = run("import", t.resolve("walls.csv").toString(), t.resolve("routes.csv").toString(),
+                t.resolve("holds.csv").toString()).exits(ExitCode.OK);
+        assertThat(r.out()).contains("1 routes new").contains("1 holds written");
+        CliRun.run(home, "template", "--format", "xlsx", "--out", t.toString()).exits(ExitCode.OK);
+        assertThat(t.resolve("variset-template.xlsx")).exists();
+    }
+}
