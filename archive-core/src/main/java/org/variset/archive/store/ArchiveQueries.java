@@ -91,6 +91,13 @@ public final class ArchiveQueries {
                 .setParameter("gym", gym).setParameter("from", from).setParameter("to", to).getResultList();
     }
 
+    /** The route with that key, named by gym and wall names (unique index route_key_unique). */
+    public Optional<Route> route(String gym, String wall, String label, LocalDate setOn) {
+        return session.createSelectionQuery("from Route r where r.gym.name = :g and r.wall.name = :w"
+                + " and r.label = :l and r.setOn = :s", Route.class).setParameter("g", gym).setParameter("w", wall)
+                .setParameter("l", label).setParameter("s", setOn).uniqueResultOptional();
+    }
+
     /** The route with that key (unique index route_key_unique). */
     public Optional<Route> route(Wall wall, String label, LocalDate setOn) {
         return session.createSelectionQuery("from Route where wall = :wall and label = :label and setOn = :s",

@@ -10,6 +10,7 @@ import org.variset.archive.change.RouteRemoval;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.route.Route;
 import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveQueries;
 import org.variset.cli.ExitCode;
 import org.variset.imports.ProblemList;
 import org.variset.imports.ImportException;
@@ -89,10 +90,7 @@ final class RemoveCommand extends VarisetSubcommand {
         List<Route> out = new ArrayList<>();
         for (var key : RouteKeys.read(target.file, problems)) {
             Gym g = lookup.gym(key.gym());
-            s.createSelectionQuery("from Route r where r.gym = :g and r.wall.name = :w and r.label = :l"
-                    + " and r.setOn = :d", Route.class).setParameter("g", g).setParameter("w", key.wall())
-                    .setParameter("l", key.label()).setParameter("d", key.setOn()).uniqueResultOptional()
-                    .ifPresent(out::add);
+            new ArchiveQueries(s).route(g.name(), key.wall(), key.label(), key.setOn()).ifPresent(out::add);
         }
         if (!problems.isEmpty()) {
             throw new ImportException(problems);

@@ -16,7 +16,7 @@ import picocli.CommandLine.ScopeType;
         header = "Variset: the archive of a gym's route setting, and variety audits of every reset.",
         description = {"", "Keeps every reset, route and hold placement in an archive, and audits resets for "
                 + "variety of grip directions, holds, moves and grades.", ""},
-        subcommands = {InitCommand.class, InfoCommand.class, ImportCommand.class, ExportCommand.class,
+        subcommands = {DemoCommand.class, InitCommand.class, InfoCommand.class, ImportCommand.class, ExportCommand.class,
             StripCommand.class, RemoveCommand.class, AmendCommand.class, SetterCommand.class, TemplateCommand.class,
             GradeCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit status:%n",

@@ -15,6 +15,7 @@ import org.variset.archive.gym.Wall;
 import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Route;
 import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveQueries;
 import org.variset.imports.ImportException;
 import org.variset.imports.ProblemList;
 import org.variset.imports.row.HoldRow;
@@ -64,7 +65,7 @@ public final class ArchiveImporter {
             RouteResolver resolver = new RouteResolver(session, plan.routes.keySet());
             checkHolds(sources, parser, resolver, plan, progress);
             refuseUnlessSkipping(plan);
-            new Comparison(session, plan).run();
+            new Comparison(session, plan, resolver).run();
             refuseUnlessSkipping(plan);
             if (plan.options.dryRun()) {
                 return plan.summary(plan.holdCount(), plan.newWalls.size(), extraColumns, parser.unknownTerms());
@@ -195,10 +196,10 @@ public final class ArchiveImporter {
     }
 
     /** Compares the plan's routes and walls with the archive. */
-    private record Comparison(Session session, Plan plan) {
+    private record Comparison(Session session, Plan plan, RouteResolver resolver) {
         void run() {
             for (RouteRow row : plan.routes.values()) {
-                Route existing = find(row.key());
+                Route existing = resolver.archived(row.key()) ? find(row.key()) : null;
                 if (existing == null) {
                     plan.newRoutes.add(row.key());
                     continue;
@@ -222,12 +223,12 @@ public final class ArchiveImporter {
         /** A reset label belongs to one wall of its gym (interchange.md), in the file and in the archive. */
         private void checkResets() {
             Map<List<String>, RouteRow> first = new HashMap<>();
+            Map<String, Map<String, String>> archivedResets = new HashMap<>();
             for (RouteRow row : plan.routes.values()) {
                 List<String> label = List.of(row.key().gym(), row.reset());
                 RouteRow other = first.putIfAbsent(label, row);
-                String archived = other != null ? null : session.createSelectionQuery("select r.wall.name from"
-                        + " Reset r where r.gym.name = :g and r.label = :l", String.class)
-                        .setParameter("g", row.key().gym()).setParameter("l", row.reset()).uniqueResult();
+                String archived = other != null ? null : archivedResets.computeIfAbsent(row.key().gym(),
+                        this::resetWalls).get(row.reset());
                 String wall = other != null ? other.key().wall() : archived;
                 if (wall != null && !wall.equals(row.key().wall())) {
                     plan.problems.add(row.file(), row.line(), "reset", "reset '" + row.reset() + "' belongs to wall "
@@ -252,6 +253,15 @@ public final class ArchiveImporter {
                         parseLine(where), "route", "changes the archived " + key + ": " + String.join("; ", diff)
                                 + " (give --update to replace it)");
             }
+        }
+
+        /** Reset label to wall name, for one gym, with one query. */
+        private Map<String, String> resetWalls(String gym) {
+            Map<String, String> out = new HashMap<>();
+            session.createSelectionQuery("select r.label, r.wall.name from Reset r where r.gym.name = :g",
+                    Object[].class).setParameter("g", gym).getResultList()
+                    .forEach(row -> out.put((String) row[0], (String) row[1]));
+            return out;
         }
 
         private static int parseLine(String where) {
@@ -301,10 +311,7 @@ public final class ArchiveImporter {
         }
 
         private Route find(RouteKey k) {
-            return session.createSelectionQuery("from Route r where r.gym.name = :g and r.wall.name = :w"
-                    + " and r.label = :l and r.setOn = :s", Route.class).setParameter("g", k.gym())
-                    .setParameter("w", k.wall()).setParameter("l", k.label()).setParameter("s", k.setOn())
-                    .uniqueResult();
+            return new ArchiveQueries(session).route(k.gym(), k.wall(), k.label(), k.setOn()).orElse(null);
         }
     }
 }

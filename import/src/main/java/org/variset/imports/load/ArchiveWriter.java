@@ -10,6 +10,7 @@ import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
+import org.variset.archive.store.ArchiveQueries;
 import org.variset.imports.row.HoldRow;
 import org.variset.imports.row.RouteKey;
 import org.variset.imports.row.RouteRow;
@@ -61,6 +62,7 @@ final class ArchiveWriter {
                 Route r = new Route(reset(row), k.label(), k.setOn(), row.discipline(), row.grade());
                 fill(r, row);
                 session.persist(r);
+                routeIds.put(k, r.id());
             } else if (plan.changedRoutes.contains(k) && plan.options.update()) {
                 Route r = find(k);
                 r.setGrade(row.grade());
@@ -139,10 +141,7 @@ final class ArchiveWriter {
     }
 
     private Route find(RouteKey k) {
-        return session.createSelectionQuery("from Route r where r.gym.name = :g and r.wall.name = :w"
-                + " and r.label = :l and r.setOn = :s", Route.class).setParameter("g", k.gym())
-                .setParameter("w", k.wall()).setParameter("l", k.label()).setParameter("s", k.setOn())
-                .uniqueResult();
+        return new ArchiveQueries(session).route(k.gym(), k.wall(), k.label(), k.setOn()).orElse(null);
     }
 
     private Gym gym(String name) {

@@ -21,7 +21,7 @@ final class RouteResolver {
 
     private final Session session;
     private final Map<Name, List<RouteKey>> inFile = new HashMap<>();
-    private final Map<Name, List<RouteKey>> inArchive = new HashMap<>();
+    private final Map<String, Map<Name, List<RouteKey>>> archivedByGym = new HashMap<>();
 
     RouteResolver(Session session, Iterable<RouteKey> fileRoutes) {
         this.session = session;
@@ -59,11 +59,23 @@ final class RouteResolver {
         return null;
     }
 
+    /** True when the archive already holds a route with this key. */
+    boolean archived(RouteKey k) {
+        return archive(new Name(k.gym(), k.label(), k.setOn())).contains(k);
+    }
+
     private List<RouteKey> archive(Name n) {
-        return inArchive.computeIfAbsent(n, key -> session.createSelectionQuery(
-                "select r.wall.name from Route r where r.gym.name = :g and r.label = :l and r.setOn = :s",
-                String.class).setParameter("g", key.gym()).setParameter("l", key.label())
-                .setParameter("s", key.setOn()).getResultList().stream()
-                .map(w -> new RouteKey(key.gym(), w, key.label(), key.setOn())).toList());
+        return archivedByGym.computeIfAbsent(n.gym(), this::loadGym).getOrDefault(n, List.of());
+    }
+
+    /** Every route key of one gym, read once with one query (not one query per hold or route). */
+    private Map<Name, List<RouteKey>> loadGym(String gym) {
+        Map<Name, List<RouteKey>> out = new HashMap<>();
+        session.createSelectionQuery("select r.label, r.setOn, r.wall.name from Route r where r.gym.name = :g",
+                Object[].class).setParameter("g", gym).getResultList().forEach(row -> {
+                    RouteKey k = new RouteKey(gym, (String) row[2], (String) row[0], (LocalDate) row[1]);
+                    out.computeIfAbsent(new Name(gym, k.label(), k.setOn()), x -> new ArrayList<>()).add(k);
+                });
+        return out;
     }
 }
