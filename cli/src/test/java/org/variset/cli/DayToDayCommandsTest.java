@@ -17,8 +17,7 @@ class DayToDayCommandsTest {
     private String archive;
 
     private static Path example(String name) {
-        Path p = Path.of("../../shared/spec/examples", name);
-        return Files.exists(p) ? p : Path.of("../shared/spec/examples", name);
+        return Path.of("../import/src/test/resources/spec-examples", name);
     }
 
     private CliRun run(String... args) {

@@ -33,9 +33,8 @@ public final class ImportFiles {
         }
     }
 
-    /** The spec's examples folder (../shared/spec/examples from the module). */
+    /** One of the spec's example files, copied into {@code src/test/resources/spec-examples}. */
     public static Path specExample(String name) {
-        Path p = Path.of("../../shared/spec/examples", name);
-        return Files.exists(p) ? p : Path.of("../shared/spec/examples", name);
+        return Path.of("src/test/resources/spec-examples", name);
     }
 }
