@@ -1,0 +1,25 @@
+package org.variset.reports.scoring.grades;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * The default boulder target: VB 1, V0 2, V1 3, V2 4, V3 5, V4 6, V5 5, V6 4, V7 3, V8 1, V9 1 (out of 35),
+ * published as one gym's example in Outdoor Insider, Fall 2015, p. 15. Common practice, an example to replace
+ * with the gym's own; rope routes have no default.
+ */
+public final class TargetPyramid {
+    private TargetPyramid() {
+    }
+
+    /** The default boulder target as shares summing to 1, in band order. */
+    public static Map<String, Double> defaultBoulder() {
+        String[] bands = {"VB", "V0", "V1", "V2", "V3", "V4", "V5", "V6", "V7", "V8", "V9"};
+        int[] weights = {1, 2, 3, 4, 5, 6, 5, 4, 3, 1, 1};
+        Map<String, Double> out = new LinkedHashMap<>();
+        for (int i = 0; i < bands.length; i++) {
+            out.put(bands[i], weights[i] / 35.0);
+        }
+        return out;
+    }
+}

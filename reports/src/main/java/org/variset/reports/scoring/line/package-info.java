@@ -1,0 +1,2 @@
+/** The line a route takes (metrics.md section 6): path length, convex hull, geometric index of entropy, spans. */
+package org.variset.reports.scoring.line;

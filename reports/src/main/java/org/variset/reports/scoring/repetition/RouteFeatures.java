@@ -1,0 +1,58 @@
+package org.variset.reports.scoring.repetition;
+
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * The feature set of one route (metrics.md section 5): {@code hold:<type>@<sector>} for each grip of each
+ * hand-role placement ({@code hold:<type>@none} without a direction), {@code move:<descriptor>} for each move,
+ * {@code pair:<a>><b>} for each consecutive pair of moves, {@code angle:<band>} and {@code grade:<band>}.
+ *
+ * @param id what names the route in reports
+ * @param features the features
+ * @param detail how many distinct hold and move features it has (fewer than 4: too little detail to compare)
+ */
+public record RouteFeatures(String id, Set<String> features, int detail) {
+
+    /** Routes with fewer hold and move features than this are not compared (metrics.md). */
+    public static final int MIN_DETAIL = 4;
+
+    /**
+     * One hand-role placement's part of the features.
+     *
+     * @param type the hold type
+     * @param sectors the grip sectors 0..7 of its directions; empty for none
+     */
+    public record HandHold(String type, List<Integer> sectors) {
+    }
+
+    /** The features of a route. */
+    public static RouteFeatures of(String id, List<HandHold> handHolds, List<String> moves, String angleBand,
+            String gradeBand) {
+        Set<String> f = new LinkedHashSet<>();
+        for (HandHold h : handHolds) {
+            if (h.sectors().isEmpty()) {
+                f.add("hold:" + h.type() + "@none");
+            }
+            h.sectors().forEach(s -> f.add("hold:" + h.type() + "@" + s));
+        }
+        moves.forEach(m -> f.add("move:" + m));
+        for (int i = 1; i < moves.size(); i++) {
+            f.add("pair:" + moves.get(i - 1) + ">" + moves.get(i));
+        }
+        int detail = (int) f.stream().filter(x -> x.startsWith("hold:") || x.startsWith("move:")).count();
+        if (angleBand != null) {
+            f.add("angle:" + angleBand);
+        }
+        if (gradeBand != null) {
+            f.add("grade:" + gradeBand);
+        }
+        return new RouteFeatures(id, Set.copyOf(f), detail);
+    }
+
+    /** True when the route has enough detail to be compared. */
+    public boolean comparable() {
+        return detail >= MIN_DETAIL;
+    }
+}

@@ -1,0 +1,73 @@
+package org.variset.reports.scoring.score;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The composite score (metrics.md section 7): 100 × the weighted mean of the parts that are not null, the weights
+ * rescaled over those parts; null with fewer than three parts. Default weights: grip 0.25 (sector entropy), holds
+ * 0.20 (hold-type coverage), moves 0.20 (move coverage), grades 0.15 (exp(−emd_to_target) of the gym's standing
+ * set), novelty 0.20. A heuristic of ours, always shown beside its parts.
+ *
+ * @param score the score, or null
+ * @param parts each part's value in [0, 1] (null where undefined)
+ * @param weightsUsed the rescaled weights of the parts used
+ * @param dropped the parts left out because they were null
+ */
+public record CompositeScore(Double score, Map<String, Double> parts, Map<String, Double> weightsUsed,
+        List<String> dropped) {
+
+    /** The default weights, in the spec's order. */
+    public static Map<String, Double> defaultWeights() {
+        Map<String, Double> w = new LinkedHashMap<>();
+        w.put("grip", 0.25);
+        w.put("holds", 0.20);
+        w.put("moves", 0.20);
+        w.put("grades", 0.15);
+        w.put("novelty", 0.20);
+        return w;
+    }
+
+    /** The grades part from the standing set's distance to target: exp(−emd), null when the distance is. */
+    public static Double gradesPart(Double emdToTarget) {
+        return emdToTarget == null ? null : Math.exp(-emdToTarget);
+    }
+
+    /**
+     * The score of parts under weights.
+     *
+     * @throws IllegalArgumentException for a negative weight or a part outside [0, 1]
+     */
+    public static CompositeScore of(Map<String, Double> parts, Map<String, Double> weights) {
+        Map<String, Double> used = new LinkedHashMap<>();
+        List<String> dropped = new ArrayList<>();
+        double total = 0;
+        for (Map.Entry<String, Double> w : weights.entrySet()) {
+            if (w.getValue() < 0) {
+                throw new IllegalArgumentException("weight of " + w.getKey() + " is negative");
+            }
+            Double v = parts.get(w.getKey());
+            if (v == null) {
+                dropped.add(w.getKey());
+            } else if (v < 0 || v > 1 + 1e-12) {
+                throw new IllegalArgumentException("part " + w.getKey() + " = " + v + " is outside [0, 1]");
+            } else {
+                used.put(w.getKey(), w.getValue());
+                total += w.getValue();
+            }
+        }
+        if (used.size() < 3 || total <= 0) {
+            return new CompositeScore(null, new LinkedHashMap<>(parts), Map.of(), dropped);
+        }
+        double s = 0;
+        Map<String, Double> rescaled = new LinkedHashMap<>();
+        for (Map.Entry<String, Double> u : used.entrySet()) {
+            double w = u.getValue() / total;
+            rescaled.put(u.getKey(), w);
+            s += w * parts.get(u.getKey());
+        }
+        return new CompositeScore(100 * s, new LinkedHashMap<>(parts), rescaled, dropped);
+    }
+}
