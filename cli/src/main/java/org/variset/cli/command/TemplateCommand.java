@@ -1,7 +1,6 @@
 package org.variset.cli.command;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.List;
 import org.variset.cli.ExitCode;
@@ -31,7 +30,7 @@ final class TemplateCommand extends VarisetSubcommand {
         try {
             files = TemplateWriter.write(format, out, force);
         } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            throw new IllegalArgumentException("cannot write the templates into " + out + ": " + e.getMessage(), e);
         }
         out().println("Wrote " + String.join(", ", files.stream().map(Path::toString).toList()) + ".");
         return ExitCode.OK;
