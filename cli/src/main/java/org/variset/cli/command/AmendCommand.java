@@ -15,6 +15,7 @@ import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
 import org.variset.cli.convert.GradeScaleConverter;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -29,8 +30,8 @@ final class AmendCommand extends VarisetSubcommand {
     @Parameters(paramLabel = "ROUTE", description = "The route's label.")
     String label;
 
-    @Option(names = "--gym", paramLabel = "GYM", description = "The gym (needed when the archive holds several).")
-    String gym;
+    @Mixin
+    GymOptions gym;
 
     @Option(names = "--wall", required = true, paramLabel = "WALL", description = "The route's wall.")
     String wall;
@@ -83,7 +84,7 @@ final class AmendCommand extends VarisetSubcommand {
         try (Archive archive = openArchive()) {
             changed = archive.fromTransaction(s -> {
                 GymLookup lookup = new GymLookup(s);
-                Gym g = lookup.gym(gym);
+                Gym g = lookup.gym(gym.gym);
                 Wall w = lookup.wall(g, wall);
                 Route r = new org.variset.archive.store.ArchiveQueries(s).route(w, label, setOn).orElseThrow(() ->
                         new IllegalArgumentException("no route '" + label + "' set on " + setOn + " on " + wall));

@@ -17,6 +17,7 @@ import org.variset.imports.ImportException;
 import org.variset.imports.load.RouteKeys;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Takes back a mistaken import: a reset by its label, or the routes a file lists. */
@@ -39,8 +40,8 @@ final class RemoveCommand extends VarisetSubcommand {
     @ArgGroup(exclusive = true, multiplicity = "1")
     Target target;
 
-    @Option(names = "--gym", paramLabel = "GYM", description = "The gym (needed when the archive holds several).")
-    String gym;
+    @Mixin
+    GymOptions gym;
 
     @Option(names = "--yes", description = "Remove without asking.")
     boolean yes;
@@ -84,7 +85,7 @@ final class RemoveCommand extends VarisetSubcommand {
     private List<Route> routes(Session s) {
         GymLookup lookup = new GymLookup(s);
         if (target.reset != null) {
-            return RouteRemoval.ofReset(s, lookup.gym(gym), target.reset);
+            return RouteRemoval.ofReset(s, lookup.gym(gym.gym), target.reset);
         }
         ProblemList problems = new ProblemList();
         List<Route> out = new ArrayList<>();

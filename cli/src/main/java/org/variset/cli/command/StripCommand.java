@@ -8,6 +8,7 @@ import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Marks a wall's old routes as stripped on the day it was reset. */
@@ -16,8 +17,8 @@ import picocli.CommandLine.Option;
                 + "DATE as its strip date. Routes set on DATE (the new set) stay up."},
         footer = {"", "Example:", "  variset strip --wall \"Cave\" --on 2026-04-06"})
 final class StripCommand extends VarisetSubcommand {
-    @Option(names = "--gym", paramLabel = "GYM", description = "The gym (needed when the archive holds several).")
-    String gym;
+    @Mixin
+    GymOptions gym;
 
     @Option(names = "--wall", required = true, paramLabel = "WALL", description = "The wall that was reset.")
     String wall;
@@ -32,7 +33,7 @@ final class StripCommand extends VarisetSubcommand {
         try (Archive archive = openArchive()) {
             r = archive.fromTransaction(s -> {
                 GymLookup lookup = new GymLookup(s);
-                Wall w = lookup.wall(lookup.gym(gym), wall);
+                Wall w = lookup.wall(lookup.gym(gym.gym), wall);
                 return WallStrip.strip(s, w, on);
             });
         }
