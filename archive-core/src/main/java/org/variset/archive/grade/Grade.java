@@ -36,6 +36,11 @@ public record Grade(
         }
     }
 
+    /** The IRCRA value as people read it: {@code 17}, {@code 15.5}. */
+    public String ircraText() {
+        return ircra == Math.rint(ircra) ? String.valueOf((long) ircra) : String.valueOf(ircra);
+    }
+
     /** The canonical grade with its scale, for people: {@code French 6a+}, {@code V4 (hard)}. */
     public String describe() {
         String flag = switch (modifier) {

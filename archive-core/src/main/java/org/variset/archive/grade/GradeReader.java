@@ -114,14 +114,10 @@ public final class GradeReader {
 
     private static String ambiguity(String token, Discipline discipline, List<Grade> fits) {
         String readings = fits.stream()
-                .map(g -> g.describe() + " (IRCRA " + formatLevel(g.ircra()) + ")")
+                .map(g -> g.describe() + " (IRCRA " + g.ircraText() + ")")
                 .collect(Collectors.joining(" or "));
         String where = discipline == null ? "" : " for a " + discipline.word() + " route";
         return "'" + token + "' fits more than one scale" + where + ": " + readings;
-    }
-
-    static String formatLevel(double v) {
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
     }
 
     /** One scale; a slash grade reads as the mean of its two grades, the second may be abbreviated (V3/4). */

@@ -94,7 +94,7 @@ final class GradeCommand extends VarisetSubcommand {
 
     private void printText(Grade g, Discipline d, List<GradeScale> targets) {
         StringBuilder head = new StringBuilder(g.text().strip() + ": " + g.describe() + ", IRCRA "
-                + level(g.ircra()));
+                + g.ircraText());
         if (d != null) {
             head.append(" (default ").append(d.word()).append(" band ").append(band(g, d)).append(')');
         }
@@ -133,9 +133,5 @@ final class GradeCommand extends VarisetSubcommand {
             converter.equivalents(g, s).forEach(a::add);
         }
         return o;
-    }
-
-    private static String level(double v) {
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
     }
 }

@@ -121,7 +121,7 @@ public final class ArchiveImporter {
                     HoldRow h = parser.hold(c.next());
                     RouteKey key = h == null ? null : resolver.resolve(h, plan.problems);
                     if (key != null) {
-                        plan.holds.computeIfAbsent(key, k -> new HoldDigest()).add(h.spec());
+                        plan.holds.computeIfAbsent(key, k -> new HoldDigest()).add(h.spec(), h.file(), h.line());
                     }
                     if (++n % PROGRESS_EVERY == 0) {
                         progress.advanced("checking holds", n);
@@ -206,12 +206,13 @@ public final class ArchiveImporter {
                 }
                 List<String> diff = new ArrayList<>(RouteDiff.between(existing, row));
                 holdDifference(existing, row.key()).ifPresent(diff::add);
-                classify(row.key(), row.where(), diff);
+                classify(row.key(), row.file(), row.line(), diff);
             }
             for (Map.Entry<RouteKey, HoldDigest> e : plan.holds.entrySet()) {
                 if (!plan.routes.containsKey(e.getKey())) {
                     Route existing = Objects.requireNonNull(find(e.getKey()), "resolved route");
-                    classify(e.getKey(), "holds file", holdDifference(existing, e.getKey()).stream().toList());
+                    classify(e.getKey(), e.getValue().firstFile(), e.getValue().firstLine(),
+                            holdDifference(existing, e.getKey()).stream().toList());
                 }
             }
             for (WallRow w : plan.walls.values()) {
@@ -239,19 +240,17 @@ public final class ArchiveImporter {
             }
         }
 
-        private void classify(RouteKey key, String where, List<String> diff) {
+        private void classify(RouteKey key, String file, int line, List<String> diff) {
             if (diff.isEmpty()) {
                 plan.unchanged++;
                 return;
             }
             plan.changedRoutes.add(key);
-            String line = key + " (" + where + "): " + String.join("; ", diff);
-            plan.changes.add(line);
+            plan.changes.add(key + " (" + file + ":" + line + "): " + String.join("; ", diff));
             if (!plan.options.update()) {
                 plan.refused.add(key);
-                plan.problems.add(where.contains(":") ? where.substring(0, where.lastIndexOf(':')) : where,
-                        parseLine(where), "route", "changes the archived " + key + ": " + String.join("; ", diff)
-                                + " (give --update to replace it)");
+                plan.problems.add(file, line, "route", "changes the archived " + key + ": " + String.join("; ", diff)
+                        + " (give --update to replace it)");
             }
         }
 
@@ -262,15 +261,6 @@ public final class ArchiveImporter {
                     Object[].class).setParameter("g", gym).getResultList()
                     .forEach(row -> out.put((String) row[0], (String) row[1]));
             return out;
-        }
-
-        private static int parseLine(String where) {
-            int colon = where.lastIndexOf(':');
-            try {
-                return colon < 0 ? 0 : Integer.parseInt(where.substring(colon + 1));
-            } catch (NumberFormatException e) {
-                return 0;
-            }
         }
 
         private java.util.Optional<String> holdDifference(Route existing, RouteKey key) {

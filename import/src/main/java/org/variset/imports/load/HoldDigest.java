@@ -15,6 +15,17 @@ final class HoldDigest {
     private long[] order = new long[4];
     private long[] hashes = new long[4];
     private int size;
+    private String firstFile = "";
+    private int firstLine;
+
+    /** Adds the next hold in file order, remembering where the first one was read (for messages). */
+    void add(HoldPlacement.Spec spec, String file, int line) {
+        if (size == 0) {
+            firstFile = file;
+            firstLine = line;
+        }
+        add(spec);
+    }
 
     /** Adds the next hold in file order. */
     void add(HoldPlacement.Spec spec) {
@@ -26,6 +37,16 @@ final class HoldDigest {
         order[size] = (seq << 32) | size;
         hashes[size] = hash(spec);
         size++;
+    }
+
+    /** The file of the first hold added, or empty. */
+    String firstFile() {
+        return firstFile;
+    }
+
+    /** The line of the first hold added, or 0. */
+    int firstLine() {
+        return firstLine;
     }
 
     /** How many holds were added. */

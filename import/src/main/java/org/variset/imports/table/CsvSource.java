@@ -17,7 +17,6 @@ import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 import java.util.stream.Collectors;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
@@ -225,10 +224,5 @@ public final class CsvSource implements RowSource {
                 // Read-only file: nothing to lose on a failed close.
             }
         }
-    }
-
-    /** The columns of the header, normalised. */
-    public Set<String> normalisedHeader() {
-        return header.stream().map(Columns::normalise).collect(Collectors.toSet());
     }
 }

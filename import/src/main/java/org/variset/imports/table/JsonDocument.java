@@ -53,7 +53,7 @@ public final class JsonDocument {
                         if ("routes".equals(field)) {
                             route(file, line, index++, node, routes, holds);
                         } else {
-                            walls.add(new TableRow(file, line, cells(node, "routes".equals(field)), false));
+                            walls.add(new TableRow(file, line, cells(node, false), false));
                         }
                     }
                 } else {
