@@ -7,7 +7,9 @@ import java.util.Set;
 /**
  * The feature set of one route (metrics.md section 5): {@code hold:<type>@<sector>} for each grip of each
  * hand-role placement ({@code hold:<type>@none} without a direction), {@code move:<descriptor>} for each move,
- * {@code pair:<a>><b>} for each consecutive pair of moves, {@code angle:<band>} and {@code grade:<band>}.
+ * {@code pair:<a>><b>} for each consecutive pair of moves, {@code angle:<band>} and {@code grade:<band>}. A sector
+ * is written as the direction of its centre in degrees ({@code crimp@0}, {@code pinch@90}), the notation search
+ * uses too, so that a setter reads the feature without a sector table.
  *
  * @param id what names the route in reports
  * @param features the features
@@ -22,7 +24,7 @@ public record RouteFeatures(String id, Set<String> features, int detail) {
      * One hand-role placement's part of the features.
      *
      * @param type the hold type
-     * @param sectors the grip sectors 0..7 of its directions; empty for none
+     * @param sectors the grip sectors 0..7 of its directions (metrics.md section 1); empty for none
      */
     public record HandHold(String type, List<Integer> sectors) {
     }
@@ -35,7 +37,7 @@ public record RouteFeatures(String id, Set<String> features, int detail) {
             if (h.sectors().isEmpty()) {
                 f.add("hold:" + h.type() + "@none");
             }
-            h.sectors().forEach(s -> f.add("hold:" + h.type() + "@" + s));
+            h.sectors().forEach(s -> f.add("hold:" + h.type() + "@" + sectorDegrees(s)));
         }
         moves.forEach(m -> f.add("move:" + m));
         for (int i = 1; i < moves.size(); i++) {
@@ -49,6 +51,14 @@ public record RouteFeatures(String id, Set<String> features, int detail) {
             f.add("grade:" + gradeBand);
         }
         return new RouteFeatures(id, Set.copyOf(f), detail);
+    }
+
+    /** The direction of a sector's centre in degrees: sector k faces 45k degrees. */
+    public static int sectorDegrees(int sector) {
+        if (sector < 0 || sector > 7) {
+            throw new IllegalArgumentException("sector " + sector + " is outside 0..7");
+        }
+        return 45 * sector;
     }
 
     /** True when the route has enough detail to be compared. */

@@ -11,6 +11,7 @@ import java.util.stream.LongStream;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvFileSource;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.variset.archive.grade.Band;
 import org.variset.archive.grade.BandSet;
@@ -20,6 +21,10 @@ class GradeDistributionTest {
     /** Four unit bands A..D centred on 0, 1, 2, 3. */
     private static final BandSet ABCD = new BandSet(List.of(new Band("A", null, 0.5), new Band("B", 0.5, 1.5),
             new Band("C", 1.5, 2.5), new Band("D", 2.5, null)));
+
+    /** Six unit bands 1..6 centred on 1..6. */
+    private static final BandSet SIX = new BandSet(List.of(new Band("1", null, 1.5), new Band("2", 1.5, 2.5),
+            new Band("3", 2.5, 3.5), new Band("4", 3.5, 4.5), new Band("5", 4.5, 5.5), new Band("6", 5.5, null)));
 
     /** perBand[b] routes of value b (or of value b + offset). */
     private static double[] values(int... perBand) {
@@ -70,12 +75,10 @@ class GradeDistributionTest {
     /** SciPy's documented example: {@code chisquare([16, 18, 16, 14, 12, 12])} gives 2.0 and p = 0.849145. */
     @Test
     void matchesScipysDocumentedChiSquareExample() {
-        BandSet six = new BandSet(List.of(new Band("1", null, 1.5), new Band("2", 1.5, 2.5), new Band("3", 2.5, 3.5),
-                new Band("4", 3.5, 4.5), new Band("5", 4.5, 5.5), new Band("6", 5.5, null)));
         double[] v = repeated(1, 16, 18, 16, 14, 12, 12);
         Map<String, Double> even = new LinkedHashMap<>();
-        six.labels().forEach(l -> even.put(l, 1.0));
-        GradeFigures g = GradeDistribution.of(v, six, even);
+        SIX.labels().forEach(l -> even.put(l, 1.0));
+        GradeFigures g = GradeDistribution.of(v, SIX, even);
         assertThat(g.chiSquare()).isCloseTo(2.0, within(1e-12));
         assertThat(g.chiSquareP()).isCloseTo(0.849145, within(5e-7));
         assertThat(g.chiSquareReliable()).isTrue();
@@ -133,6 +136,28 @@ class GradeDistributionTest {
             bcDistance += Math.abs(cum - cumC);
         }
         assertThat(ab).isLessThanOrEqualTo(ac + bcDistance + 1e-12);
+    }
+
+    /**
+     * Seeded random histograms against random targets over six unit-spaced bands; expected values from SciPy 1.17.1
+     * ({@code wasserstein_distance} with band indices as values and counts as weights, {@code chisquare} with
+     * N × target shares): src/test/resources/.../grades/make-scipy-cases.py, run as written in its first line.
+     * Tolerance 1e-12 relative for the statistic, 1e-9 absolute for p.
+     */
+    @ParameterizedTest(name = "case {index}")
+    @CsvFileSource(resources = "scipy-cases.csv", useHeadersInDisplayName = true)
+    void agreesWithScipy(String observed, String target, double emd, double chiSquare, double p) {
+        int[] obs = java.util.Arrays.stream(observed.split(";")).mapToInt(Integer::parseInt).toArray();
+        String[] t = target.split(";");
+        Map<String, Double> shares = new LinkedHashMap<>();
+        for (int i = 0; i < t.length; i++) {
+            shares.put(SIX.labels().get(i), Double.parseDouble(t[i]));
+        }
+        GradeFigures g = GradeDistribution.of(repeated(1, obs), SIX, shares);
+        assertThat(g.emdToTarget()).isCloseTo(emd, within(1e-12));
+        assertThat(g.chiSquare()).isCloseTo(chiSquare, org.assertj.core.data.Percentage.withPercentage(1e-10));
+        assertThat(g.chiSquareP()).isCloseTo(p, within(1e-9));
+        assertThat(g.chiSquareDf()).isEqualTo(5);
     }
 
     static Stream<Long> seeds() {

@@ -21,7 +21,7 @@ class RepetitionTest {
     void buildsTheNamespacedFeaturesOfTheSpec() {
         RouteFeatures f = route("Blue 7", List.of("heel hook", "dyno"), hold("crimp", 0), hold("pinch", 2, 6),
                 hold("volume"));
-        assertThat(f.features()).containsExactlyInAnyOrder("hold:crimp@0", "hold:pinch@2", "hold:pinch@6",
+        assertThat(f.features()).containsExactlyInAnyOrder("hold:crimp@0", "hold:pinch@90", "hold:pinch@270",
                 "hold:volume@none", "move:heel hook", "move:dyno", "pair:heel hook>dyno", "angle:2", "grade:V3");
         assertThat(f.detail()).isEqualTo(6);
     }
@@ -79,5 +79,26 @@ class RepetitionTest {
         assertThat(Repetition.holdReuseRate(List.of(Set.of("J12@0"), Set.of("P7@2", "P7@6"), Set.of()),
                 Set.of("J12@0", "P7@6"))).isCloseTo(2 / 3.0, within(1e-12));
         assertThat(Repetition.holdReuseRate(List.of(), Set.of())).isNull();
+    }
+
+    /**
+     * The threshold test is exact: for every shared ≤ union ≤ 150 and decimal thresholds, {@code atLeast} agrees with
+     * integer cross-multiplication shared × 10^k ≥ t × union (t × 10^-k the threshold). Common practice: comparing
+     * fractions by cross-multiplying integers.
+     */
+    @Test
+    void comparesEveryFractionWithTheThresholdExactly() {
+        for (String t : List.of("0.6", "0.7", "0.35", "0.55", "0.9", "0.123")) {
+            BigDecimal threshold = new BigDecimal(t);
+            long scale = BigDecimal.TEN.pow(threshold.scale()).longValueExact();
+            long numerator = threshold.unscaledValue().longValueExact();
+            for (int union = 1; union <= 150; union++) {
+                for (int shared = 0; shared <= union; shared++) {
+                    boolean expected = shared * scale >= numerator * union;
+                    assertThat(new Similarity(shared, union, Set.of()).atLeast(threshold))
+                            .as("%d/%d >= %s", shared, union, t).isEqualTo(expected);
+                }
+            }
+        }
     }
 }

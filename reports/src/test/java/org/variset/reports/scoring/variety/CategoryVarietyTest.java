@@ -10,6 +10,7 @@ import java.util.stream.LongStream;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvFileSource;
 import org.junit.jupiter.params.provider.MethodSource;
 
 class CategoryVarietyTest {
@@ -75,6 +76,29 @@ class CategoryVarietyTest {
         assertThat(v.hillN1()).isLessThanOrEqualTo(v.richness() + 1e-12);
         long[] reversed = LongStream.range(0, c.length).map(i -> c[c.length - 1 - (int) i]).toArray();
         assertThat(CategoryVariety.of(counts(reversed), 0, 12).shannon()).isEqualTo(v.shannon());
+    }
+
+    /**
+     * Seeded random count vectors, expected values from SciPy 1.17.1 ({@code scipy.stats.entropy}, NumPy sums):
+     * src/test/resources/.../variety/make-scipy-cases.py, run as written in its first line. Pielou is empty in the
+     * file (NaN there) for a single category, where it is undefined. Tolerance 1e-12.
+     */
+    @ParameterizedTest(name = "case {index}")
+    @CsvFileSource(resources = "scipy-cases.csv", useHeadersInDisplayName = true)
+    void agreesWithScipy(String counts, int richness, double shannon, double pielou, double giniSimpson, double n1,
+            double n2) {
+        long[] c = java.util.Arrays.stream(counts.split(";")).mapToLong(Long::parseLong).toArray();
+        VarietyFigures v = CategoryVariety.of(counts(c), 0, 14);
+        assertThat(v.richness()).isEqualTo(richness);
+        assertThat(v.shannon()).isCloseTo(shannon, within(1e-12));
+        if (Double.isNaN(pielou)) {
+            assertThat(v.pielou()).isNull();
+        } else {
+            assertThat(v.pielou()).isCloseTo(pielou, within(1e-12));
+        }
+        assertThat(v.giniSimpson()).isCloseTo(giniSimpson, within(1e-12));
+        assertThat(v.hillN1()).isCloseTo(n1, within(1e-11));
+        assertThat(v.hillN2()).isCloseTo(n2, within(1e-11));
     }
 
     static Stream<Long> seeds() {
