@@ -16,6 +16,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 import org.variset.archive.grade.Band;
 import org.variset.archive.grade.BandSet;
 import org.variset.archive.grade.Discipline;
+import org.variset.archive.settings.TargetPyramid;
 
 class GradeDistributionTest {
     /** Four unit bands A..D centred on 0, 1, 2, 3. */

@@ -1,4 +1,4 @@
-package org.variset.reports.scoring.grades;
+package org.variset.archive.settings;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
