@@ -23,6 +23,11 @@ public final class GymCalendar {
 
     /** Today's date at the gym. */
     public LocalDate today(Gym gym) {
-        return LocalDate.now(clock.withZone(gym.zone()));
+        return today(gym.zone());
+    }
+
+    /** Today's date in a time zone. */
+    public LocalDate today(java.time.ZoneId zone) {
+        return LocalDate.now(clock.withZone(zone));
     }
 }

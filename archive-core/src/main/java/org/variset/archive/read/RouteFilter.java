@@ -17,13 +17,14 @@ import org.variset.archive.grade.Discipline;
  * @param standingOn routes up on this day, or null
  * @param setFrom routes set on or after this day, or null
  * @param setBefore routes set before this day (excluded), or null
+ * @param upAfter routes not stripped by this day (stripped_on empty or after it), or null
  */
 public record RouteFilter(Long gymId, Long wallId, Long resetId, Long excludeResetId, Long setterId,
-        Discipline discipline, LocalDate standingOn, LocalDate setFrom, LocalDate setBefore) {
+        Discipline discipline, LocalDate standingOn, LocalDate setFrom, LocalDate setBefore, LocalDate upAfter) {
 
     /** Every route. */
     public static RouteFilter all() {
-        return new RouteFilter(null, null, null, null, null, null, null, null, null);
+        return new RouteFilter(null, null, null, null, null, null, null, null, null, null);
     }
 
     /** The routes of a gym. */
@@ -39,46 +40,52 @@ public record RouteFilter(Long gymId, Long wallId, Long resetId, Long excludeRes
     /** Only this gym's routes. */
     public RouteFilter withGym(long id) {
         return new RouteFilter(id, wallId, resetId, excludeResetId, setterId, discipline, standingOn, setFrom,
-                setBefore);
+                setBefore, upAfter);
     }
 
     /** Only this wall's routes. */
     public RouteFilter withWall(long id) {
         return new RouteFilter(gymId, id, resetId, excludeResetId, setterId, discipline, standingOn, setFrom,
-                setBefore);
+                setBefore, upAfter);
     }
 
     /** Only this reset's routes. */
     public RouteFilter withReset(long id) {
         return new RouteFilter(gymId, wallId, id, excludeResetId, setterId, discipline, standingOn, setFrom,
-                setBefore);
+                setBefore, upAfter);
     }
 
     /** Not this reset's routes. */
     public RouteFilter withoutReset(long id) {
-        return new RouteFilter(gymId, wallId, resetId, id, setterId, discipline, standingOn, setFrom, setBefore);
+        return new RouteFilter(gymId, wallId, resetId, id, setterId, discipline, standingOn, setFrom, setBefore, upAfter);
     }
 
     /** Only routes this setter set. */
     public RouteFilter withSetter(long id) {
         return new RouteFilter(gymId, wallId, resetId, excludeResetId, id, discipline, standingOn, setFrom,
-                setBefore);
+                setBefore, upAfter);
     }
 
     /** Only routes of this discipline. */
     public RouteFilter withDiscipline(Discipline d) {
-        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, d, standingOn, setFrom, setBefore);
+        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, d, standingOn, setFrom, setBefore, upAfter);
     }
 
     /** Only routes up on the day. */
     public RouteFilter standingOn(LocalDate d) {
-        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, discipline, d, setFrom, setBefore);
+        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, discipline, d, setFrom, setBefore, upAfter);
     }
 
     /** Only routes set in [from, before). */
     public RouteFilter setBetween(LocalDate from, LocalDate before) {
         return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, discipline, standingOn, from,
-                before);
+                before, upAfter);
+    }
+
+    /** Only routes up at some point in [from, to]: set on or before to, and not stripped by from. */
+    public RouteFilter upBetween(LocalDate from, LocalDate to) {
+        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, discipline, standingOn, setFrom,
+                to.plusDays(1), from);
     }
 
     /** The SQL condition on the route table aliased {@code r}, with its parameters in order. */
@@ -97,6 +104,7 @@ public record RouteFilter(Long gymId, Long wallId, Long resetId, Long excludeRes
         }
         add(c, params, setFrom, "r.set_on >= ?");
         add(c, params, setBefore, "r.set_on < ?");
+        add(c, params, upAfter, "(r.stripped_on IS NULL OR r.stripped_on > ?)");
         return c.isEmpty() ? "1 = 1" : String.join(" AND ", c);
     }
 

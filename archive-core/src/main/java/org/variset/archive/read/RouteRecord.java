@@ -44,9 +44,9 @@ public record RouteRecord(long id, String gym, String wall, String reset, LocalD
         holds = List.copyOf(holds);
     }
 
-    /** How reports name the route: its label, wall and set date ({@code Blue 7, Cave, 2026-03-14}). */
+    /** How reports name the route: its label, wall and set date ({@code Blue 7 (Cave, 2026-03-14)}). */
     public String name() {
-        return label + ", " + wall + ", " + setOn;
+        return label + " (" + wall + ", " + setOn + ")";
     }
 
     /** True when the route is up on the date: set_on &lt;= d and (not stripped, or d &lt; stripped_on). */

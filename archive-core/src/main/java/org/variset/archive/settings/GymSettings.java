@@ -74,12 +74,13 @@ public final class GymSettings {
     }
 
     /**
-     * The target shares per band of a discipline, or null when there is none: boulders default to the
-     * common-practice pyramid ({@link TargetPyramid}); rope routes have no default (metrics.md section 3).
+     * The target weights per band of a discipline (any positive scale; figures normalise them), or null when there
+     * is none: boulders default to the common-practice pyramid ({@link TargetPyramid#weights()}); rope routes have no
+     * default (metrics.md section 3).
      */
     public Map<String, Double> target(Discipline d) {
         return given(SettingKey.TARGET, scopeOf(d)).map(v -> SettingKey.weightMap(v.value()))
-                .orElse(d == Discipline.BOULDER ? TargetPyramid.defaultBoulder() : null);
+                .orElse(d == Discipline.BOULDER ? TargetPyramid.weights() : null);
     }
 
     /** True when the discipline's target is the default example rather than the gym's own. */

@@ -12,13 +12,23 @@ public final class TargetPyramid {
     private TargetPyramid() {
     }
 
+    private static final String[] BANDS = {"VB", "V0", "V1", "V2", "V3", "V4", "V5", "V6", "V7", "V8", "V9"};
+    private static final int[] WEIGHTS = {1, 2, 3, 4, 5, 6, 5, 4, 3, 1, 1};
+
     /** The default boulder target as shares summing to 1, in band order. */
     public static Map<String, Double> defaultBoulder() {
-        String[] bands = {"VB", "V0", "V1", "V2", "V3", "V4", "V5", "V6", "V7", "V8", "V9"};
-        int[] weights = {1, 2, 3, 4, 5, 6, 5, 4, 3, 1, 1};
         Map<String, Double> out = new LinkedHashMap<>();
-        for (int i = 0; i < bands.length; i++) {
-            out.put(bands[i], weights[i] / 35.0);
+        for (int i = 0; i < BANDS.length; i++) {
+            out.put(BANDS[i], WEIGHTS[i] / 35.0);
+        }
+        return out;
+    }
+
+    /** The default boulder target as the published weights (out of 35), in band order. */
+    public static Map<String, Double> weights() {
+        Map<String, Double> out = new LinkedHashMap<>();
+        for (int i = 0; i < BANDS.length; i++) {
+            out.put(BANDS[i], (double) WEIGHTS[i]);
         }
         return out;
     }

@@ -78,7 +78,8 @@ class GymSettingsTest {
             assertThat(d.scoreWeights()).containsExactly(java.util.Map.entry("grip", 0.25),
                     java.util.Map.entry("holds", 0.20), java.util.Map.entry("moves", 0.20),
                     java.util.Map.entry("grades", 0.15), java.util.Map.entry("novelty", 0.20));
-            assertThat(d.target(Discipline.BOULDER)).isEqualTo(TargetPyramid.defaultBoulder());
+            assertThat(d.target(Discipline.BOULDER)).isEqualTo(TargetPyramid.weights());
+            assertThat(TargetPyramid.weights().values().stream().mapToDouble(Double::doubleValue).sum()).isEqualTo(35);
             assertThat(d.targetIsDefault(Discipline.BOULDER)).isTrue();
             assertThat(d.target(Discipline.ROPE)).isNull();
             assertThat(d.bands(Discipline.BOULDER).labels()).startsWith("VB", "V0", "V1");

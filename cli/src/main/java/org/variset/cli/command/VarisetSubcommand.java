@@ -8,6 +8,7 @@ import org.variset.archive.store.ArchiveLocation;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.Logging;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
@@ -44,6 +45,8 @@ abstract class VarisetSubcommand implements Callable<Integer> {
         Logging.configure(root().verbose);
         try {
             return execute().code();
+        } catch (ParameterException e) {
+            throw e; // a usage error found while running: picocli prints it with the usage hint (exit 2)
         } catch (ArchiveException e) {
             return fail(ExitCode.ARCHIVE, e.getMessage(), e);
         } catch (IllegalArgumentException e) {
@@ -55,7 +58,7 @@ abstract class VarisetSubcommand implements Callable<Integer> {
     }
 
     private int fail(ExitCode code, String message, Throwable e) {
-        err().println("variset " + spec.name() + ": " + message);
+        err().println(spec.qualifiedName() + ": " + message);
         if (root().verbose) {
             e.printStackTrace(err());
         }

@@ -93,8 +93,17 @@ public final class CircularStatistics {
                 (sectors[2] + sectors[6]) / (double) n, why);
     }
 
-    /** Sector k = floor((θ + 22.5) / 45) mod 8, on the degree value (metrics.md). */
-    static int sector(double degrees) {
+    /** The direction each sector faces, sector 0 (up) first, clockwise. */
+    private static final String[] SECTOR_WORDS = {"up", "up-right", "right", "down-right", "down", "down-left",
+        "left", "up-left"};
+
+    /** The direction sector k faces, as a word ({@code up}, {@code down-left}). */
+    public static String sectorWord(int k) {
+        return SECTOR_WORDS[k];
+    }
+
+    /** Sector k = floor((θ + 22.5) / 45) mod 8, on the degree value (metrics.md); 0 faces up, 2 right. */
+    public static int sector(double degrees) {
         return (int) Math.floor((degrees + 22.5) / 45.0) % SECTORS;
     }
 

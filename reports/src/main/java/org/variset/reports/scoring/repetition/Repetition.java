@@ -11,7 +11,7 @@ import java.util.Set;
  *
  * <p>novelty = 1 − mean over the reset's comparable routes of their highest Jaccard index against the window; 1
  * when the window is empty; null when no reset route is comparable. A comparable route with no comparable route in
- * the window counts as 0 similarity. hold_reuse_rate = placements whose (hold_ref, sector) was also on the wall
+ * the window counts as 0 similarity. Routes are compared only within their group (one discipline). hold_reuse_rate = placements whose (hold_ref, sector) was also on the wall
  * in its previous three resets, over all the reset's placements.
  */
 public final class Repetition {

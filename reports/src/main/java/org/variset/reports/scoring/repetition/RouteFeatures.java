@@ -12,10 +12,11 @@ import java.util.Set;
  * uses too, so that a setter reads the feature without a sector table.
  *
  * @param id what names the route in reports
+ * @param group routes are compared only within one group (the discipline: boulders with boulders)
  * @param features the features
  * @param detail how many distinct hold and move features it has (fewer than 4: too little detail to compare)
  */
-public record RouteFeatures(String id, Set<String> features, int detail) {
+public record RouteFeatures(String id, String group, Set<String> features, int detail) {
 
     /** Routes with fewer hold and move features than this are not compared (metrics.md). */
     public static final int MIN_DETAIL = 4;
@@ -29,9 +30,15 @@ public record RouteFeatures(String id, Set<String> features, int detail) {
     public record HandHold(String type, List<Integer> sectors) {
     }
 
-    /** The features of a route. */
+    /** The features of a route in the default group. */
     public static RouteFeatures of(String id, List<HandHold> handHolds, List<String> moves, String angleBand,
             String gradeBand) {
+        return of(id, "", handHolds, moves, angleBand, gradeBand);
+    }
+
+    /** The features of a route. */
+    public static RouteFeatures of(String id, String group, List<HandHold> handHolds, List<String> moves,
+            String angleBand, String gradeBand) {
         Set<String> f = new LinkedHashSet<>();
         for (HandHold h : handHolds) {
             if (h.sectors().isEmpty()) {
@@ -50,7 +57,7 @@ public record RouteFeatures(String id, Set<String> features, int detail) {
         if (gradeBand != null) {
             f.add("grade:" + gradeBand);
         }
-        return new RouteFeatures(id, Set.copyOf(f), detail);
+        return new RouteFeatures(id, group, Set.copyOf(f), detail);
     }
 
     /** The direction of a sector's centre in degrees: sector k faces 45k degrees. */

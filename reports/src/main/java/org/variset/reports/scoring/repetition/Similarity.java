@@ -18,9 +18,9 @@ import java.util.TreeSet;
  */
 public record Similarity(int shared, int union, Set<String> sharedFeatures) {
 
-    /** The similarity of two routes, or null when either has too little detail. */
+    /** The similarity of two routes, or null when either has too little detail or they are of different groups. */
     public static Similarity of(RouteFeatures a, RouteFeatures b) {
-        if (!a.comparable() || !b.comparable()) {
+        if (!a.comparable() || !b.comparable() || !a.group().equals(b.group())) {
             return null;
         }
         Set<String> both = new TreeSet<>(a.features());

@@ -75,6 +75,18 @@ class RepetitionTest {
     }
 
     @Test
+    void comparesOnlyRoutesOfTheSameGroup() {
+        RouteFeatures boulder = RouteFeatures.of("b", "boulder", List.of(hold("crimp", 0), hold("pinch", 2)),
+                List.of("heel hook", "dyno"), "2", "V3");
+        RouteFeatures rope = RouteFeatures.of("r", "rope", List.of(hold("crimp", 0), hold("pinch", 2)),
+                List.of("heel hook", "dyno"), "2", "V3");
+        assertThat(Similarity.of(boulder, rope)).isNull();
+        RepetitionFigures r = Repetition.of(List.of(boulder), List.of(rope), Repetition.DEFAULT_THRESHOLD);
+        assertThat(r.nearRepeats()).isEmpty();
+        assertThat(r.novelty()).isEqualTo(1.0);
+    }
+
+    @Test
     void measuresHoldReuse() {
         assertThat(Repetition.holdReuseRate(List.of(Set.of("J12@0"), Set.of("P7@2", "P7@6"), Set.of()),
                 Set.of("J12@0", "P7@6"))).isCloseTo(2 / 3.0, within(1e-12));

@@ -1,0 +1,272 @@
+package org.variset.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Audit, plan and trend of the invented gym Fernhollow Climbing (test resources {@code fernhollow/}), each figure
+ * checked against {@code expected.json}, computed from the same files by {@code make-expected.py} with Python and
+ * SciPy 1.17.1 straight from metrics.md (the command is in that folder's README). Tolerance 1e-9 absolute.
+ */
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
+class AuditPlanTrendTest {
+    private static final ObjectMapper JSON = new ObjectMapper();
+    private static final Path FILES = Path.of("src/test/resources/org/variset/cli/fernhollow");
+    private static final double TOL = 1e-9;
+
+    @TempDir
+    static Path home;
+    private String archive;
+    private JsonNode expected;
+
+    @BeforeAll
+    void importTheGym() throws IOException {
+        archive = home.resolve("archive").toString();
+        run("init").exits(ExitCode.OK);
+        run("import", FILES.resolve("walls.csv").toString(), FILES.resolve("routes.csv").toString(),
+                FILES.resolve("holds.csv").toString()).exits(ExitCode.OK);
+        expected = JSON.readTree(FILES.resolve("expected.json").toFile());
+    }
+
+    private CliRun run(String... args) {
+        String[] all = new String[args.length + 2];
+        all[0] = "--archive";
+        all[1] = archive;
+        System.arraycopy(args, 0, all, 2, args.length);
+        return CliRun.run(home, all);
+    }
+
+    private JsonNode json(String... args) throws IOException {
+        return JSON.readTree(run(args).exits(ExitCode.OK).out());
+    }
+
+    private static void close(JsonNode actual, JsonNode expected, String... keys) {
+        for (String k : keys) {
+            assertThat(actual.get(k).asDouble()).as(k).isCloseTo(expected.get(k).asDouble(), within(TOL));
+        }
+    }
+
+    /** Pairs as "route | other | jaccard" from objects (Variset) or [route, other, jaccard] arrays (expected). */
+    private static List<String> pairs(JsonNode a) {
+        List<String> out = new ArrayList<>();
+        a.forEach(p -> {
+            boolean array = p.isArray();
+            out.add((array ? p.get(0) : p.get("route")).asText() + " | " + (array ? p.get(1) : p.get("other"))
+                    .asText() + " | " + String.format("%.12f", (array ? p.get(2) : p.get("jaccard")).asDouble()));
+        });
+        return out;
+    }
+
+    @Nested
+    @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+    class ResetAudit {
+        private JsonNode a;
+        private JsonNode e;
+
+        @BeforeAll
+        void audit() throws IOException {
+            a = json("audit", "--reset", "Arch 2026-02-02", "--format", "json");
+            e = expected.get("reset_audit");
+        }
+
+        @Test
+        void measuresGripsAsScipyDoes() {
+            close(a.get("grip"), e.at("/figures/grip"), "n", "resultant_length", "mean_direction_deg",
+                    "circular_variance", "circular_sd_deg", "rayleigh_p", "sector_entropy", "horizontal_edge_share");
+            assertThat(a.at("/grip/sectors").toString()).isEqualTo(e.at("/figures/grip/sectors").toString());
+        }
+
+        @Test
+        void measuresVarietyAsScipyDoes() {
+            for (String block : List.of("holds", "moves", "styles", "sizes")) {
+                close(a.get(block), e.at("/figures/" + block), "n", "richness", "shannon", "gini_simpson", "hill_n1",
+                        "hill_n2", "coverage");
+            }
+        }
+
+        @Test
+        void findsTheSameRepeatsNoveltyAndHoldReuse() {
+            assertThat(pairs(a.at("/repetition/near_repeats")))
+                    .containsExactlyInAnyOrderElementsOf(pairs(e.get("near_repeats")));
+            assertThat(pairs(a.at("/repetition/internal_repeats")))
+                    .containsExactlyInAnyOrderElementsOf(pairs(e.get("internal_repeats")));
+            assertThat(a.at("/repetition/novelty").asDouble()).isCloseTo(e.get("novelty").asDouble(), within(TOL));
+            assertThat(a.at("/repetition/window_routes").asInt()).isEqualTo(e.get("window_routes").asInt());
+            assertThat(a.at("/repetition/hold_reuse_rate").asDouble())
+                    .isCloseTo(e.get("hold_reuse_rate").asDouble(), within(TOL));
+        }
+
+        @Test
+        void scoresWithTheGymsStandingGrades() {
+            close(a.get("score").get("parts"), e.get("parts"), "grip", "holds", "moves", "grades", "novelty");
+            assertThat(a.at("/score/score").asDouble()).isCloseTo(e.get("score").asDouble(), within(TOL));
+            assertThat(a.at("/reference/grades/boulder/emd_to_target").asDouble())
+                    .isCloseTo(e.at("/gym_grades/emd_to_target").asDouble(), within(TOL));
+        }
+
+        @Test
+        void classifiesProfilesAndMeasuresLines() {
+            for (String c : List.of("steady", "sustained", "single_crux", "multi_crux", "unclassified")) {
+                assertThat(a.at("/profiles/" + c).asInt()).as(c).isEqualTo(e.at("/figures/profiles/" + c).asInt());
+            }
+            close(a.get("profiles"), e.at("/figures/profiles"), "split_entropy");
+            close(a.get("line"), e, "gie_mean", "gie_min", "gie_max");
+        }
+
+        @Test
+        void showsThePreviousResetAndTheChange() {
+            assertThat(a.at("/context/columns/1/name").asText()).isEqualTo("previous reset Arch 2026-01-05");
+            JsonNode row = a.at("/context/figures/score.score");
+            assertThat(a.at("/context/change_since_previous/score.score").asDouble())
+                    .isCloseTo(row.get(0).asDouble() - row.get(1).asDouble(), within(TOL));
+        }
+
+        @Test
+        void saysWhatStandsOutInPlainWords() {
+            String text = run("audit", "--reset", "Arch 2026-02-02", "--findings", "20").exits(ExitCode.OK).out();
+            assertThat(text).contains("Score 49 of 100")
+                    .contains("A2 (Arch, 2026-02-02) repeats A1 (Arch, 2026-01-05): same crimp@0, jug@0, "
+                            + "pinch@90, pinch@270 and 1 more holds, same heel hook > dyno > match "
+                            + "(Jaccard 0.846).")
+                    .contains("13 of 19 hand grips face up; no gaston in this set.")
+                    .contains("35% of this reset's placements put a hold shape back")
+                    .contains("Safety: Route setting is work at height");
+        }
+    }
+
+    @Test
+    void auditsTheWholeGymsStandingSet() throws IOException {
+        JsonNode a = json("audit", "--standing-on", "2026-02-15", "--format", "json");
+        JsonNode e = expected.get("standing_audit");
+        assertThat(a.get("routes").asInt()).isEqualTo(e.get("routes").asInt());
+        close(a.get("grip"), e.at("/figures/grip"), "resultant_length", "sector_entropy");
+        close(a.at("/grades/boulder"), e.get("grades"), "emd_to_target", "chi_square", "chi_square_p");
+        assertThat(a.at("/grades/boulder/gaps").toString()).isEqualTo(e.at("/grades/gaps").toString());
+        assertThat(a.at("/score/score").asDouble()).isCloseTo(e.get("score").asDouble(), within(TOL));
+        assertThat(a.at("/score/dropped/0").asText()).isEqualTo("novelty");
+        assertThat(a.at("/undefined/repetition.novelty").asText()).contains("not one reset");
+    }
+
+    @Test
+    void auditsOneSettersRoutesAgainstTheOthers() throws IOException {
+        JsonNode a = json("audit", "--setter", "Bo Renner", "--from", "2025-12", "--to", "2026-02", "--format",
+                "json");
+        JsonNode e = expected.get("setter_audit");
+        assertThat(a.get("routes").asInt()).isEqualTo(e.get("routes").asInt());
+        assertThat(a.at("/reference/routes").asInt()).isEqualTo(e.get("others").asInt());
+        close(a.get("grip"), e.get("grip"), "resultant_length", "sector_entropy");
+        close(a.get("holds"), e.get("holds"), "shannon", "coverage");
+    }
+
+    @Test
+    void plansTheSlotsBruteForceFindsBest() throws IOException {
+        JsonNode p = json("plan", "--wall", "Arch", "--on", "2026-03-02", "--routes", "4", "--format", "json");
+        JsonNode e = expected.get("plan");
+        List<Integer> slots = new ArrayList<>();
+        List<Integer> rest = new ArrayList<>();
+        p.at("/grade_slots/bands").forEach(b -> {
+            slots.add(b.get("proposed").asInt());
+            rest.add(b.get("up_elsewhere").asInt());
+        });
+        assertThat(rest.toString().replace(" ", "")).isEqualTo(e.get("rest").toString());
+        assertThat(e.get("optimal_slots").toString().replace(" ", "")).contains(slots.toString().replace(" ", ""));
+        assertThat(p.at("/grade_slots/emd_to_target_after").asDouble())
+                .isCloseTo(e.get("least_distance").asDouble(), within(TOL));
+        assertThat(p.at("/shapes_to_rest").has("J1")).isTrue();
+    }
+
+    @Test
+    void tracksLifetimesWallStatusAndSetters() throws IOException {
+        JsonNode t = json("trend", "--from", "2025-12-01", "--to", "2026-03-10", "--format", "json");
+        JsonNode e = expected.get("trend");
+        close(t.get("lifetime"), e.get("lifetime"), "stripped", "median_days", "still_up");
+        t.get("walls").forEach(w -> {
+            JsonNode x = e.at("/walls/" + w.get("wall").asText());
+            assertThat(w.get("days_since_reset").asInt()).isEqualTo(x.get("days_since_reset").asInt());
+            assertThat(w.get("cycle_days").asInt()).isEqualTo(x.get("cycle_days").asInt());
+            assertThat(w.get("status").asText()).as(w.get("wall").asText()).isEqualTo(x.get("status").asText());
+        });
+        t.get("setters").forEach(s -> assertThat(s.get("routes").asInt())
+                .isEqualTo(e.at("/setter_routes/" + s.get("setter").asText()).asInt()));
+        String csv = run("trend", "--from", "2025-12-01", "--to", "2026-03-10", "--format", "csv").exits(ExitCode.OK)
+                .out();
+        assertThat(csv.lines().findFirst().orElseThrow()).startsWith("day,scope,routes,score.score");
+        assertThat(csv.lines().count()).isEqualTo(1 + 4 * 4); // four month-ends, gym and three walls
+    }
+
+    @Nested
+    class WithoutEnoughData {
+        @Test
+        void auditsAWallsFirstResetWithAnEmptyWindow() throws IOException {
+            JsonNode a = json("audit", "--reset", "Arch 2025-12-08", "--format", "json");
+            assertThat(a.at("/repetition/novelty").asDouble()).isEqualTo(1.0);
+            assertThat(a.at("/repetition/window_routes").asInt()).isZero();
+            assertThat(a.at("/undefined/repetition.hold_reuse_rate").asText()).isEqualTo("the wall has no earlier "
+                    + "reset");
+            assertThat(a.has("previous")).isFalse();
+        }
+
+        @Test
+        void auditsAndPlansAWallWithOneReset() {
+            assertThat(run("audit", "--wall", "Bay", "--on", "2026-02-01").exits(ExitCode.OK).out())
+                    .contains("Reset Bay 2026-01-19").doesNotContain("previous reset");
+            assertThat(run("plan", "--wall", "Bay", "--on", "2026-02-01", "--routes", "3").exits(ExitCode.OK).out())
+                    .contains("Grade slots:");
+        }
+
+        @Test
+        void saysSoWhenNoRouteIsUp() {
+            assertThat(run("audit", "--standing-on", "2020-01-01").exits(ExitCode.OK).out())
+                    .contains("No route in this set: there is nothing to audit.");
+            assertThat(run("trend", "--year", "2020").exits(ExitCode.OK).out()).contains("Notable repeats: none");
+        }
+
+        @Test
+        void plansARopeWallWithoutATarget() {
+            assertThat(run("plan", "--wall", "Spire", "--on", "2026-03-02", "--routes", "2").exits(ExitCode.OK).out())
+                    .contains("Grade slots: none proposed: the gym has no grade target for rope routes");
+        }
+
+        @Test
+        void auditsRoutesWithoutHolds() throws IOException {
+            Path routes = Files.writeString(home.resolve("loft.csv"), "gym,wall,route,set_on,discipline,grade\n"
+                    + "Upstairs Gym,Loft,L1,2026-02-10,boulder,V2\nUpstairs Gym,Loft,L2,2026-02-10,boulder,V3\n");
+            String other = home.resolve("other").toString();
+            CliRun.run(home, "--archive", other, "init").exits(ExitCode.OK);
+            CliRun.run(home, "--archive", other, "import", routes.toString()).exits(ExitCode.OK);
+            String text = CliRun.run(home, "--archive", other, "audit", "--wall", "Loft", "--on", "2026-02-10")
+                    .exits(ExitCode.OK).out();
+            assertThat(text).contains("No hold placements are recorded for these routes");
+            JsonNode a = JSON.readTree(CliRun.run(home, "--archive", other, "audit", "--wall", "Loft", "--on",
+                    "2026-02-10", "--format", "json").exits(ExitCode.OK).out());
+            assertThat(a.at("/grip/resultant_length").isNull()).isTrue();
+            assertThat(a.at("/undefined/grip.resultant_length").asText()).isEqualTo("no hand hold with a grip "
+                    + "direction");
+            assertThat(a.at("/undefined/repetition.novelty").asText()).contains("enough detail");
+        }
+
+        @Test
+        void namesWhatThereIsForAWrongTarget() {
+            assertThat(run("audit", "--reset", "Arch 1999-01-01").exits(ExitCode.BAD_INPUT).err())
+                    .contains("no reset labelled 'Arch 1999-01-01'").contains("latest:");
+            assertThat(run("audit", "--wall", "Arch", "--on", "2025-01-01").exits(ExitCode.BAD_INPUT).err())
+                    .contains("its first is Arch 2025-12-08");
+            assertThat(run("audit").exits(ExitCode.USAGE).err()).contains("say what to audit");
+            assertThat(run("audit", "--setter", "Nobody", "--from", "2026").exits(ExitCode.BAD_INPUT).err())
+                    .contains("no setter named 'Nobody'").contains("Bo Renner");
+        }
+    }
+}

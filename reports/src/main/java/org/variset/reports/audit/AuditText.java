@@ -1,0 +1,198 @@
+package org.variset.reports.audit;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+import org.variset.archive.grade.Discipline;
+import org.variset.reports.Safety;
+import org.variset.reports.figures.SetFigures;
+import org.variset.reports.format.FigureFormat;
+import org.variset.reports.scoring.grades.GradeFigures;
+import org.variset.reports.scoring.grip.CircularStatistics;
+import org.variset.reports.scoring.grip.GripStatistics;
+import org.variset.reports.scoring.profile.ProfileClass;
+import org.variset.reports.scoring.variety.VarietyFigures;
+
+/** An audit as text for people: the score, what stands out, the side-by-side figures, then each family. */
+public final class AuditText {
+    private final StringBuilder b = new StringBuilder();
+
+    private AuditText() {
+    }
+
+    /** The audit as text; {@code findings} limits how many findings are shown (all are in the JSON). */
+    public static String of(Audit a, int findings) {
+        AuditText t = new AuditText();
+        t.write(a, findings);
+        return t.b.toString();
+    }
+
+    private void write(Audit a, int shown) {
+        SetResult s = a.audited();
+        line(a.subject().title() + " · " + a.subject().gym() + " · " + s.routes().size() + " routes");
+        line(score(s));
+        line("");
+        line("What stands out");
+        a.findings().stream().limit(shown).forEach(f -> line("  - " + f.text()));
+        if (a.findings().size() > shown) {
+            line("  (" + (a.findings().size() - shown) + " more with --format json)");
+        }
+        line("");
+        table(a);
+        line("");
+        families(s);
+        line("");
+        line(settings(a));
+        line("Safety: " + Safety.CAUTION);
+    }
+
+    private static String score(SetResult s) {
+        if (s.score().score() == null) {
+            return "Score: none (" + s.undefined().getOrDefault("score", "too few parts") + ")";
+        }
+        String parts = s.score().weightsUsed().keySet().stream().map(k -> k + " " + FigureFormat.round(
+                s.score().parts().get(k), 2)).collect(Collectors.joining(", "));
+        return "Score " + FigureFormat.of("score", s.score().score()) + " of 100 (a heuristic: weighted mean of "
+                + parts + (s.score().dropped().isEmpty() ? "" : "; not measured: " + String.join(", ",
+                        s.score().dropped())) + ")";
+    }
+
+    private void table(Audit a) {
+        List<SetResult> cols = a.columns();
+        List<Map<String, Double>> values = cols.stream().map(Headline::of).toList();
+        List<String> head = new ArrayList<>();
+        head.add("");
+        for (int i = 0; i < cols.size(); i++) {
+            head.add(cols.get(i).name());
+            if (i == 1 && a.previous() != null) {
+                head.add("change");
+            }
+        }
+        List<List<String>> rows = new ArrayList<>();
+        rows.add(head);
+        for (Map.Entry<String, String> k : Headline.LABELS.entrySet()) {
+            List<String> row = new ArrayList<>();
+            row.add(k.getValue());
+            for (int i = 0; i < cols.size(); i++) {
+                row.add(Headline.text(k.getKey(), values.get(i).get(k.getKey())));
+                if (i == 1 && a.previous() != null) {
+                    boolean pct = k.getKey().endsWith("_share") || k.getKey().endsWith("_rate");
+                    Double now = values.get(0).get(k.getKey());
+                    Double before = values.get(1).get(k.getKey());
+                    row.add(pct && now != null && before != null ? FigureFormat.change("score", 100 * now,
+                            100 * before) + " pts" : FigureFormat.change(k.getKey(), now, before));
+                }
+            }
+            rows.add(row);
+        }
+        int[] w = new int[head.size()];
+        rows.forEach(r -> {
+            for (int i = 0; i < r.size(); i++) {
+                w[i] = Math.max(w[i], r.get(i).length());
+            }
+        });
+        for (List<String> r : rows) {
+            StringBuilder x = new StringBuilder("  ").append(pad(r.get(0), w[0], false));
+            for (int i = 1; i < r.size(); i++) {
+                x.append("  ").append(pad(r.get(i), w[i], true));
+            }
+            line(x.toString().stripTrailing());
+        }
+    }
+
+    private void families(SetResult s) {
+        SetFigures f = s.figures();
+        GripStatistics g = f.grip();
+        List<String> sectors = new ArrayList<>();
+        for (int i = 0; i < 8; i++) {
+            sectors.add(CircularStatistics.sectorWord(i) + " " + g.sectors().get(i));
+        }
+        line("Grip directions  " + g.n() + " hand grips (" + g.undirected() + " holds without a direction): "
+                + String.join(", ", sectors) + "; mean direction " + FigureFormat.of("mean_direction_deg",
+                        g.meanDirectionDeg()) + "°, resultant length " + FigureFormat.of("resultant_length",
+                        g.resultantLength()) + ", Rayleigh p " + FigureFormat.of("rayleigh_p", g.rayleighP())
+                + " (small on most walls: gravity favours up-facing holds)");
+        line("Hold types       " + variety(f.holds()));
+        line("Hold shapes      " + variety(f.holdShapes()));
+        line("Sizes            " + variety(f.sizes()));
+        line("Moves            " + variety(f.moves()));
+        line("Styles           " + variety(f.styles()));
+        line("Wall angles      " + variety(f.angles()));
+        for (Map.Entry<Discipline, GradeFigures> e : f.grades().entrySet()) {
+            line(pad("Grades (" + e.getKey().word() + ")", 17, false) + grades(e.getValue()));
+        }
+        line("Profiles         " + profiles(f));
+        line("Repetition       " + repetition(s));
+        line("Route lines      " + f.line().withGie() + " routes with a full line: GIE mean " + FigureFormat.of(
+                "gie_mean", f.line().gieMean()) + " (min " + FigureFormat.of("gie_min", f.line().gieMin()) + ", max "
+                + FigureFormat.of("gie_max", f.line().gieMax()) + "); " + f.line().flagged().size()
+                + " routes with a span over " + FigureFormat.round(f.line().reachK() * f.line().reachHeightM(), 2)
+                + " m (heuristic)");
+    }
+
+    private static String variety(VarietyFigures v) {
+        if (v.n() == 0) {
+            return "none recorded" + (v.missing() > 0 ? " (" + v.missing() + " without a value)" : "");
+        }
+        String counts = v.counts().entrySet().stream().sorted(Map.Entry.<String, Long>comparingByValue().reversed()
+                .thenComparing(Map.Entry.comparingByKey())).limit(10).map(e -> e.getKey() + " " + e.getValue())
+                .collect(Collectors.joining(", "));
+        return counts + (v.richness() > 10 ? ", ..." : "") + "; effective number " + FigureFormat.of("hill_n1",
+                v.hillN1()) + (v.coverage() == null ? "" : ", coverage " + FigureFormat.of("coverage", v.coverage()))
+                + (v.missing() > 0 ? "; " + v.missing() + " without a value" : "");
+    }
+
+    private static String grades(GradeFigures g) {
+        String h = g.histogram().entrySet().stream().filter(e -> e.getValue() > 0 || g.target() != null
+                && g.target().getOrDefault(e.getKey(), 0.0) > 0).map(e -> e.getKey() + " " + e.getValue()
+                + (g.target() == null || !g.target().containsKey(e.getKey()) ? "" : " (target "
+                        + FigureFormat.percent(g.target().get(e.getKey())) + ")")).collect(Collectors.joining(", "));
+        return h + (g.emdToTarget() == null ? "; no target" : "; " + FigureFormat.of("emd_to_target",
+                g.emdToTarget()) + " bands from target") + (g.outsideTarget() > 0 ? "; " + g.outsideTarget()
+                        + " outside the target's bands" : "");
+    }
+
+    private static String profiles(SetFigures f) {
+        String c = f.profiles().counts().entrySet().stream().map(e -> e.getKey().key().replace('_', ' ') + " "
+                + e.getValue()).collect(Collectors.joining(", "));
+        return c + "; spread " + FigureFormat.of("split_entropy", f.profiles().splitEntropy())
+                + (f.profiles().counts().get(ProfileClass.UNCLASSIFIED) > 0 ? " (unclassified: fewer than three "
+                        + "move difficulties)" : "");
+    }
+
+    private static String repetition(SetResult s) {
+        if (s.repetition() == null) {
+            return "not measured";
+        }
+        int near = s.repetition().nearRepeats().size();
+        int inside = s.repetition().internalRepeats().size();
+        String window = s.windowRoutes() > 0 || s.repetition().novelty() != null
+                ? near + " near-repeats of the " + s.windowRoutes() + " routes set in the look-back window; " : "";
+        return window + inside + " inside this set; novelty " + FigureFormat.of("novelty", s.repetition().novelty())
+                + "; hold reuse " + FigureFormat.percent(s.holdReuseRate())
+                + (s.repetition().notEnoughDetail().isEmpty() ? "" : "; " + s.repetition().notEnoughDetail().size()
+                        + " routes with too little detail to compare");
+    }
+
+    private static String settings(Audit a) {
+        StringBuilder x = new StringBuilder("Settings: look-back " + a.settings().lookbackDays()
+                + " days, near-repeat threshold " + a.settings().nearRepeatThreshold().toPlainString() + ", reach "
+                + FigureFormat.round(a.settings().reachFactor(), 2) + " × " + FigureFormat.round(
+                        a.settings().reachHeightM(), 2) + " m");
+        for (Discipline d : Discipline.values()) {
+            x.append(", ").append(d.word()).append(" target: ").append(a.settings().target(d) == null ? "none"
+                    : a.settings().targetIsDefault(d) ? "the example pyramid (common practice)" : "the gym's own");
+        }
+        return x.toString();
+    }
+
+    private static String pad(String s, int w, boolean right) {
+        String p = " ".repeat(Math.max(0, w - s.length()));
+        return right ? p + s : s + p;
+    }
+
+    private void line(String s) {
+        b.append(s).append('\n');
+    }
+}

@@ -1,0 +1,90 @@
+package org.variset.reports.audit;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.variset.archive.grade.Discipline;
+import org.variset.reports.figures.SetFigures;
+import org.variset.reports.format.FigureFormat;
+import org.variset.reports.scoring.grades.GradeFigures;
+
+/**
+ * Sentences on grades against the target, read on the gym's routes up that day: a single wall is not meant to
+ * cover the whole target (metrics.md section 7), so a reset or wall audit looks at the gym's standing set.
+ */
+final class GradeFindings {
+    /** A distance to target of at least this many bands is worth a sentence (a heuristic of ours). */
+    private static final double FAR = 0.5;
+
+    private GradeFindings() {
+    }
+
+    static void add(Audit audit, List<Finding> out) {
+        Subject.Kind k = audit.subject().kind();
+        if (k == Subject.Kind.SETTER) {
+            return;
+        }
+        SetFigures standing = k == Subject.Kind.GYM_STANDING ? audit.audited().figures()
+                : audit.reference().figures();
+        String where = "the gym's " + "%s up on " + audit.subject().on();
+        for (Map.Entry<Discipline, GradeFigures> e : standing.grades().entrySet()) {
+            Discipline d = e.getKey();
+            GradeFigures g = e.getValue();
+            String whose = String.format(where, d == Discipline.BOULDER ? "boulders" : "rope routes");
+            if (g.target() == null) {
+                out.add(new Finding("no_target", 2, "No grade target for " + d.word() + " routes yet: set one with "
+                        + "'variset settings set target ... --discipline " + d.word() + "'."));
+                continue;
+            }
+            String example = audit.settings().targetIsDefault(d) ? " (against the example pyramid; set the gym's "
+                    + "own with 'variset settings set target')" : "";
+            if (!g.gaps().isEmpty()) {
+                List<String> shares = new ArrayList<>();
+                g.gaps().forEach(b -> shares.add(FigureFormat.percent(g.target().get(b))));
+                out.add(new Finding("grade_gap", 7 + g.gaps().size() * 0.1, "No " + RepeatFindings.list(g.gaps(), 5)
+                        .replace(" and ", " or ") + " among " + whose + "; the target gives "
+                        + (g.gaps().size() == 1 ? "it " : "them ") + RepeatFindings.list(shares, 5) + example + "."));
+            }
+            if (g.emdToTarget() != null && g.emdToTarget() >= FAR) {
+                out.add(new Finding("grade_distance", 5 + g.emdToTarget(), capitalised(whose) + " sit on average "
+                        + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands from the target" + skew(g)
+                        + (g.gaps().isEmpty() ? example : "") + "."));
+            }
+        }
+    }
+
+    /** ": more V3 than aimed at (12 against 7), fewer V6 (1 against 5)". */
+    private static String skew(GradeFigures g) {
+        long inside = g.target().keySet().stream().mapToLong(b -> g.histogram().getOrDefault(b, 0L)).sum();
+        String over = null;
+        String under = null;
+        double most = 0;
+        double least = 0;
+        for (Map.Entry<String, Double> t : g.target().entrySet()) {
+            double expected = t.getValue() * inside;
+            double diff = g.histogram().getOrDefault(t.getKey(), 0L) - expected;
+            String count = " (" + g.histogram().getOrDefault(t.getKey(), 0L) + " against "
+                    + FigureFormat.round(expected, 1) + ")";
+            if (diff > most) {
+                most = diff;
+                over = t.getKey() + " than aimed at" + count;
+            }
+            if (diff < least) {
+                least = diff;
+                under = t.getKey() + count;
+            }
+        }
+        List<String> parts = new ArrayList<>();
+        if (over != null) {
+            parts.add("more " + over);
+        }
+        if (under != null) {
+            parts.add("fewer " + under);
+        }
+        return parts.isEmpty() ? "" : ": " + String.join(", ", parts);
+    }
+
+    private static String capitalised(String s) {
+        return Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    }
+}

@@ -1,0 +1,5 @@
+/**
+ * How figures read in text and PDF: one formatter, half-up, a fixed number of decimals per key (metrics.md). JSON
+ * carries the unrounded values.
+ */
+package org.variset.reports.format;

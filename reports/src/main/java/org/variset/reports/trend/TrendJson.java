@@ -1,0 +1,80 @@
+package org.variset.reports.trend;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.Map;
+import org.variset.archive.grade.Discipline;
+import org.variset.reports.figures.FiguresJson;
+import org.variset.reports.scoring.grades.GradeFigures;
+
+/** A trend as one JSON document, and its monthly series as CSV. */
+public final class TrendJson {
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
+    private TrendJson() {
+    }
+
+    /** The trend as a JSON tree, values unrounded. */
+    public static ObjectNode of(Trend t) {
+        ObjectNode o = MAPPER.createObjectNode().put("gym", t.gym()).put("from", t.from().toString())
+                .put("to", t.to().toString()).put("as_of", t.asOf().toString());
+        ArrayNode months = o.putArray("months");
+        for (Trend.MonthPoint p : t.months()) {
+            ObjectNode m = months.addObject().put("day", p.day().toString()).put("scope", p.scope())
+                    .put("routes", p.routes());
+            FiguresJson.map(m.putObject("figures"), p.figures());
+        }
+        ArrayNode walls = o.putArray("walls");
+        for (Trend.WallStatus w : t.walls()) {
+            ObjectNode x = walls.addObject().put("wall", w.wall()).put("discipline", w.discipline().word())
+                    .put("mean_score", w.meanScore())
+                    .put("last_reset", w.lastReset() == null ? null : w.lastReset().toString())
+                    .put("days_since_reset", w.daysSince()).put("cycle_days", w.cycleDays())
+                    .put("overdue_after_days", w.overdueAfterDays()).put("days_past_due", w.daysPastDue())
+                    .put("status", w.status());
+            ArrayNode resets = x.putArray("resets");
+            w.resets().forEach(r -> resets.addObject().put("label", r.getKey()).put("on", r.getValue().toString()));
+        }
+        o.putObject("lifetime").put("stripped", t.lifetime().stripped())
+                .put("median_days", t.lifetime().medianDays()).put("still_up", t.lifetime().stillUp());
+        ArrayNode setters = o.putArray("setters");
+        for (Trend.SetterProfile s : t.setters()) {
+            ObjectNode x = setters.addObject().put("setter", s.setter()).put("routes", s.routes())
+                    .put("share", s.share());
+            FiguresJson.map(x.putObject("grip_shares"), s.gripShares());
+            FiguresJson.map(x.putObject("hold_shares"), s.holdShares());
+            FiguresJson.map(x.putObject("move_shares"), s.moveShares());
+        }
+        ObjectNode grades = o.putObject("grades");
+        for (Map.Entry<Discipline, GradeFigures> e : t.grades().entrySet()) {
+            ObjectNode g = grades.putObject(e.getKey().word());
+            ObjectNode h = g.putObject("histogram");
+            e.getValue().histogram().forEach(h::put);
+            g.put("emd_to_target", e.getValue().emdToTarget()).put("target_is_example",
+                    t.targetIsExample().get(e.getKey()));
+        }
+        ArrayNode repeats = o.putArray("near_repeats");
+        t.repeats().forEach(r -> repeats.addObject().put("reset", r.reset()).put("route", r.pair().route())
+                .put("other", r.pair().other()).put("jaccard", r.pair().similarity().jaccard()));
+        return o;
+    }
+
+    /** The monthly series as CSV: one row per day and scope, one column per headline figure (RFC 4180). */
+    public static String csv(Trend t) {
+        StringBuilder b = new StringBuilder("day,scope,routes");
+        Map<String, Double> first = t.months().isEmpty() ? Map.of() : t.months().get(0).figures();
+        first.keySet().forEach(k -> b.append(',').append(k));
+        b.append("\r\n");
+        for (Trend.MonthPoint p : t.months()) {
+            b.append(p.day()).append(',').append(quote(p.scope())).append(',').append(p.routes());
+            p.figures().values().forEach(v -> b.append(',').append(v == null ? "" : v.toString()));
+            b.append("\r\n");
+        }
+        return b.toString();
+    }
+
+    private static String quote(String s) {
+        return s.matches("[^,\"\r\n]*") ? s : "\"" + s.replace("\"", "\"\"") + "\"";
+    }
+}

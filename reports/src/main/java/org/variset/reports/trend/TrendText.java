@@ -1,0 +1,92 @@
+package org.variset.reports.trend;
+
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+import org.variset.archive.grade.Discipline;
+import org.variset.reports.audit.Headline;
+import org.variset.reports.format.FigureFormat;
+import org.variset.reports.scoring.grades.GradeFigures;
+
+/** A trend as text for people. */
+public final class TrendText {
+    private static final List<String> MONTH_KEYS = List.of("score.score", "grip.sector_entropy", "grip.up_share",
+            "holds.hill_n1", "moves.coverage", "grades.emd_to_target");
+
+    private TrendText() {
+    }
+
+    /** The trend as text. */
+    public static String of(Trend t) {
+        StringBuilder b = new StringBuilder();
+        b.append("Trends of ").append(t.gym()).append(", ").append(t.from()).append(" to ").append(t.to())
+                .append("\n\n");
+        b.append("Month-end figures of the gym's routes up (score is a heuristic; novelty is not part of it here)\n");
+        b.append(String.format("  %-10s %6s", "day", "routes"));
+        MONTH_KEYS.forEach(k -> b.append(String.format(" %10s", shortLabel(k))));
+        b.append('\n');
+        for (Trend.MonthPoint p : t.months()) {
+            if (!p.scope().equals("gym")) {
+                continue;
+            }
+            b.append(String.format("  %-10s %6d", p.day(), p.routes()));
+            MONTH_KEYS.forEach(k -> b.append(String.format(" %10s", Headline.text(k, p.figures().get(k)))));
+            b.append('\n');
+        }
+        b.append("\nWalls (status on ").append(t.asOf()).append(")\n");
+        for (Trend.WallStatus w : t.walls()) {
+            b.append("  ").append(w.wall()).append(": ").append(w.resets().size())
+                    .append(w.resets().size() == 1 ? " reset" : " resets").append(", mean score ")
+                    .append(FigureFormat.of("score", w.meanScore())).append("; ").append(w.lastReset() == null
+                            ? "never reset" : "last reset " + w.lastReset() + ", " + w.daysSince() + " days ago, cycle "
+                            + w.cycleDays() + " days: " + w.status() + (w.daysPastDue() > 0 ? " (" + w.daysPastDue()
+                                    + " days past due)" : "")).append('\n');
+        }
+        Trend.Lifetime l = t.lifetime();
+        b.append("\nRoute lifetime: ").append(l.stripped()).append(" routes came down in the period, median ")
+                .append(l.medianDays() == null ? FigureFormat.NONE : FigureFormat.round(l.medianDays(), 1))
+                .append(" days up; ").append(l.stillUp()).append(" up on ").append(t.to()).append(".\n");
+        b.append("\nSetters (a route set by two setters counts for both)\n");
+        for (Trend.SetterProfile s : t.setters()) {
+            b.append("  ").append(s.setter()).append(": ").append(s.routes()).append(" routes (")
+                    .append(FigureFormat.percent(s.share())).append("); grips ").append(top(s.gripShares(), 3))
+                    .append("; holds ").append(top(s.holdShares(), 3)).append("; moves ").append(top(s.moveShares(),
+                            3)).append('\n');
+        }
+        for (Map.Entry<Discipline, GradeFigures> e : t.grades().entrySet()) {
+            GradeFigures g = e.getValue();
+            b.append("\nGrades of the ").append(e.getKey().word()).append(" routes set in the period: ")
+                    .append(g.histogram().entrySet().stream().filter(x -> x.getValue() > 0).map(x -> x.getKey() + " "
+                            + x.getValue()).collect(Collectors.joining(", ")))
+                    .append(g.emdToTarget() == null ? "; no target" : "; " + FigureFormat.of("emd_to_target",
+                            g.emdToTarget()) + " bands from the target" + (t.targetIsExample().get(e.getKey())
+                                    ? " (the example pyramid)" : "")).append('\n');
+        }
+        b.append("\nNotable repeats: ").append(t.repeats().isEmpty() ? "none" : t.repeats().size()).append('\n');
+        t.repeats().stream().limit(10).forEach(r -> b.append("  ").append(r.pair().route()).append(" repeats ")
+                .append(r.pair().other()).append(" (Jaccard ").append(FigureFormat.of("jaccard",
+                        r.pair().similarity().jaccard())).append(")\n"));
+        return b.toString();
+    }
+
+    /** The largest shares: {@code up 62%, right 12%}. */
+    static String top(Map<String, Double> shares, int n) {
+        if (shares.values().stream().allMatch(v -> v == 0)) {
+            return FigureFormat.NONE;
+        }
+        return shares.entrySet().stream().filter(e -> e.getValue() > 0).sorted(Map.Entry.<String, Double>
+                comparingByValue().reversed()).limit(n).map(e -> e.getKey() + " " + FigureFormat.percent(e.getValue()))
+                .collect(Collectors.joining(", "));
+    }
+
+    private static String shortLabel(String key) {
+        return switch (key) {
+            case "score.score" -> "score";
+            case "grip.sector_entropy" -> "grip sprd";
+            case "grip.up_share" -> "up share";
+            case "holds.hill_n1" -> "hold types";
+            case "moves.coverage" -> "moves cov";
+            default -> "grade dist";
+        };
+    }
+}
