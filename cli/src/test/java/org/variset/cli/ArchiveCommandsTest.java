@@ -21,7 +21,7 @@ class ArchiveCommandsTest {
         assertThat(init.out()).contains("Created an empty archive at " + dir);
         CliRun info = CliRun.run(home, "--archive", dir, "info", "--format", "json").exits(ExitCode.OK);
         JsonNode j = new ObjectMapper().readTree(info.out());
-        assertThat(j.get("schema_version").asInt()).isEqualTo(1);
+        assertThat(j.get("schema_version").asInt()).isEqualTo(org.variset.archive.store.SchemaVersion.LATEST);
         for (String key : new String[] {"gyms", "walls", "resets", "routes", "holds", "setters"}) {
             assertThat(j.get(key).asLong()).as(key).isZero();
         }

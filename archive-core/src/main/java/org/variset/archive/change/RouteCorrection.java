@@ -9,6 +9,7 @@ import org.variset.archive.grade.GradeReader;
 import org.variset.archive.grade.GradeScale;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
+import org.variset.archive.store.ChangeLog;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 
@@ -70,6 +71,9 @@ public record RouteCorrection(String grade, GradeScale gradeScale, List<String> 
         if (notes != null) {
             changed.add("notes: changed");
             r.setNotes(notes);
+        }
+        if (!changed.isEmpty()) {
+            ChangeLog.routes(s, List.of(r.id()));
         }
         return changed;
     }

@@ -6,6 +6,7 @@ import org.variset.archive.gym.Gym;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.store.ArchiveQueries;
+import org.variset.archive.store.ChangeLog;
 
 /**
  * Takes back a mistaken import: the routes of a reset, or a given list of routes, with their holds. A reset left
@@ -59,6 +60,7 @@ public final class RouteRemoval {
     public static Plan remove(Session s, List<Route> routes) {
         Plan plan = preview(s, routes);
         List<Reset> resets = routes.stream().map(Route::reset).distinct().toList();
+        ChangeLog.routes(s, routes.stream().map(Route::id).toList());
         for (Route r : routes) {
             s.remove(r);
         }

@@ -5,6 +5,7 @@ import java.util.List;
 import org.hibernate.Session;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
+import org.variset.archive.store.ChangeLog;
 
 /** Renaming a setter, or merging two names of one person ("K. Ames" and "Kit Ames"), across the archive. */
 public final class SetterChanges {
@@ -23,6 +24,7 @@ public final class SetterChanges {
                     + "one person, merge them: variset setter merge \"" + from + "\" \"" + to + "\"");
         }
         old.rename(to);
+        ChangeLog.setter(s, old.id());
     }
 
     /**
@@ -39,6 +41,7 @@ public final class SetterChanges {
         }
         List<Route> routes = s.createSelectionQuery("select r from Route r join r.setters x where x = :s",
                 Route.class).setParameter("s", gone).getResultList();
+        ChangeLog.routes(s, routes.stream().map(Route::id).toList());
         for (Route r : routes) {
             List<Setter> next = new ArrayList<>();
             for (Setter x : r.setters()) {

@@ -1,10 +1,12 @@
 package org.variset.archive.change;
 
 import java.time.LocalDate;
+import java.util.ArrayList;
 import java.util.List;
 import org.hibernate.Session;
 import org.variset.archive.gym.Wall;
 import org.variset.archive.route.Route;
+import org.variset.archive.store.ChangeLog;
 
 /**
  * Takes a wall's old routes down when it is reset: every route of the wall set before the date and still up
@@ -32,16 +34,19 @@ public final class WallStrip {
         int stripped = 0;
         int same = 0;
         int down = 0;
+        List<Long> changed = new ArrayList<>();
         for (Route r : routes) {
             if (r.setOn().equals(on)) {
                 same++;
             } else if (r.standingOn(on)) {
                 r.setStrippedOn(on);
+                changed.add(r.id());
                 stripped++;
             } else {
                 down++;
             }
         }
+        ChangeLog.routes(session, changed);
         return new Result(stripped, same, down);
     }
 }

@@ -129,6 +129,17 @@ public final class ArchiveCatalog {
         return ids.get(0);
     }
 
+    /** The ids of a gym's routes with a label, oldest first. */
+    public List<Long> routesLabelled(long gymId, String label) {
+        return Sql.query(connection, "SELECT id FROM route WHERE gym_id = ? AND label = ? ORDER BY set_on, id",
+                List.of(gymId, label.strip()), rs -> rs.getLong(1));
+    }
+
+    /** How many routes the archive holds. */
+    public long routeCount() {
+        return Sql.query(connection, "SELECT COUNT(*) FROM route", List.of(), rs -> rs.getLong(1)).get(0);
+    }
+
     /** Every setter's name, sorted. */
     public List<String> setterNames() {
         return Sql.query(connection, "SELECT name FROM setter ORDER BY name", List.of(), rs -> rs.getString(1));

@@ -72,4 +72,21 @@ public final class GripDirection {
     public static double ofClock(int hours, int minutes) {
         return 30.0 * (hours % 12) + 0.5 * minutes;
     }
+
+    /** The direction each of the eight 45-degree sectors faces, sector 0 (up) first, clockwise. */
+    private static final String[] SECTOR_WORDS = {"up", "up-right", "right", "down-right", "down", "down-left",
+        "left", "up-left"};
+
+    /**
+     * The sector of a direction: k = floor((θ + 22.5) / 45) mod 8, computed on the degree value (metrics.md section 1),
+     * so 22.5 is in sector 1 and 337.5 in sector 0.
+     */
+    public static int sector(double degrees) {
+        return (int) Math.floor((degrees + 22.5) / 45.0) % SECTOR_WORDS.length;
+    }
+
+    /** The direction sector k faces, as a word ({@code up}, {@code down-left}). */
+    public static String sectorWord(int k) {
+        return SECTOR_WORDS[k];
+    }
 }

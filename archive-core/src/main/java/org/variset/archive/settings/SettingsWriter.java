@@ -8,6 +8,7 @@ import org.variset.archive.grade.BandSet;
 import org.variset.archive.grade.Discipline;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.gym.GymSetting;
+import org.variset.archive.store.ChangeLog;
 
 /**
  * Records a new setting value from a day on. Earlier values stay, so an audit of an earlier day still uses the
@@ -39,6 +40,9 @@ public final class SettingsWriter {
             }
         }
         session.persist(new GymSetting(gym, key.word(), scope, from, value == null ? "null" : value.toString()));
+        if (key == SettingKey.VOCABULARY || key == SettingKey.BANDS) {
+            ChangeLog.gym(session, gym.id()); // the search index reads terms and grade bands through these
+        }
     }
 
     private static void checkScope(SettingKey key, String scope) {

@@ -12,6 +12,7 @@ import org.variset.archive.route.Route;
 import org.variset.archive.store.Archive;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.cli.ExitCode;
+import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.convert.DateConverter;
 import org.variset.cli.convert.GradeScaleConverter;
 import picocli.CommandLine.Command;
@@ -90,6 +91,7 @@ final class AmendCommand extends VarisetSubcommand {
                         new IllegalArgumentException("no route '" + label + "' set on " + setOn + " on " + wall));
                 return c.apply(s, r, Vocabulary.defaults());
             });
+            IndexUpkeep.afterWrite(archive, err());
         }
         if (changed.isEmpty()) {
             out().println("Nothing to change: give at least one field (see --help).");

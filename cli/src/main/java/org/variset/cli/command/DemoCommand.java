@@ -9,6 +9,7 @@ import java.util.stream.Stream;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveStats;
 import org.variset.cli.ExitCode;
+import org.variset.cli.internal.IndexUpkeep;
 import org.variset.imports.load.ArchiveImporter;
 import org.variset.imports.load.ImportOptions;
 import org.variset.imports.load.ImportProgress;
@@ -38,6 +39,7 @@ final class DemoCommand extends VarisetSubcommand {
         try (Archive archive = Archive.create(dir.resolve("archive"))) {
             List<Path> files = SampleArchive.copyTo(dir.resolve("sample"));
             s = new ArchiveImporter(archive).run(files, ImportOptions.defaults(), ImportProgress.NONE);
+            IndexUpkeep.afterWrite(archive, err());
             stats = archive.stats();
         } catch (IOException e) {
             throw new IllegalArgumentException("cannot write the demo into " + dir + ": " + e.getMessage(), e);

@@ -3,7 +3,7 @@ package org.variset.cli.command;
 import java.nio.file.Path;
 import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
-import org.variset.cli.convert.PartialDate;
+import org.variset.archive.gym.PartialDate;
 import org.variset.cli.convert.PartialDateConverter;
 import org.variset.imports.export.ArchiveExporter;
 import org.variset.imports.export.ExportFormat;

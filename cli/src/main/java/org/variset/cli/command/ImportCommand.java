@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
+import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.internal.ConsoleProgress;
 import org.variset.cli.internal.Json;
 import org.variset.imports.ImportException;
@@ -49,6 +50,9 @@ final class ImportCommand extends VarisetSubcommand {
         try (Archive archive = openArchive();
                 ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal())) {
             s = new ArchiveImporter(archive).run(files, options, progress);
+            if (!s.dryRun()) {
+                IndexUpkeep.afterWrite(archive, err());
+            }
         } catch (ImportException e) {
             err().println("variset import: " + e.getMessage());
             return ExitCode.BAD_INPUT;

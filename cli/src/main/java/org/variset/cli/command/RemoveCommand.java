@@ -12,6 +12,7 @@ import org.variset.archive.route.Route;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveQueries;
 import org.variset.cli.ExitCode;
+import org.variset.cli.internal.IndexUpkeep;
 import org.variset.imports.ProblemList;
 import org.variset.imports.ImportException;
 import org.variset.imports.load.RouteKeys;
@@ -66,6 +67,7 @@ final class RemoveCommand extends VarisetSubcommand {
                 return ExitCode.OK;
             }
             RouteRemoval.Plan done = archive.fromTransaction(s -> RouteRemoval.remove(s, routes(s)));
+            IndexUpkeep.afterWrite(archive, err());
             out().println("Removed " + done.routes().size() + " routes and " + done.holds() + " holds.");
         }
         return ExitCode.OK;

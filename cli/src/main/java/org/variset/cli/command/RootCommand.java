@@ -17,7 +17,8 @@ import picocli.CommandLine.ScopeType;
         description = {"", "Keeps every reset, route and hold placement in an archive, and audits resets for "
                 + "variety of grip directions, holds, moves and grades.", ""},
         subcommands = {DemoCommand.class, InitCommand.class, InfoCommand.class, ImportCommand.class, ExportCommand.class,
-            AuditCommand.class, PlanCommand.class, TrendCommand.class, SettingsCommand.class,
+            AuditCommand.class, PlanCommand.class, TrendCommand.class, SearchCommand.class, SimilarCommand.class, ReindexCommand.class,
+            SettingsCommand.class,
             StripCommand.class, RemoveCommand.class, AmendCommand.class, SetterCommand.class, TemplateCommand.class,
             GradeCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit status:%n",

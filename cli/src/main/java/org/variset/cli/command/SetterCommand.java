@@ -3,6 +3,7 @@ package org.variset.cli.command;
 import org.variset.archive.change.SetterChanges;
 import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
+import org.variset.cli.internal.IndexUpkeep;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
 
@@ -32,6 +33,7 @@ final class SetterCommand implements Runnable {
         ExitCode execute() {
             try (Archive archive = openArchive()) {
                 archive.inTransaction(s -> SetterChanges.rename(s, from, to));
+                IndexUpkeep.afterWrite(archive, err());
             }
             out().println("Renamed setter '" + from + "' to '" + to.strip() + "' on every route.");
             return ExitCode.OK;
@@ -53,6 +55,7 @@ final class SetterCommand implements Runnable {
             int n;
             try (Archive archive = openArchive()) {
                 n = archive.fromTransaction(s -> SetterChanges.merge(s, from, into));
+                IndexUpkeep.afterWrite(archive, err());
             }
             out().println("Merged '" + from + "' into '" + into + "': " + n + " routes now name '" + into + "'.");
             return ExitCode.OK;

@@ -23,6 +23,7 @@ import org.variset.archive.settings.SettingsWriter;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveQueries;
 import org.variset.cli.ExitCode;
+import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.convert.DateConverter;
 import org.variset.cli.internal.Json;
 import picocli.CommandLine.Command;
@@ -121,6 +122,7 @@ final class SettingsCommand extends VarisetSubcommand {
                 Gym entity = new ArchiveQueries(s).gym(g.name()).orElseThrow();
                 SettingsWriter.set(s, entity, key, scope, from, text == null ? null : key.parse(text), before);
             });
+            IndexUpkeep.afterWrite(archive, cmd.err());
             String what = key.word() + (where.wall != null ? " of wall " + where.wall.strip()
                     : where.discipline != null ? " (" + scope + ")" : "");
             cmd.out().println(text == null ? "From " + from + ", " + what + " of " + g.name() + " is back to its "

@@ -6,6 +6,7 @@ import org.variset.archive.change.WallStrip;
 import org.variset.archive.gym.Wall;
 import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
+import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.convert.DateConverter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -36,6 +37,7 @@ final class StripCommand extends VarisetSubcommand {
                 Wall w = lookup.wall(lookup.gym(gym.gym), wall);
                 return WallStrip.strip(s, w, on);
             });
+            IndexUpkeep.afterWrite(archive, err());
         }
         out().println("Stripped " + r.stripped() + " routes of " + wall + " on " + on + "; " + r.setThatDay()
                 + " set that day stay up; " + r.alreadyDown() + " were already down.");

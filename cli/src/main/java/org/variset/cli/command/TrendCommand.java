@@ -5,7 +5,7 @@ import org.variset.archive.gym.GymCalendar;
 import org.variset.archive.read.ArchiveCatalog;
 import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
-import org.variset.cli.convert.PartialDate;
+import org.variset.archive.gym.PartialDate;
 import org.variset.cli.convert.PartialDateConverter;
 import org.variset.cli.internal.Json;
 import org.variset.reports.trend.Trend;

@@ -1,5 +1,6 @@
 package org.variset.cli.convert;
 
+import org.variset.archive.gym.PartialDate;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 

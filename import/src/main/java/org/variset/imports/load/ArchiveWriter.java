@@ -11,6 +11,7 @@ import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
 import org.variset.archive.store.ArchiveQueries;
+import org.variset.archive.store.ChangeLog;
 import org.variset.imports.row.HoldRow;
 import org.variset.imports.row.RouteKey;
 import org.variset.imports.row.RouteRow;
@@ -42,8 +43,26 @@ final class ArchiveWriter {
         this.plan = plan;
     }
 
-    /** Writes walls, routes and holds; returns the number of holds written. */
+    /** Writes walls, routes and holds, and records the routes written in the change log; returns holds written. */
     long write(List<RowSource> sources, RouteResolver resolver, ImportProgress progress) {
+        long holds = writeRoutesAndHolds(sources, resolver, progress);
+        java.util.Set<Long> changed = new java.util.TreeSet<>();
+        for (RouteRow row : plan.routes.values()) {
+            RouteKey k = row.key();
+            if (plan.newRoutes.contains(k) || plan.changedRoutes.contains(k) && plan.options.update()) {
+                changed.add(routeId(k));
+            }
+        }
+        for (RouteKey k : plan.holds.keySet()) {
+            if (plan.writesHoldsOf(k)) {
+                changed.add(routeId(k));
+            }
+        }
+        ChangeLog.routes(session, changed);
+        return holds;
+    }
+
+    private long writeRoutesAndHolds(List<RowSource> sources, RouteResolver resolver, ImportProgress progress) {
         for (WallRow w : plan.walls.values()) {
             Wall wall = wall(w.gym(), w.wall());
             List<String> key = List.of(w.gym(), w.wall());

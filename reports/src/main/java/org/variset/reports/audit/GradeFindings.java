@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.variset.archive.grade.Discipline;
+import org.variset.reports.figures.FeatureText;
 import org.variset.reports.figures.SetFigures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
@@ -41,9 +42,9 @@ final class GradeFindings {
             if (!g.gaps().isEmpty()) {
                 List<String> shares = new ArrayList<>();
                 g.gaps().forEach(b -> shares.add(FigureFormat.percent(g.target().get(b))));
-                out.add(new Finding("grade_gap", 7 + g.gaps().size() * 0.1, "No " + RepeatFindings.list(g.gaps(), 5)
+                out.add(new Finding("grade_gap", 7 + g.gaps().size() * 0.1, "No " + FeatureText.list(g.gaps(), 5)
                         .replace(" and ", " or ") + " among " + whose + "; the target gives "
-                        + (g.gaps().size() == 1 ? "it " : "them ") + RepeatFindings.list(shares, 5) + example + "."));
+                        + (g.gaps().size() == 1 ? "it " : "them ") + FeatureText.list(shares, 5) + example + "."));
             }
             if (g.emdToTarget() != null && g.emdToTarget() >= FAR) {
                 out.add(new Finding("grade_distance", 5 + g.emdToTarget(), capitalised(whose) + " sit on average "

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.variset.archive.route.GripDirection;
 
 /**
  * Descriptive circular statistics and the Rayleigh test for grip directions (metrics.md section 1).
@@ -93,18 +94,14 @@ public final class CircularStatistics {
                 (sectors[2] + sectors[6]) / (double) n, why);
     }
 
-    /** The direction each sector faces, sector 0 (up) first, clockwise. */
-    private static final String[] SECTOR_WORDS = {"up", "up-right", "right", "down-right", "down", "down-left",
-        "left", "up-left"};
-
-    /** The direction sector k faces, as a word ({@code up}, {@code down-left}). */
+    /** The direction sector k faces, as a word ({@code up}, {@code down-left}); see {@link GripDirection}. */
     public static String sectorWord(int k) {
-        return SECTOR_WORDS[k];
+        return GripDirection.sectorWord(k);
     }
 
-    /** Sector k = floor((θ + 22.5) / 45) mod 8, on the degree value (metrics.md); 0 faces up, 2 right. */
+    /** Sector k = floor((θ + 22.5) / 45) mod 8, on the degree value (metrics.md); see {@link GripDirection}. */
     public static int sector(double degrees) {
-        return (int) Math.floor((degrees + 22.5) / 45.0) % SECTORS;
+        return GripDirection.sector(degrees);
     }
 
     /**

@@ -1,4 +1,4 @@
-package org.variset.cli.convert;
+package org.variset.archive.gym;
 
 import java.time.LocalDate;
 import java.time.YearMonth;

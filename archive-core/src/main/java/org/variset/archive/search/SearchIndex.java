@@ -1,0 +1,290 @@
+package org.variset.archive.search;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.apache.lucene.document.Document;
+import org.apache.lucene.facet.FacetsConfig;
+import org.apache.lucene.index.DirectoryReader;
+import org.apache.lucene.index.IndexWriter;
+import org.apache.lucene.index.IndexWriterConfig;
+import org.apache.lucene.index.SegmentInfos;
+import org.apache.lucene.index.Term;
+import org.apache.lucene.store.ByteBuffersDirectory;
+import org.apache.lucene.store.Directory;
+import org.apache.lucene.store.FSDirectory;
+import org.variset.archive.read.ArchiveCatalog;
+import org.variset.archive.read.GymRecord;
+import org.variset.archive.read.RouteFilter;
+import org.variset.archive.read.RouteReader;
+import org.variset.archive.read.RouteRecord;
+import org.variset.archive.settings.SettingsReader;
+import org.variset.archive.settings.SettingsTimeline;
+import org.variset.archive.store.ArchiveException;
+import org.variset.archive.store.ChangeLog;
+
+/**
+ * The Lucene index of an archive's routes, in the folder {@code index} of the archive. It is derived data: each
+ * commit carries the database's change stamp ({@link ChangeLog}) it reflects, and {@link #sync} applies the changes
+ * it has not seen, or rebuilds it when it is missing, damaged, of another format or ahead of the database (an
+ * archive restored from a backup). Writes are committed whole or not at all (Lucene's two-phase commit), so a kill
+ * leaves the last commit, which the next sync brings up to date.
+ */
+public final class SearchIndex implements AutoCloseable {
+    /** The document layout; a change of layout rebuilds every index made with another. */
+    static final String FORMAT = "1";
+    private static final String FORMAT_KEY = "variset-index-format";
+    private static final String STAMP_KEY = "variset-change-stamp";
+    private static final int CHUNK = 1_000;
+
+    private final Directory directory;
+    private final FacetsConfig facets = RouteDocuments.facetsConfig();
+
+    private SearchIndex(Directory directory) {
+        this.directory = directory;
+    }
+
+    /** The index of the archive in a folder (its {@code index} subfolder, created when first written). */
+    public static SearchIndex at(Path archiveDir) {
+        try {
+            Path p = archiveDir.resolve("index");
+            Files.createDirectories(p);
+            return new SearchIndex(FSDirectory.open(p));
+        } catch (IOException e) {
+            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot open the search index in "
+                    + archiveDir + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** An index in memory (for an archive in memory). */
+    public static SearchIndex inMemory() {
+        return new SearchIndex(new ByteBuffersDirectory());
+    }
+
+    /** The change stamp the index reflects, or -1 when it is missing, unreadable or of another format. */
+    public long stamp() {
+        try {
+            if (!DirectoryReader.indexExists(directory)) {
+                return -1;
+            }
+            Map<String, String> data = SegmentInfos.readLatestCommit(directory).getUserData();
+            if (!FORMAT.equals(data.get(FORMAT_KEY)) || data.get(STAMP_KEY) == null) {
+                return -1;
+            }
+            return Long.parseLong(data.get(STAMP_KEY));
+        } catch (IOException | RuntimeException e) {
+            return -1;
+        }
+    }
+
+    /** Brings the index up to date with the database: nothing, the changes it has not seen, or a rebuild. */
+    public IndexSync sync(Connection c, IndexProgress progress) {
+        long db = ChangeLog.stamp(c);
+        long idx = stamp();
+        if (idx == db) {
+            return new IndexSync(IndexSync.Action.CURRENT, 0, "", db);
+        }
+        if (idx < 0) {
+            return rebuild(c, progress, exists() ? "it was unreadable or from another version of Variset"
+                    : "there was none yet");
+        }
+        if (idx > db) {
+            return rebuild(c, progress, "it was ahead of the archive (was the archive restored from a backup?)");
+        }
+        return catchUp(c, idx, db, progress);
+    }
+
+    /** Builds the index again from every route of the database. */
+    public IndexSync rebuild(Connection c, IndexProgress progress, String reason) {
+        long db = ChangeLog.stamp(c);
+        Map<String, SettingsTimeline> timelines = timelines(c);
+        long total = count(c);
+        long[] done = {0};
+        if (stamp() < 0) {
+            clear();
+        }
+        try (IndexWriter w = writer(IndexWriterConfig.OpenMode.CREATE)) {
+            new RouteReader(c).forEachChunk(RouteFilter.all(), CHUNK, chunk -> {
+                for (RouteRecord r : chunk) {
+                    add(w, r, timelines);
+                }
+                done[0] += chunk.size();
+                progress.indexed(done[0], total);
+            });
+            commit(w, db);
+        } catch (IOException e) {
+            throw failure(e);
+        }
+        return new IndexSync(IndexSync.Action.REBUILT, done[0], reason, db);
+    }
+
+    private IndexSync catchUp(Connection c, long from, long to, IndexProgress progress) {
+        List<Long> changed = ChangeLog.changedBetween(c, from, to);
+        Map<String, SettingsTimeline> timelines = timelines(c);
+        RouteReader reader = new RouteReader(c);
+        try (IndexWriter w = writer(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)) {
+            for (int i = 0; i < changed.size(); i += CHUNK) {
+                List<Long> ids = changed.subList(i, Math.min(changed.size(), i + CHUNK));
+                Set<Long> present = new HashSet<>();
+                for (RouteRecord r : reader.read(RouteFilter.all().withIds(ids))) {
+                    present.add(r.id());
+                    add(w, r, timelines);
+                }
+                for (Long id : ids) {
+                    if (!present.contains(id)) {
+                        w.deleteDocuments(new Term(SearchFields.ID, Long.toString(id)));
+                    }
+                }
+                progress.indexed(Math.min(changed.size(), i + CHUNK), changed.size());
+            }
+            commit(w, to);
+        } catch (IOException e) {
+            throw failure(e);
+        }
+        return new IndexSync(IndexSync.Action.CAUGHT_UP, changed.size(), "", to);
+    }
+
+    private void add(IndexWriter w, RouteRecord r, Map<String, SettingsTimeline> timelines) {
+        try {
+            Document d = facets.build(RouteDocuments.of(r, timelines.get(r.gym()).on(r.setOn())));
+            w.updateDocument(new Term(SearchFields.ID, Long.toString(r.id())), d);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private static Map<String, SettingsTimeline> timelines(Connection c) {
+        SettingsReader settings = new SettingsReader(c);
+        Map<String, SettingsTimeline> out = new HashMap<>();
+        for (GymRecord g : new ArchiveCatalog(c).gyms()) {
+            out.put(g.name(), new SettingsTimeline(settings.history(g.id())));
+        }
+        return out;
+    }
+
+    private static long count(Connection c) {
+        return new ArchiveCatalog(c).routeCount();
+    }
+
+    private IndexWriter writer(IndexWriterConfig.OpenMode mode) throws IOException {
+        IndexWriterConfig cfg = new IndexWriterConfig(new TextAnalyzer()).setOpenMode(mode)
+                .setRAMBufferSizeMB(64);
+        return new IndexWriter(directory, cfg);
+    }
+
+    private static void commit(IndexWriter w, long stamp) throws IOException {
+        Map<String, String> data = new HashMap<>();
+        data.put(FORMAT_KEY, FORMAT);
+        data.put(STAMP_KEY, Long.toString(stamp));
+        w.setLiveCommitData(data.entrySet());
+        w.commit();
+    }
+
+    /** Deletes every file of an index that cannot be read, so that it can be built afresh. */
+    private void clear() {
+        try {
+            for (String f : directory.listAll()) {
+                if (!f.equals(IndexWriter.WRITE_LOCK_NAME)) {
+                    directory.deleteFile(f);
+                }
+            }
+        } catch (IOException e) {
+            throw failure(e);
+        }
+    }
+
+    private boolean exists() {
+        try {
+            return directory.listAll().length > 0;
+        } catch (IOException e) {
+            return false;
+        }
+    }
+
+    /**
+     * Searches. The index should be in step with the database ({@link #sync}) first.
+     *
+     * @throws QuerySyntaxException for a query that cannot be read, saying where and what was expected
+     */
+    public SearchHits search(SearchRequest r, org.variset.archive.vocabulary.Vocabulary vocabulary) {
+        org.apache.lucene.search.Query q = SearchQueries.of(r, vocabulary);
+        try (DirectoryReader reader = DirectoryReader.open(directory)) {
+            return SearchQueries.run(new org.apache.lucene.search.IndexSearcher(reader), q, r, facets);
+        } catch (IOException e) {
+            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the search index: "
+                    + e.getMessage() + ". Run 'variset reindex' to build it again.", e);
+        }
+    }
+
+    /**
+     * Routes that share something with a route: a hand hold of the same type facing the same way, or a move, in the
+     * same discipline; the most alike first by the index's scoring (BM25). Callers score them exactly themselves.
+     *
+     * @return up to {@code n} route ids, never the route's own
+     */
+    public List<Long> candidates(RouteRecord route, org.variset.archive.vocabulary.Vocabulary vocabulary, int n) {
+        org.apache.lucene.search.Query q = Candidates.of(route, vocabulary);
+        if (q == null) {
+            return List.of();
+        }
+        try (DirectoryReader reader = DirectoryReader.open(directory)) {
+            org.apache.lucene.search.IndexSearcher s = new org.apache.lucene.search.IndexSearcher(reader);
+            List<Long> out = new ArrayList<>();
+            org.apache.lucene.index.StoredFields stored = s.storedFields();
+            for (org.apache.lucene.search.ScoreDoc d : s.search(q, n).scoreDocs) {
+                out.add(Long.parseLong(stored.document(d.doc).get(SearchFields.ID)));
+            }
+            return out;
+        } catch (IOException e) {
+            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the search index: "
+                    + e.getMessage() + ". Run 'variset reindex' to build it again.", e);
+        }
+    }
+
+    /** The Lucene directory, for searching and checking. */
+    Directory directory() {
+        return directory;
+    }
+
+    /** The shared facets configuration. */
+    FacetsConfig facetsConfig() {
+        return facets;
+    }
+
+    private static ArchiveException failure(IOException e) {
+        return new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot write the search index: "
+                + e.getMessage() + ". Run 'variset reindex' to build it again.", e);
+    }
+
+    @Override
+    public void close() {
+        try {
+            directory.close();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** Ids of the routes in the index (for checks and tests). */
+    List<Long> ids() throws IOException {
+        List<Long> out = new ArrayList<>();
+        try (DirectoryReader r = DirectoryReader.open(directory)) {
+            org.apache.lucene.index.StoredFields stored = r.storedFields();
+            org.apache.lucene.util.Bits live = org.apache.lucene.index.MultiBits.getLiveDocs(r);
+            for (int i = 0; i < r.maxDoc(); i++) {
+                if (live == null || live.get(i)) {
+                    out.add(Long.parseLong(stored.document(i).get(SearchFields.ID)));
+                }
+            }
+        }
+        return out;
+    }
+}

@@ -1,0 +1,115 @@
+package org.variset.archive.search;
+
+import java.time.LocalDate;
+import java.time.ZoneId;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.hibernate.Session;
+import org.variset.archive.grade.Discipline;
+import org.variset.archive.grade.GradeReader;
+import org.variset.archive.gym.Gym;
+import org.variset.archive.gym.Wall;
+import org.variset.archive.gym.WallDiscipline;
+import org.variset.archive.route.HoldPlacement;
+import org.variset.archive.route.HoldRole;
+import org.variset.archive.route.HoldSize;
+import org.variset.archive.route.Reset;
+import org.variset.archive.route.Route;
+import org.variset.archive.route.Setter;
+import org.variset.archive.store.ChangeLog;
+
+/**
+ * Two invented gyms for search tests. Birchfield (boulders on the Cave, rope routes on the Tower) and Quayside (one
+ * boulder on its own Cave):
+ * <pre>
+ * Birchfield Cave C1 V3  2026-01-10..2026-02-07  heel hook, dyno     crimp@0, pinch@90, jug@0   Ada    red
+ * Birchfield Cave C2 V5  2026-02-07..            toe hook, gaston    sloper@180, crimp@0        Ada;Bo blue  "slopey top"
+ * Birchfield Cave C3 6A  2026-02-07..            heel hook, mantle   pinch@270, volume          Bo     green
+ * Birchfield Cave C4 V8  2026-03-14..            campus, dyno        crimp@45, pocket@0         Cy     black
+ * Birchfield Tower T1 6a 2026-01-20..            layback, stem       jug@0, edge@90 (rope)      Cy     teal
+ * Birchfield Tower T2 5.11b 2026-01-20..         drop knee           crimp@0 (rope)             Ada    navy
+ * Quayside   Cave Q1 V4  2026-02-01..            heel hook, dyno     crimp@0, pinch@90          Dee    red
+ * </pre>
+ */
+final class SearchFixture {
+    private SearchFixture() {
+    }
+
+    static void store(Session s) {
+        GradeReader g = GradeReader.standard();
+        Gym birch = new Gym("Birchfield", ZoneId.of("UTC"));
+        Gym quay = new Gym("Quayside", ZoneId.of("UTC"));
+        s.persist(birch);
+        s.persist(quay);
+        Wall cave = wall(s, birch, "Cave", WallDiscipline.BOULDER, 35.0);
+        Wall tower = wall(s, birch, "Tower", WallDiscipline.ROPE, 5.0);
+        Wall qcave = wall(s, quay, "Cave", WallDiscipline.BOULDER, 20.0);
+        Setter ada = setter(s, "Ada Quill");
+        Setter bo = setter(s, "Bo Renner");
+        Setter cy = setter(s, "Cy Ostrova");
+        Setter dee = setter(s, "Dee Hartnell");
+        Reset jan = reset(s, cave, "Cave Jan", "2026-01-10");
+        Reset feb = reset(s, cave, "Cave Feb", "2026-02-07");
+        Reset mar = reset(s, cave, "Cave Mar", "2026-03-14");
+        Reset tow = reset(s, tower, "Tower Jan", "2026-01-20");
+        Reset q = reset(s, qcave, "Quay Feb", "2026-02-01");
+        route(s, jan, "C1", "V3", Discipline.BOULDER, "2026-01-10", "2026-02-07", List.of(ada), "red",
+                List.of("heel hook", "dyno"), List.of("power"), null, "crimp@0 pinch@90 jug@0", g);
+        route(s, feb, "C2", "V5", Discipline.BOULDER, "2026-02-07", null, List.of(ada, bo), "blue",
+                List.of("toe hook", "gaston"), List.of("slopey"), "slopey top out", "sloper@180 crimp@0", g);
+        route(s, feb, "C3", "6A", Discipline.BOULDER, "2026-02-07", null, List.of(bo), "green",
+                List.of("heel hook", "mantle"), List.of("technical"), null, "pinch@270 volume", g);
+        route(s, mar, "C4", "V8", Discipline.BOULDER, "2026-03-14", null, List.of(cy), "black",
+                List.of("campus", "dyno"), List.of("power"), null, "crimp@45 pocket@0", g);
+        route(s, tow, "T1", "6a", Discipline.ROPE, "2026-01-20", null, List.of(cy), "teal",
+                List.of("layback", "stem"), List.of("endurance"), null, "jug@0 edge@90", g);
+        route(s, tow, "T2", "5.11b", Discipline.ROPE, "2026-01-20", null, List.of(ada), "navy",
+                List.of("drop knee"), List.of(), null, "crimp@0", g);
+        route(s, q, "Q1", "V4", Discipline.BOULDER, "2026-02-01", null, List.of(dee), "red",
+                List.of("heel hook", "dyno"), List.of("power"), null, "crimp@0 pinch@90", g);
+        s.flush();
+        ChangeLog.routes(s, s.createSelectionQuery("select id from Route", Long.class).getResultList());
+    }
+
+    private static Wall wall(Session s, Gym gym, String name, WallDiscipline d, double angle) {
+        Wall w = new Wall(gym, name);
+        w.describe(d, angle, 4.0, 8.0, null);
+        s.persist(w);
+        return w;
+    }
+
+    private static Setter setter(Session s, String name) {
+        Setter x = new Setter(name);
+        s.persist(x);
+        return x;
+    }
+
+    private static Reset reset(Session s, Wall w, String label, String on) {
+        Reset r = new Reset(w, label, LocalDate.parse(on));
+        s.persist(r);
+        return r;
+    }
+
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    private static void route(Session s, Reset reset, String label, String grade, Discipline d, String set,
+            String stripped, List<Setter> setters, String color, List<String> moves, List<String> styles,
+            String notes, String holds, GradeReader g) {
+        Route r = new Route(reset, label, LocalDate.parse(set), d, g.read(grade, d, null, Set.of()));
+        r.setStrippedOn(stripped == null ? null : LocalDate.parse(stripped));
+        r.setSetters(setters);
+        r.setColor(color);
+        r.setMoves(moves);
+        r.setStyles(styles);
+        r.setNotes(notes);
+        int seq = 1;
+        for (String h : holds.split(" ")) {
+            String[] td = h.split("@");
+            List<Double> grips = td.length == 1 ? List.of() : List.of(Double.parseDouble(td[1]));
+            r.addHold(new HoldPlacement.Spec(seq++, HoldRole.HAND, td[0], HoldSize.M, grips, null, null, null,
+                    Map.of()));
+        }
+        s.persist(r);
+        r.holds().forEach(s::persist);
+    }
+}
