@@ -28,6 +28,8 @@ public record VarisetCli(BufferedReader in, PrintWriter out, PrintWriter err, Ma
     static {
         // Hibernate logs through JBoss Logging; send it to java.util.logging, which RootCommand keeps quiet.
         System.setProperty("org.jboss.logging.provider", "jdk");
+        // Charts are drawn with Java2D into PDF; there is never a screen.
+        System.setProperty("java.awt.headless", "true");
     }
 
     /** Checks the fields. */

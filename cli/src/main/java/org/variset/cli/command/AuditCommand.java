@@ -14,6 +14,10 @@ import org.variset.reports.audit.AuditJson;
 import org.variset.reports.audit.AuditTarget;
 import org.variset.reports.audit.AuditText;
 import org.variset.reports.audit.Auditor;
+import org.variset.reports.audit.Subject;
+import org.variset.reports.pdf.AuditPdf;
+import org.variset.reports.plan.ResetPlan;
+import org.variset.reports.plan.ResetPlanner;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -33,7 +37,8 @@ import picocli.CommandLine.ParameterException;
         footer = {"", "The score (0-100) is a heuristic: a weighted mean of its parts, always shown beside them.",
             "", "Examples:", "  variset audit --reset \"Cave 2026-03-02\"", "  variset audit --wall Cave --on 2026-03-10",
             "  variset audit --standing-on 2026-06-30 --format json",
-            "  variset audit --setter \"Ines Marlow\" --from 2026-01 --to 2026-06"})
+            "  variset audit --setter \"Ines Marlow\" --from 2026-01 --to 2026-06",
+            "  variset audit --wall Cave --pdf cave-audit.pdf --paper letter"})
 final class AuditCommand extends VarisetSubcommand {
     @Mixin
     GymOptions gym;
@@ -71,12 +76,27 @@ final class AuditCommand extends VarisetSubcommand {
     @Mixin
     FormatOptions format;
 
+    @Mixin
+    PdfFileOptions pdf;
+
     @Override
     ExitCode execute() {
         Audit audit;
+        ResetPlan plan = null;
+        LocalDate today;
         try (Archive archive = openArchive()) {
             audit = new Auditor(archive.connection()).audit(target(archive));
+            today = new GymCalendar(root().cli().clock()).today(new ArchiveCatalog(archive.connection())
+                    .gym(audit.subject().gym()).zone());
+            if (pdf.wanted() && audit.subject().kind() == Subject.Kind.RESET) {
+                ResetPlanner planner = new ResetPlanner(archive.connection());
+                Subject s = audit.subject();
+                plan = planner.plan(s.gym(), s.wall(), planner.nextDue(s.gym(), s.wall(), s.on()),
+                        Math.max(1, audit.audited().routes().size()), ResetPlanner.DEFAULT_MARGIN);
+            }
         }
+        ResetPlan next = plan;
+        pdf.write(today, err(), (options, out) -> AuditPdf.write(audit, next, options, out));
         if (format.json()) {
             out().println(Json.write(AuditJson.of(audit)));
         } else {

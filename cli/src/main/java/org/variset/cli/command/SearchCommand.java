@@ -23,6 +23,7 @@ import org.variset.cli.ExitCode;
 import org.variset.cli.internal.ConsoleProgress;
 import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.internal.Json;
+import org.variset.reports.pdf.StudySheetPdf;
 import org.variset.reports.route.RouteText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -48,7 +49,8 @@ import picocli.CommandLine.Parameters;
             "  wall:cav*              a name that starts with cav", ""},
         footer = {"", "Examples:", "  variset search heel hook grade:V4..V5 wall:Cave hold:sloper",
             "  variset search \"hold:pinch@270 OR hold:pinch@90\" set:2026-03..2026-05 --facets",
-            "  variset search move:undercling --standing-on 2026-06-01 --sort grade --format json"})
+            "  variset search move:undercling --standing-on 2026-06-01 --sort grade --format json",
+            "  variset search heel hook wall:Cave --limit 12 --pdf heel-hooks.pdf"})
 final class SearchCommand extends VarisetSubcommand {
     @Parameters(paramLabel = "QUERY", arity = "1..*", description = "The query (several words are joined).")
     List<String> words;
@@ -78,6 +80,9 @@ final class SearchCommand extends VarisetSubcommand {
     @Mixin
     FormatOptions format;
 
+    @Mixin
+    PdfFileOptions pdf;
+
     @Override
     ExitCode execute() {
         String query = String.join(" ", words);
@@ -101,6 +106,7 @@ final class SearchCommand extends VarisetSubcommand {
             } else {
                 print(hits, routes);
             }
+            pdf.write(today, err(), (options, out) -> StudySheetPdf.write(query, hits.total(), routes, options, out));
         } catch (QuerySyntaxException e) {
             err().println("variset search: " + e.getMessage());
             err().println(e.pointer());

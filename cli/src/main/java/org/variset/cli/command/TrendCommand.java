@@ -8,6 +8,7 @@ import org.variset.cli.ExitCode;
 import org.variset.archive.gym.PartialDate;
 import org.variset.cli.convert.PartialDateConverter;
 import org.variset.cli.internal.Json;
+import org.variset.reports.pdf.TrendPdf;
 import org.variset.reports.trend.Trend;
 import org.variset.reports.trend.TrendJson;
 import org.variset.reports.trend.TrendReport;
@@ -24,7 +25,8 @@ import picocli.CommandLine.ParameterException;
                 + "overdue), route lifetimes, the setter mix with each setter's grip, hold and move profile, the "
                 + "period's grades against the target, and its near-repeats.", ""},
         footer = {"", "Formats: text, json, or csv (the monthly series, one row per day and wall).", "",
-            "Examples:", "  variset trend --year 2026", "  variset trend --from 2026-03 --to 2026-08 --format csv"})
+            "Examples:", "  variset trend --year 2026 --pdf annual-2026.pdf",
+            "  variset trend --from 2026-03 --to 2026-08 --format csv"})
 final class TrendCommand extends VarisetSubcommand {
     @Mixin
     GymOptions gym;
@@ -44,6 +46,9 @@ final class TrendCommand extends VarisetSubcommand {
             description = "text, json or csv (default: ${DEFAULT-VALUE}).")
     String format;
 
+    @Mixin
+    PdfFileOptions pdf;
+
     @Override
     ExitCode execute() {
         if (!format.matches("text|json|csv")) {
@@ -53,13 +58,15 @@ final class TrendCommand extends VarisetSubcommand {
             throw new ParameterException(spec.commandLine(), "give --year, or --from (with --to if not today)");
         }
         Trend t;
+        LocalDate today;
         try (Archive archive = openArchive()) {
-            LocalDate today = new GymCalendar(root().cli().clock()).today(new ArchiveCatalog(archive.connection())
+            today = new GymCalendar(root().cli().clock()).today(new ArchiveCatalog(archive.connection())
                     .gym(gym.gym).zone());
             LocalDate first = year != null ? LocalDate.of(year, 1, 1) : from.first();
             LocalDate last = year != null ? LocalDate.of(year, 12, 31) : to == null ? today : to.last();
             t = new TrendReport(archive.connection()).of(gym.gym, first, last, today);
         }
+        pdf.write(today, err(), (options, out) -> TrendPdf.write(t, options, out));
         switch (format) {
             case "json" -> out().println(Json.write(TrendJson.of(t)));
             case "csv" -> out().print(TrendJson.csv(t));

@@ -36,9 +36,18 @@ public final class FigureFormat {
         return DECIMALS.getOrDefault(last, 2);
     }
 
-    /** The figure rounded half-up to its key's decimals, or {@link #NONE}. */
+    /**
+     * The figure rounded half-up to its key's decimals, or {@link #NONE}; a p-value (key ending {@code _p}) below
+     * 0.001 reads {@code < 0.001} rather than a rounded zero.
+     */
     public static String of(String key, Double value) {
-        return value == null ? NONE : round(value, decimals(key));
+        if (value == null) {
+            return NONE;
+        }
+        if (key.endsWith("_p") && value < 0.001) {
+            return "< 0.001";
+        }
+        return round(value, decimals(key));
     }
 
     /** A value rounded half-up to a number of decimals. */

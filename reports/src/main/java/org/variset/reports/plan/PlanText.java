@@ -57,10 +57,10 @@ public final class PlanText {
                         p.distanceAfter()) + " (Wasserstein-1 distance, the least any " + p.routes()
                 + " slots can give" + (p.targetIsDefault() ? "; against the example pyramid" : "") + ").");
         long restTotal = java.util.Arrays.stream(p.rest()).sum();
-        out.add("  band   up elsewhere   target after reset   proposed");
+        out.add("  band   up elsewhere   routes the target wants   proposed");
         for (int i = 0; i < p.bands().size(); i++) {
             double wanted = p.targetShares()[i] * (restTotal + p.routes());
-            out.add(String.format("  %-5s  %12d   %18s   %8d", p.bands().get(i), p.rest()[i],
+            out.add(String.format("  %-5s  %12d   %23s   %8d", p.bands().get(i), p.rest()[i],
                     FigureFormat.round(wanted, 1), p.slots()[i]));
         }
         if (p.outsideTarget() > 0) {

@@ -103,6 +103,19 @@ public final class ResetPlanner {
                 shapes, why);
     }
 
+    /**
+     * The day a wall's reset after the given one falls due: that reset's date plus the wall's cycle (settings in
+     * effect on that date).
+     */
+    public LocalDate nextDue(String gymName, String wallName, LocalDate resetOn) {
+        GymRecord gym = catalog.gym(gymName);
+        WallRecord wall = catalog.wall(gym, wallName);
+        List<RouteRecord> routes = catalog.latestResetOnOrBefore(wall.id(), resetOn)
+                .map(r -> reader.read(RouteFilter.reset(r.id()))).orElse(List.of());
+        return resetOn.plusDays(settingsReader.inEffectOn(gym.id(), resetOn).cycleDays(wall, discipline(wall,
+                routes)));
+    }
+
     private static Discipline discipline(WallRecord wall, List<RouteRecord> latest) {
         if (wall.discipline() == WallDiscipline.ROPE) {
             return Discipline.ROPE;

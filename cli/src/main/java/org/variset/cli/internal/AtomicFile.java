@@ -1,0 +1,68 @@
+package org.variset.cli.internal;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/**
+ * Writes a file whole or not at all: into a temporary sibling, moved into place when complete. An existing file is
+ * replaced only when asked.
+ */
+public final class AtomicFile {
+    private AtomicFile() {
+    }
+
+    /** What writes the content. */
+    @FunctionalInterface
+    public interface Content {
+        /** Writes the content to the stream. */
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    /**
+     * Writes a file.
+     *
+     * @throws IllegalArgumentException when the file exists and {@code replace} is false, or its folder is missing
+     *     or cannot be written (the message says which and how to fix it)
+     */
+    public static void write(Path target, boolean replace, Content content) {
+        Path file = target.toAbsolutePath().normalize();
+        Path dir = file.getParent();
+        if (Files.isDirectory(file)) {
+            throw new IllegalArgumentException(target + " is a folder; give a file name, such as " + target.resolve(
+                    "audit.pdf"));
+        }
+        if (Files.exists(file) && !replace) {
+            throw new IllegalArgumentException(target + " exists already; give --force to replace it, or another name");
+        }
+        if (dir == null || !Files.isDirectory(dir)) {
+            throw new IllegalArgumentException("cannot write " + target + ": the folder " + dir + " does not exist");
+        }
+        Path tmp = null;
+        try {
+            tmp = Files.createTempFile(dir, "." + file.getFileName(), ".part");
+            try (OutputStream out = Files.newOutputStream(tmp)) {
+                content.writeTo(out);
+            }
+            try {
+                Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING);
+            }
+            tmp = null;
+        } catch (IOException e) {
+            throw new IllegalArgumentException("cannot write " + target + ": " + e.getMessage(), e);
+        } finally {
+            if (tmp != null) {
+                try {
+                    Files.deleteIfExists(tmp);
+                } catch (IOException ignored) {
+                    // The temporary file is hidden and named after the target; nothing else depends on it.
+                }
+            }
+        }
+    }
+}
