@@ -2,33 +2,125 @@ package org.variset.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
 import org.junit.jupiter.api.io.TempDir;
 
+/** The demo on the bundled sample: each story planted by the generator is found in the demo's own outputs. */
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
 class DemoCommandTest {
-    @TempDir
-    Path home;
+    private static final ObjectMapper JSON = new ObjectMapper();
 
-    @Test
-    void loadsTheSampleIntoItsOwnFolderAndCanRunAgain() {
-        String out = home.resolve("demo").toString();
-        CliRun first = CliRun.run(home, "demo", "--out", out).exits(ExitCode.OK);
-        assertThat(first.out()).contains("Lantern Rock").contains("10 routes, 80 holds, 3 walls, 4 resets");
-        CliRun again = CliRun.run(home, "demo", "--out", out).exits(ExitCode.OK);
-        assertThat(again.out()).isEqualTo(first.out());
-        CliRun info = CliRun.run(home, "--archive", out + "/archive", "info", "--format", "json").exits(ExitCode.OK);
-        assertThat(info.out()).contains("\"routes\" : 10");
-        assertThat(home.resolve(".local")).doesNotExist();
+    @TempDir
+    static Path home;
+    private Path demo;
+    private CliRun first;
+
+    @BeforeAll
+    void runTheDemo() {
+        demo = home.resolve("demo");
+        first = CliRun.run(home, "demo", "--out", demo.toString()).exits(ExitCode.OK);
+    }
+
+    private JsonNode report(String name) throws IOException {
+        return JSON.readTree(demo.resolve("reports").resolve(name).toFile());
+    }
+
+    private static List<String> findings(JsonNode audit) {
+        List<String> out = new ArrayList<>();
+        audit.get("findings").forEach(f -> out.add(f.get("kind").asText() + ": " + f.get("text").asText()));
+        return out;
     }
 
     @Test
-    void refusesAFolderHoldingSomeoneElsesFiles() throws Exception {
-        Path dir = Files.createDirectories(home.resolve("mine"));
-        Files.writeString(dir.resolve("notes.txt"), "keep me");
-        CliRun r = CliRun.run(home, "demo", "--out", dir.toString()).exits(ExitCode.BAD_INPUT);
+    void saysWhatItLoadedAndWhereTheReportsAre() throws IOException {
+        assertThat(first.out()).contains("The sample gym Lantern Rock (invented): 1444 routes, 19605 holds, 7 walls")
+                .contains("Reports (PDF, with JSON beside them) in " + demo.resolve("reports"));
+        for (String pdf : List.of("audit-cave.pdf", "audit-prow.pdf", "audit-slab.pdf", "gym-standing.pdf",
+                "annual-report-2026.pdf")) {
+            assertThat(Files.readAllBytes(demo.resolve("reports").resolve(pdf))).as(pdf).startsWith("%PDF".getBytes());
+        }
+        assertThat(home.resolve(".local")).doesNotExist();
+    }
+
+    /** Story: Rafe Kalder reaches for up-facing crimps far too often. */
+    @Test
+    void findsTheSetterWhoReachesForUpFacingCrimps() throws IOException {
+        assertThat(findings(report("setter-rafe-kalder.json"))).anyMatch(f -> f.startsWith("setter_habit: ")
+                && f.contains("Rafe Kalder's hand grips are crimps facing up (crimp@0)"));
+        assertThat(findings(report("setter-mira-holt.json"))).noneMatch(f -> f.startsWith("setter_habit: ")
+                && f.contains("crimp@0"));
+        assertThat(first.out()).contains("of Rafe Kalder's hand grips are crimps facing up");
+    }
+
+    /** Story: the Prow keeps reusing the same hold shapes, turned the same way. */
+    @Test
+    void findsTheWallThatReusesItsHoldShapes() throws IOException {
+        JsonNode prow = report("audit-prow.json");
+        assertThat(prow.at("/repetition/hold_reuse_rate").asDouble()).isGreaterThan(0.5);
+        assertThat(findings(prow).get(0)).startsWith("hold_reuse: ");
+        assertThat(report("audit-wave.json").at("/repetition/hold_reuse_rate").asDouble()).isLessThan(0.3);
+    }
+
+    /** Story: a grade gap opens one summer (no V5 or V6 up in July and August). */
+    @Test
+    void findsTheSummerGradeGap() throws IOException {
+        JsonNode annual = report("annual-report-2026.json");
+        List<String> summer = new ArrayList<>();
+        annual.get("months").forEach(m -> {
+            if (m.get("scope").asText().equals("gym") && m.at("/grade_gaps/boulder").toString().contains("V5")) {
+                summer.add(m.get("day").asText());
+            }
+        });
+        assertThat(summer).contains("2026-07-31", "2026-08-31").doesNotContain("2026-10-31", "2026-11-30");
+    }
+
+    /** Story: the Cave's last reset repeats a problem of about six months before. */
+    @Test
+    void findsTheNearRepeatOfAnEarlierProblem() throws IOException {
+        JsonNode cave = report("audit-cave.json");
+        assertThat(cave.at("/repetition/near_repeats").findValuesAsText("other")).contains("Red 1 (Cave, 2026-06-01)");
+        assertThat(findings(cave).get(0)).startsWith("near_repeat: ").contains("repeats Red 1 (Cave, 2026-06-01)");
+    }
+
+    /** Story: the Slab goes overdue. */
+    @Test
+    void findsTheOverdueWall() throws IOException {
+        List<String> overdue = new ArrayList<>();
+        report("annual-report-2026.json").get("walls").forEach(w -> overdue.add(w.get("wall").asText() + " "
+                + w.get("status").asText()));
+        assertThat(overdue).contains("Slab overdue").doesNotContain("Cave overdue", "Prow overdue");
+        assertThat(first.out()).contains("Slab is overdue");
+    }
+
+    /** The README's audit example, on the demo archive. */
+    @Test
+    void printsTheReadmesCaveAudit() {
+        String out = CliRun.run(home, "--archive", demo.resolve("archive").toString(), "audit", "--wall", "Cave",
+                "--on", "2026-11-30").exits(ExitCode.OK).out();
+        assertThat(out).startsWith("Reset Cave 2026-11-24 (Cave, 2026-11-24) · Lantern Rock · 13 routes\n"
+                + "Score 66 of 100 (a heuristic: weighted mean of grip 0.71, holds 0.72, moves 0.60, grades 0.72, "
+                + "novelty 0.55)\n\nWhat stands out\n  - Green 1 (Cave, 2026-11-24) repeats Red 1 (Cave, 2026-06-01): "
+                + "same jug@0, jug@180, pinch@90, pinch@270 and 3 more holds, same lock-off (Jaccard 1.000).\n"
+                + "  - 53 of 104 hand grips face up.\n");
+    }
+
+    @Test
+    void replacesOnlyWhatItMadeWhenRunAgain() throws IOException {
+        Path mine = Files.createDirectories(home.resolve("mine"));
+        Files.writeString(mine.resolve("notes.txt"), "keep me");
+        CliRun r = CliRun.run(home, "demo", "--out", mine.toString()).exits(ExitCode.BAD_INPUT);
         assertThat(r.err()).contains("holds files the demo did not make");
-        assertThat(Files.readString(dir.resolve("notes.txt"))).isEqualTo("keep me");
+        assertThat(Files.readString(mine.resolve("notes.txt"))).isEqualTo("keep me");
+        CliRun again = CliRun.run(home, "demo", "--out", demo.toString()).exits(ExitCode.OK);
+        assertThat(again.out()).isEqualTo(first.out());
     }
 }

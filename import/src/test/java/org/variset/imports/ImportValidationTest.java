@@ -151,6 +151,15 @@ class ImportValidationTest {
                     .asString().contains("grip: '14:00' is not a clock position");
         }
 
+        /** A route row with a problem is reported once; its holds do not each repeat that it is missing. */
+        @Test
+        void reportsARefusedRouteOnceNotOncePerHold() {
+            List<String> p = problems(routes("Harbour Hall,Slab,R1,2026-03-02,boulder,V99,,,,,,,,,"),
+                    write(dir, "holds.csv", HOLDS_HEADER + "\nHarbour Hall,R1,2026-03-02,1,hand,crimp,s,90,,,\n"
+                            + "Harbour Hall,R1,2026-03-02,2,hand,jug,m,0,,,\n"));
+            assertThat(p).singleElement().asString().contains("routes.csv:2: grade:");
+        }
+
         @Test
         void refusesAHoldWhoseRouteIsNowhere() {
             assertThat(holdProblems("Harbour Hall,R9,2026-03-02,1,hand,crimp,s,90,,,")).singleElement()

@@ -8,7 +8,10 @@ import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 
-/** The bundled sample gym's interchange files, copied out of the jar so they can be imported like a user's. */
+/**
+ * The bundled sample gym's interchange files (written by the generator; see the README beside them), copied out of the
+ * jar so they can be imported like a user's.
+ */
 public final class SampleArchive {
     /** The sample gym's name (invented). */
     public static final String GYM = "Lantern Rock";

@@ -13,15 +13,18 @@ import org.variset.cli.internal.IndexUpkeep;
 import org.variset.imports.load.ArchiveImporter;
 import org.variset.imports.load.ImportOptions;
 import org.variset.imports.load.ImportProgress;
-import org.variset.imports.load.ImportSummary;
 import org.variset.sample.SampleArchive;
+import org.variset.sample.generate.SampleGenerator;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
-/** Loads the bundled sample gym into a fresh archive of its own folder. */
+/** Loads the bundled sample gym into a fresh archive of its own folder, audits it and writes the reports. */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-        description = {"Load the bundled sample gym (invented) into a fresh archive inside its own folder and say "
-                + "what it holds. It never touches your real archive, and replaces only what it made itself."})
+        description = {"Show the whole job on the bundled sample gym (Lantern Rock, invented): load its two years of "
+                + "resets into a fresh archive inside the demo's own folder, audit the latest reset of each wall, "
+                + "the gym's routes up and each setter's year, and write the reset audits and the annual report as "
+                + "PDF (with JSON beside them). It never touches your real archive, and replaces only what it made "
+                + "itself.", "", "The sample ends on " + "2026-11-30; the demo audits as of that day."})
 final class DemoCommand extends VarisetSubcommand {
     /** Marks a folder as the demo's own, so that a later run may replace what is in it. */
     static final String MARKER = ".variset-demo";
@@ -34,22 +37,25 @@ final class DemoCommand extends VarisetSubcommand {
     ExitCode execute() {
         Path dir = out.toAbsolutePath().normalize();
         prepare(dir);
-        ImportSummary s;
-        ArchiveStats stats;
+        long start = System.nanoTime();
         try (Archive archive = Archive.create(dir.resolve("archive"))) {
             List<Path> files = SampleArchive.copyTo(dir.resolve("sample"));
-            s = new ArchiveImporter(archive).run(files, ImportOptions.defaults(), ImportProgress.NONE);
+            err().println("Loading the sample gym into " + dir.resolve("archive") + " ...");
+            new ArchiveImporter(archive).run(files, ImportOptions.defaults(), ImportProgress.NONE);
             IndexUpkeep.afterWrite(archive, err());
-            stats = archive.stats();
+            ArchiveStats s = archive.stats();
+            out().println("Demo archive: " + dir.resolve("archive"));
+            out().println("The sample gym " + SampleArchive.GYM + " (invented): " + s.routes() + " routes, "
+                    + s.holds() + " holds, " + s.walls() + " walls, " + s.resets() + " resets, " + s.setters()
+                    + " setters, set " + s.firstSetOn() + " to " + s.lastSetOn() + ".");
+            err().println("Auditing as of " + SampleGenerator.SAMPLE_END + " and writing the reports ...");
+            new DemoReports(archive, dir.resolve("reports"), SampleGenerator.SAMPLE_END, root().cli().clock(), out())
+                    .write();
         } catch (IOException e) {
             throw new IllegalArgumentException("cannot write the demo into " + dir + ": " + e.getMessage(), e);
         }
-        out().println("Demo archive: " + dir.resolve("archive"));
-        out().println("Loaded the sample gym " + SampleArchive.GYM + " from " + dir.resolve("sample") + ": "
-                + s.routesNew() + " routes, " + s.holdsWritten() + " holds, " + stats.walls() + " walls, "
-                + stats.resets() + " resets, " + stats.setters() + " setters, set " + stats.firstSetOn() + " to "
-                + stats.lastSetOn() + ".");
-        out().println("Try: ./variset --archive " + dir.resolve("archive") + " info");
+        err().printf("Done in %.0f s.%n", (System.nanoTime() - start) / 1e9);
+        out().println("Try: ./variset --archive " + dir.resolve("archive") + " search heel hook grade:V4..V5 --facets");
         return ExitCode.OK;
     }
 
@@ -65,7 +71,7 @@ final class DemoCommand extends VarisetSubcommand {
                     throw new IllegalArgumentException(dir + " holds files the demo did not make; give another "
                             + "folder with --out");
                 }
-                for (String mine : List.of("archive", "sample")) {
+                for (String mine : List.of("archive", "sample", "reports")) {
                     deleteTree(dir.resolve(mine));
                 }
             }

@@ -62,7 +62,7 @@ public final class ArchiveImporter {
         RowParser parser = new RowParser(options.vocabulary(), plan.problems);
         read(sources, parser, plan);
         return archive.fromTransaction(session -> {
-            RouteResolver resolver = new RouteResolver(session, plan.routes.keySet());
+            RouteResolver resolver = new RouteResolver(session, plan.routes.keySet(), plan.badRows);
             checkHolds(sources, parser, resolver, plan, progress);
             refuseUnlessSkipping(plan);
             new Comparison(session, plan, resolver).run();
@@ -95,7 +95,14 @@ public final class ArchiveImporter {
                     if (s.kind() == TableKind.WALLS) {
                         plan.addWall(parser.wall(row));
                     } else {
-                        plan.addRoute(parser.route(row));
+                        RouteRow r = parser.route(row);
+                        plan.addRoute(r);
+                        if (r == null) {
+                            RouteKey refusedKey = parser.keyOf(row);
+                            if (refusedKey != null) {
+                                plan.badRows.add(refusedKey);
+                            }
+                        }
                     }
                 }
             } catch (InputFileException e) {
@@ -146,6 +153,8 @@ public final class ArchiveImporter {
         final Set<RouteKey> newRoutes = new LinkedHashSet<>();
         final Set<RouteKey> changedRoutes = new LinkedHashSet<>();
         final Set<RouteKey> refused = new LinkedHashSet<>();
+        /** Route rows with problems, by key: their holds are left out without a problem of their own. */
+        final Set<RouteKey> badRows = new LinkedHashSet<>();
         final Set<List<String>> newWalls = new LinkedHashSet<>();
         final Set<List<String>> changedWalls = new LinkedHashSet<>();
         final List<String> changes = new ArrayList<>();

@@ -22,12 +22,14 @@ final class RouteResolver {
     private final Session session;
     private final Map<Name, List<RouteKey>> inFile = new HashMap<>();
     private final Map<String, Map<Name, List<RouteKey>>> archivedByGym = new HashMap<>();
+    private final java.util.Set<Name> badRows = new java.util.HashSet<>();
 
-    RouteResolver(Session session, Iterable<RouteKey> fileRoutes) {
+    RouteResolver(Session session, Iterable<RouteKey> fileRoutes, Iterable<RouteKey> badRouteRows) {
         this.session = session;
         for (RouteKey k : fileRoutes) {
             inFile.computeIfAbsent(new Name(k.gym(), k.label(), k.setOn()), n -> new ArrayList<>()).add(k);
         }
+        badRouteRows.forEach(k -> badRows.add(new Name(k.gym(), k.label(), k.setOn())));
     }
 
     /** The key of the hold's route, or null after recording a problem (when problems is not null). */
@@ -44,6 +46,9 @@ final class RouteResolver {
         }
         if (candidates.size() == 1) {
             return candidates.get(0);
+        }
+        if (candidates.isEmpty() && badRows.contains(n)) {
+            return null; // its route row was refused and reported; its holds go with it
         }
         if (problems != null) {
             String route = "route " + h.route() + " of " + h.setOn() + " in " + h.gym();

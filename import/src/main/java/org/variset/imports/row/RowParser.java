@@ -75,6 +75,20 @@ public final class RowParser {
                 moves, styles, difficulty, c.text("notes"), extras);
     }
 
+    /**
+     * The key of a route row whose key cells (gym, wall, route, set_on) can be read, whatever its other cells hold;
+     * null otherwise. Records no problem: for rows {@link #route} refused, so their holds are not reported again.
+     */
+    public RouteKey keyOf(TableRow row) {
+        CellReader c = new CellReader(row, new org.variset.imports.ProblemList());
+        String gym = c.name("gym", true);
+        String wall = c.name("wall", true);
+        String label = c.name("route", true);
+        LocalDate setOn = c.date("set_on", true);
+        return gym == null || wall == null || label == null || setOn == null ? null
+                : new RouteKey(gym, wall, label, setOn);
+    }
+
     /** A hold row, or null when it has problems. */
     public HoldRow hold(TableRow row) {
         CellReader c = new CellReader(row, problems);

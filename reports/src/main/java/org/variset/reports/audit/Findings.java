@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 import org.variset.archive.grade.Discipline;
+import org.variset.reports.figures.FeatureText;
 import org.variset.reports.figures.ProfileFigures;
 import org.variset.reports.figures.RouteLineFigures;
 import org.variset.reports.figures.SetFigures;
@@ -138,11 +139,19 @@ final class Findings {
 
     private void reach() {
         double limit = f.line().reachK() * f.line().reachHeightM();
-        for (RouteLineFigures r : f.line().flagged()) {
+        List<RouteLineFigures> flagged = f.line().flagged();
+        String caveat = " (longer than " + FigureFormat.round(limit, 2) + " m; a heuristic, not a measurement of any "
+                + "climber)";
+        if (flagged.size() > 2) {
+            out.add(new Finding("reach", 3, flagged.size() + " routes have a span between hand holds" + caveat
+                    + ": " + FeatureText.list(flagged.stream().map(r -> r.route() + " " + FigureFormat.round(
+                            r.spans().get(r.longSpans().get(0)), 2) + " m").toList(), 4) + "."));
+            return;
+        }
+        for (RouteLineFigures r : flagged) {
             int i = r.longSpans().get(0);
             out.add(new Finding("reach", 3, r.route() + ": a " + FigureFormat.round(r.spans().get(i), 2)
-                    + " m span between hand holds " + (i + 1) + " and " + (i + 2) + " (longer than "
-                    + FigureFormat.round(limit, 2) + " m; a heuristic, not a measurement of any climber)."));
+                    + " m span between hand holds " + (i + 1) + " and " + (i + 2) + caveat + "."));
         }
     }
 

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import org.variset.archive.grade.Discipline;
 import org.variset.reports.figures.FeatureText;
+import org.variset.reports.figures.GradeGaps;
 import org.variset.reports.figures.SetFigures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
@@ -25,11 +26,16 @@ final class GradeFindings {
         if (k == Subject.Kind.SETTER) {
             return;
         }
-        SetFigures standing = k == Subject.Kind.GYM_STANDING ? audit.audited().figures()
-                : audit.reference().figures();
+        boolean whole = k == Subject.Kind.GYM_STANDING;
+        SetFigures standing = whole ? audit.audited().figures() : audit.reference().figures();
+        // A reset or a wall is not meant to cover the target itself: the gym's grades weigh less in its audit.
+        double weight = whole ? 7 : 4;
         String where = "the gym's " + "%s up on " + audit.subject().on();
         for (Map.Entry<Discipline, GradeFigures> e : standing.grades().entrySet()) {
             Discipline d = e.getKey();
+            if (!whole && !audit.audited().figures().grades().containsKey(d)) {
+                continue;
+            }
             GradeFigures g = e.getValue();
             String whose = String.format(where, d == Discipline.BOULDER ? "boulders" : "rope routes");
             if (g.target() == null) {
@@ -39,17 +45,19 @@ final class GradeFindings {
             }
             String example = audit.settings().targetIsDefault(d) ? " (against the example pyramid; set the gym's "
                     + "own with 'variset settings set target')" : "";
-            if (!g.gaps().isEmpty()) {
-                List<String> shares = new ArrayList<>();
-                g.gaps().forEach(b -> shares.add(FigureFormat.percent(g.target().get(b))));
-                out.add(new Finding("grade_gap", 7 + g.gaps().size() * 0.1, "No " + FeatureText.list(g.gaps(), 5)
-                        .replace(" and ", " or ") + " among " + whose + "; the target gives "
-                        + (g.gaps().size() == 1 ? "it " : "them ") + FeatureText.list(shares, 5) + example + "."));
+            long inside = GradeGaps.routesInTarget(g);
+            List<String> gaps = GradeGaps.notable(g);
+            if (!gaps.isEmpty()) {
+                List<String> wanted = new ArrayList<>();
+                gaps.forEach(b -> wanted.add(FigureFormat.round(g.target().get(b) * inside, 1)));
+                out.add(new Finding("grade_gap", weight + gaps.size() * 0.1, "No " + FeatureText.list(gaps, 5)
+                        .replace(" and ", " or ") + " among " + whose + ", where the target expects "
+                        + FeatureText.list(wanted, 5) + example + "."));
             }
             if (g.emdToTarget() != null && g.emdToTarget() >= FAR) {
-                out.add(new Finding("grade_distance", 5 + g.emdToTarget(), capitalised(whose) + " sit on average "
-                        + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands from the target" + skew(g)
-                        + (g.gaps().isEmpty() ? example : "") + "."));
+                out.add(new Finding("grade_distance", weight - 1.5 + g.emdToTarget(), capitalised(whose)
+                        + " sit on average " + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands from the "
+                        + "target" + skew(g) + (gaps.isEmpty() ? example : "") + "."));
             }
         }
     }

@@ -102,6 +102,12 @@ public final class TrendPdf {
         doc.paragraph("Grades of the whole gym: distance to the target in bands (0 on target)", PdfDoc.BODY, true,
                 Palette.INK);
         doc.chart(Charts.lines(doc.fonts(), "bands", grades), doc.width(), 130);
+        List<String> gaps = t.months().stream().filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
+                .map(p -> p.day() + ": no " + String.join("; ", p.gradeGaps().entrySet().stream().map(e -> e.getKey()
+                        + " " + String.join(", ", e.getValue())).toList())).toList();
+        doc.paragraph(gaps.isEmpty() ? "No grade gap at any month end (a band the target expects two or more routes "
+                + "in, with none)." : "Grade gaps at month ends (bands the target expects two or more routes in, "
+                        + "with none): " + String.join("; ", gaps) + ".");
     }
 
     private static void grades(PdfDoc doc, Trend t) {

@@ -33,8 +33,11 @@ public record Trend(String gym, LocalDate from, LocalDate to, LocalDate asOf, Li
      * @param scope {@code gym}, or the wall's name
      * @param routes routes up that day
      * @param figures the headline figures ({@link org.variset.reports.audit.Headline} keys)
+     * @param gradeGaps the notable grade gaps per discipline word, empty when none
+     *     ({@link org.variset.reports.figures.GradeGaps})
      */
-    public record MonthPoint(LocalDate day, String scope, int routes, Map<String, Double> figures) {
+    public record MonthPoint(LocalDate day, String scope, int routes, Map<String, Double> figures,
+            Map<String, List<String>> gradeGaps) {
     }
 
     /**

@@ -24,6 +24,8 @@ public final class TrendJson {
             ObjectNode m = months.addObject().put("day", p.day().toString()).put("scope", p.scope())
                     .put("routes", p.routes());
             FiguresJson.map(m.putObject("figures"), p.figures());
+            ObjectNode gaps = m.putObject("grade_gaps");
+            p.gradeGaps().forEach((d, bands) -> bands.forEach(gaps.putArray(d)::add));
         }
         ArrayNode walls = o.putArray("walls");
         for (Trend.WallStatus w : t.walls()) {

@@ -24,6 +24,7 @@ import org.variset.archive.settings.SettingsReader;
 import org.variset.reports.audit.Headline;
 import org.variset.reports.audit.SetResult;
 import org.variset.reports.audit.SetResults;
+import org.variset.reports.figures.GradeGaps;
 import org.variset.reports.figures.RouteFeatureMapper;
 import org.variset.reports.figures.SetFigures;
 import org.variset.reports.scoring.repetition.Repetition;
@@ -95,7 +96,14 @@ public final class TrendReport {
     }
 
     private static Trend.MonthPoint point(LocalDate day, String scope, SetResult r) {
-        return new Trend.MonthPoint(day, scope, r.routes().size(), Headline.of(r));
+        Map<String, List<String>> gaps = new java.util.LinkedHashMap<>();
+        r.figures().grades().forEach((d, g) -> {
+            List<String> notable = GradeGaps.notable(g);
+            if (!notable.isEmpty()) {
+                gaps.put(d.word(), notable);
+            }
+        });
+        return new Trend.MonthPoint(day, scope, r.routes().size(), Headline.of(r), gaps);
     }
 
     /** Scores each reset of the period as an audit does, collecting its near-repeats. */

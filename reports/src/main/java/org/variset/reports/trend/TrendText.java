@@ -33,6 +33,11 @@ public final class TrendText {
             MONTH_KEYS.forEach(k -> b.append(String.format(" %10s", Headline.text(k, p.figures().get(k)))));
             b.append('\n');
         }
+        List<String> gaps = t.months().stream().filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
+                .map(p -> p.day() + ": " + String.join("; ", p.gradeGaps().entrySet().stream().map(e -> e.getKey()
+                        + " " + String.join(", ", e.getValue())).toList())).toList();
+        b.append(gaps.isEmpty() ? "" : "  Grade gaps (bands the target expects two or more routes in, with none): "
+                + String.join(" · ", gaps) + "\n");
         b.append("\nWalls (status on ").append(t.asOf()).append(")\n");
         for (Trend.WallStatus w : t.walls()) {
             b.append("  ").append(w.wall()).append(": ").append(w.resets().size())
