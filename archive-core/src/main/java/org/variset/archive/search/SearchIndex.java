@@ -249,6 +249,39 @@ public final class SearchIndex implements AutoCloseable {
         }
     }
 
+    /**
+     * What the index holds, checked by Lucene's {@code CheckIndex} (every segment read and verified).
+     *
+     * @param exists whether there is an index at all
+     * @param clean whether CheckIndex found it sound
+     * @param detail what CheckIndex reported, in short
+     * @param stamp the change stamp it carries, or -1
+     * @param ids the route ids of its documents (empty when it cannot be read)
+     */
+    public record Health(boolean exists, boolean clean, String detail, long stamp, java.util.Set<Long> ids) {
+    }
+
+    /** Checks the index with Lucene's CheckIndex and lists its documents. */
+    public Health health() {
+        try {
+            if (!DirectoryReader.indexExists(directory)) {
+                return new Health(false, false, "there is no index", -1, java.util.Set.of());
+            }
+            org.apache.lucene.index.CheckIndex.Status status;
+            try (org.apache.lucene.index.CheckIndex ci = new org.apache.lucene.index.CheckIndex(directory)) {
+                ci.setThreadCount(1);
+                status = ci.checkIndex();
+            }
+            String detail = status.clean ? status.numSegments + " segments, every one read and verified"
+                    : "CheckIndex found problems in " + status.numBadSegments + " of " + status.numSegments
+                    + " segments";
+            return new Health(true, status.clean, detail, stamp(), status.clean ? new java.util.HashSet<>(ids())
+                    : java.util.Set.of());
+        } catch (IOException | RuntimeException e) {
+            return new Health(true, false, "cannot be read: " + e.getMessage(), -1, java.util.Set.of());
+        }
+    }
+
     /** The Lucene directory, for searching and checking. */
     Directory directory() {
         return directory;

@@ -14,7 +14,7 @@ import org.variset.archive.read.ArchiveCatalog;
 import org.variset.archive.read.GymRecord;
 import org.variset.archive.read.WallRecord;
 import org.variset.archive.store.Archive;
-import org.variset.cli.internal.AtomicFile;
+import org.variset.archive.store.AtomicFile;
 import org.variset.cli.internal.Json;
 import org.variset.reports.audit.Audit;
 import org.variset.reports.audit.AuditJson;

@@ -18,7 +18,7 @@ import picocli.CommandLine.ScopeType;
                 + "variety of grip directions, holds, moves and grades.", ""},
         subcommands = {DemoCommand.class, InitCommand.class, InfoCommand.class, ImportCommand.class, ExportCommand.class,
             AuditCommand.class, PlanCommand.class, TrendCommand.class, SearchCommand.class, SimilarCommand.class, ReindexCommand.class,
-            GenerateCommand.class,
+            GenerateCommand.class, CheckCommand.class, BackupCommand.class, RestoreCommand.class,
             SettingsCommand.class,
             StripCommand.class, RemoveCommand.class, AmendCommand.class, SetterCommand.class, TemplateCommand.class,
             GradeCommand.class, CommandLine.HelpCommand.class},

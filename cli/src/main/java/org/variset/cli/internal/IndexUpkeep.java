@@ -15,16 +15,40 @@ public final class IndexUpkeep {
     private IndexUpkeep() {
     }
 
+    /**
+     * A test hook: with this environment variable set to a number of milliseconds, a command that wrote the database
+     * says so on standard error and pauses that long before it updates the index, so that crash tests can kill it
+     * between the two commits and two-process tests can find the archive busy. Unset in normal use.
+     */
+    public static final String PAUSE_HOOK = "VARISET_TEST_PAUSE_BEFORE_INDEX_MS";
+
     /** Brings the index up to date after a write; a failure is a warning on {@code err}, never an error. */
     public static void afterWrite(Archive archive, PrintWriter err) {
         if (archive.dir() == null) {
             return;
         }
+        pauseForTests(err);
         try (SearchIndex index = SearchIndex.at(archive.dir())) {
             index.sync(archive.connection(), IndexProgress.NONE);
         } catch (RuntimeException e) {
             err.println("variset: warning: the search index could not be updated (" + e.getMessage() + "); the "
                     + "archive itself is complete, and the next search will bring the index up to date.");
+        }
+    }
+
+    private static void pauseForTests(PrintWriter err) {
+        String ms = System.getenv(PAUSE_HOOK);
+        if (ms == null || ms.isBlank()) {
+            return;
+        }
+        err.println("variset: database committed; pausing " + ms + " ms before the index (" + PAUSE_HOOK + ")");
+        err.flush();
+        try {
+            Thread.sleep(Long.parseLong(ms.strip()));
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (NumberFormatException e) {
+            err.println("variset: " + PAUSE_HOOK + " is not a number of milliseconds; not pausing");
         }
     }
 

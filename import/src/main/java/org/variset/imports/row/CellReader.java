@@ -50,10 +50,35 @@ final class CellReader {
         ok = false;
     }
 
-    /** A text cell, restored from formula neutralisation; null when empty. */
+    /** The longest name or short text the archive keeps (its VARCHAR(255) columns). */
+    static final int MAX_NAME = 255;
+    /** The longest notes the archive keeps. */
+    static final int MAX_NOTES = 100_000;
+    /** The longest list (moves, styles, setters, difficulties) as the archive stores it, with room for JSON quoting. */
+    static final int MAX_LIST = 9_000;
+    /** The longest set of extra columns of one row, as the archive stores it. */
+    static final int MAX_EXTRAS = 90_000;
+
+    /**
+     * A text cell, restored from formula neutralisation; null when empty, or (with a problem) when it is longer than
+     * the archive keeps.
+     */
     String text(String column) {
         String t = row.text(column);
-        return t == null ? null : restore(t);
+        if (t == null) {
+            return null;
+        }
+        int max = column.equals("notes") ? MAX_NOTES : MAX_NAME;
+        if (t.length() > max) {
+            problem(column, tooLong(t.length(), max));
+            return null;
+        }
+        return restore(t);
+    }
+
+    private static String tooLong(int length, int max) {
+        return String.format(java.util.Locale.ROOT, "%,d characters, more than the %,d the archive keeps here "
+                + "(expected a shorter text)", length, max);
     }
 
     /** Restores text that export prefixed with a quote so that a spreadsheet would not run it (OWASP). */
@@ -66,9 +91,10 @@ final class CellReader {
 
     /** A name: trimmed, NFC-normalised text; a problem when missing and required. */
     String name(String column, boolean required) {
+        boolean present = row.text(column) != null;
         String t = text(column);
         if (t == null) {
-            if (required) {
+            if (required && !present) {
                 problem(column, "missing value (this column is required)");
             }
             return null;
@@ -158,6 +184,11 @@ final class CellReader {
                 }
             }
         }
+        int length = out.stream().mapToInt(x -> x.length() + 3).sum();
+        if (length > MAX_LIST) {
+            problem(column, tooLong(length, MAX_LIST));
+            return List.of();
+        }
         return out;
     }
 
@@ -179,6 +210,11 @@ final class CellReader {
                 }
             }
         });
+        int length = out.entrySet().stream().mapToInt(e -> e.getKey().length() + e.getValue().length() + 6).sum();
+        if (length > MAX_EXTRAS) {
+            problem("extra columns", tooLong(length, MAX_EXTRAS));
+            return Map.of();
+        }
         return out;
     }
 }

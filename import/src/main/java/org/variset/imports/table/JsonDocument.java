@@ -47,19 +47,30 @@ public final class JsonDocument {
                     gym = p.getValueAsString();
                 } else if (("routes".equals(field) || "walls".equals(field)) && value == JsonToken.START_ARRAY) {
                     int index = 0;
-                    while (p.nextToken() == JsonToken.START_OBJECT) {
+                    for (JsonToken t = p.nextToken(); t != JsonToken.END_ARRAY; t = p.nextToken()) {
                         int line = p.currentLocation().getLineNr();
+                        if (t != JsonToken.START_OBJECT) {
+                            throw shape(file, line, field + "[" + index + "] is not an object");
+                        }
                         JsonNode node = MAPPER.readTree(p);
                         if ("routes".equals(field)) {
-                            route(file, line, index++, node, routes, holds);
+                            route(file, line, index, node, routes, holds);
                         } else {
                             walls.add(new TableRow(file, line, cells(node, false), false));
                         }
+                        index++;
                     }
                 } else {
                     p.skipChildren();
                 }
             }
+            if (p.currentToken() != JsonToken.END_OBJECT) {
+                throw shape(file, p.currentLocation().getLineNr(), "the document does not end where its object ends");
+            }
+        } catch (com.fasterxml.jackson.core.exc.StreamConstraintsException e) {
+            throw new InputFileException(new Problem(file, 0, "", "is not a document Variset reads: it nests "
+                    + "deeper, or holds longer values, than any interchange document needs: " + e.getOriginalMessage()
+                    .replaceAll(", from `[^`]*`", "")), e);
         } catch (JsonProcessingException e) {
             int line = e.getLocation() == null ? 0 : e.getLocation().getLineNr();
             throw new InputFileException(new Problem(file, line, "", "is not valid JSON: "

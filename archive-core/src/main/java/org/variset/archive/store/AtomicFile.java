@@ -1,4 +1,4 @@
-package org.variset.cli.internal;
+package org.variset.archive.store;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -39,7 +39,8 @@ public final class AtomicFile {
             throw new IllegalArgumentException(target + " exists already; give --force to replace it, or another name");
         }
         if (dir == null || !Files.isDirectory(dir)) {
-            throw new IllegalArgumentException("cannot write " + target + ": the folder " + dir + " does not exist");
+            throw new IllegalArgumentException("cannot write " + target + ": " + dir + (dir != null && Files.exists(dir)
+                    ? " is a file, not a folder" : " does not exist") + " (expected a folder that is there)");
         }
         Path tmp = null;
         try {

@@ -1,0 +1,33 @@
+package org.variset.archive.check;
+
+import java.sql.Connection;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import org.variset.archive.search.SearchIndex;
+
+/** The index's part of a check: sound, in step with the database, one document per route. */
+final class IndexCheck {
+    private IndexCheck() {
+    }
+
+    static void add(SearchIndex index, Connection c, long routes, long dbStamp, List<CheckReport.Item> items) {
+        SearchIndex.Health h = index.health();
+        items.add(new CheckReport.Item("index", "Lucene CheckIndex", h.clean(), h.detail()));
+        if (!h.clean()) {
+            return;
+        }
+        items.add(new CheckReport.Item("index", "change stamp", h.stamp() == dbStamp, "index " + h.stamp()
+                + ", database " + dbStamp + (h.stamp() == dbStamp ? "" : h.stamp() < dbStamp
+                        ? " (behind: the next search catches up)" : " (ahead of the database)")));
+        Set<Long> db = ArchiveCheck.routeIds(c);
+        Set<Long> missing = new HashSet<>(db);
+        missing.removeAll(h.ids());
+        Set<Long> extra = new HashSet<>(h.ids());
+        extra.removeAll(db);
+        boolean same = missing.isEmpty() && extra.isEmpty();
+        items.add(new CheckReport.Item("index", "one document per route", same, h.ids().size() + " documents, "
+                + routes + " routes" + (same ? "" : "; " + missing.size() + " routes missing, " + extra.size()
+                        + " documents of routes that are gone")));
+    }
+}

@@ -1,0 +1,84 @@
+package org.variset.archive.check;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.sql.Statement;
+import java.util.List;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.variset.archive.fixture.ResetFixture;
+import org.variset.archive.search.IndexProgress;
+import org.variset.archive.search.SearchIndex;
+import org.variset.archive.store.Archive;
+import org.variset.archive.store.ChangeLog;
+
+class ArchiveCheckTest {
+    private Archive archive;
+    private SearchIndex index;
+
+    @BeforeEach
+    void storeAndIndex() {
+        archive = Archive.inMemory();
+        archive.inTransaction(s -> {
+            ResetFixture.storeFullReset(s);
+            s.flush();
+            ChangeLog.routes(s, s.createSelectionQuery("select id from Route", Long.class).getResultList());
+        });
+        index = SearchIndex.inMemory();
+        index.sync(archive.connection(), IndexProgress.NONE);
+    }
+
+    @AfterEach
+    void close() {
+        index.close();
+        archive.close();
+    }
+
+    private List<String> problems() {
+        return ArchiveCheck.run(archive, index).items().stream().filter(i -> !i.ok())
+                .map(i -> i.part() + ": " + i.name() + ": " + i.detail()).toList();
+    }
+
+    @Test
+    void findsAFreshArchiveHealthy() {
+        CheckReport r = ArchiveCheck.run(archive, index);
+        assertThat(r.healthy()).as(problems().toString()).isTrue();
+        assertThat(r.items()).extracting(CheckReport.Item::name).contains("schema version", "holds without their route",
+                "Lucene CheckIndex", "change stamp", "one document per route");
+    }
+
+    @Test
+    void findsAHoldWhoseRouteIsGone() throws Exception {
+        try (Statement s = archive.connection().createStatement()) {
+            s.execute("SET REFERENTIAL_INTEGRITY FALSE");
+            s.execute("INSERT INTO hold_placement (id, route_id, ordinal, role, hold_type) VALUES (999, 424242, 0,"
+                    + " 'HAND', 'jug')");
+            s.execute("SET REFERENTIAL_INTEGRITY TRUE");
+        }
+        assertThat(problems()).containsExactly("database: holds without their route: 1 found");
+        assertThat(ArchiveCheck.run(archive, index).databaseHealthy()).isFalse();
+    }
+
+    @Test
+    void findsAnIndexBehindTheDatabaseAndARouteItLacks() throws Exception {
+        archive.inTransaction(s -> {
+            Long id = s.createSelectionQuery("select id from Route where label = 'Blue 3'", Long.class)
+                    .getSingleResult();
+            s.createNativeMutationQuery("UPDATE route SET label = 'Blue 33' WHERE id = " + id).executeUpdate();
+            ChangeLog.routes(s, List.of(id));
+        });
+        try (Statement s = archive.connection().createStatement()) {
+            s.execute("SET REFERENTIAL_INTEGRITY FALSE");
+            s.execute("INSERT INTO route (id, gym_id, wall_id, reset_id, label, set_on, discipline, grade_text,"
+                    + " grade_scale, grade_ircra) SELECT 777, gym_id, wall_id, reset_id, 'Ghost', set_on, discipline,"
+                    + " grade_text, grade_scale, grade_ircra FROM route WHERE label = 'Green 1'");
+            s.execute("SET REFERENTIAL_INTEGRITY TRUE");
+        }
+        assertThat(problems()).anyMatch(p -> p.startsWith("index: change stamp: index 2, database 3 (behind"))
+                .anyMatch(p -> p.startsWith("index: one document per route: 2 documents, 3 routes; 1 routes missing"));
+        assertThat(ArchiveCheck.run(archive, index).databaseHealthy()).isTrue();
+        index.rebuild(archive.connection(), IndexProgress.NONE, "repair");
+        assertThat(problems()).isEmpty();
+    }
+}
