@@ -15,13 +15,15 @@ import org.variset.archive.route.HoldSize;
  * @param holdRef inventory label of the shape, or null
  * @param xM position from the wall's left edge in metres, or null
  * @param yM position from the wall's bottom edge in metres, or null
+ * @param extraFields the extra columns it was imported with, in file order
  */
 public record HoldRecord(Integer seq, HoldRole role, String type, HoldSize size, List<Double> grips, String holdRef,
-        Double xM, Double yM) {
+        Double xM, Double yM, java.util.Map<String, String> extraFields) {
 
-    /** Copies the grip list. */
+    /** Copies the lists. */
     public HoldRecord {
         grips = List.copyOf(grips);
+        extraFields = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(extraFields));
     }
 
     /** True for hand, start and finish (the hand roles of interchange.md). */

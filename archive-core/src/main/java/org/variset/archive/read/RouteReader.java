@@ -11,6 +11,7 @@ import java.util.function.Consumer;
 import org.variset.archive.grade.Discipline;
 import org.variset.archive.grade.GradeScale;
 import org.variset.archive.mapping.DoubleListConverter;
+import org.variset.archive.mapping.ExtraFieldsConverter;
 import org.variset.archive.mapping.IntegerListConverter;
 import org.variset.archive.mapping.StringListConverter;
 import org.variset.archive.route.HoldRole;
@@ -24,7 +25,7 @@ import org.variset.archive.route.HoldSize;
 public final class RouteReader {
     private static final String ROUTE_COLUMNS = "r.id, g.name, w.name, w.angle_deg, rs.label, rs.reset_on, r.label,"
             + " r.set_on, r.stripped_on, r.discipline, r.grade_text, r.grade_scale, r.grade_ircra, r.color,"
-            + " r.angle_deg, r.moves, r.styles, r.move_difficulty, r.notes";
+            + " r.angle_deg, r.moves, r.styles, r.move_difficulty, r.notes, r.extra_fields";
     private static final String ROUTE_TABLES = " FROM route r JOIN gym g ON g.id = r.gym_id JOIN wall w"
             + " ON w.id = r.wall_id JOIN reset rs ON rs.id = r.reset_id";
 
@@ -32,6 +33,7 @@ public final class RouteReader {
     private final StringListConverter strings = new StringListConverter();
     private final IntegerListConverter integers = new IntegerListConverter();
     private final DoubleListConverter doubles = new DoubleListConverter();
+    private final ExtraFieldsConverter extraFields = new ExtraFieldsConverter();
 
     /** Reads on a connection the caller keeps open. */
     public RouteReader(Connection connection) {
@@ -92,24 +94,25 @@ public final class RouteReader {
             return new RouteRecord(id, rs.getString(2), rs.getString(3), rs.getString(5),
                     rs.getObject(6, LocalDate.class), rs.getString(7), rs.getObject(8, LocalDate.class),
                     rs.getObject(9, LocalDate.class), Discipline.valueOf(rs.getString(10)), rs.getString(11),
-                    GradeScale.valueOf(rs.getString(12)), rs.getDouble(13), rs.getString(14), angle,
+                    GradeScale.valueOf(rs.getString(12)), rs.getDouble(13), rs.getString(14), angle, routeAngle,
                     setters.getOrDefault(id, List.of()), strings.convertToEntityAttribute(rs.getString(16)),
                     strings.convertToEntityAttribute(rs.getString(17)),
                     integers.convertToEntityAttribute(rs.getString(18)), rs.getString(19),
-                    holds.getOrDefault(id, List.of()));
+                    holds.getOrDefault(id, List.of()), extras(rs.getString(20)));
         });
     }
 
     private Map<Long, List<HoldRecord>> holds(String where, List<Object> p) {
         Map<Long, List<HoldRecord>> out = new HashMap<>();
-        Sql.forEach(connection, "SELECT h.route_id, h.seq, h.role, h.hold_type, h.hold_size, h.grip_deg, h.hold_ref, h.x_m, h.y_m"
-                + " FROM hold_placement h JOIN route r ON r.id = h.route_id WHERE " + where
+        Sql.forEach(connection, "SELECT h.route_id, h.seq, h.role, h.hold_type, h.hold_size, h.grip_deg, h.hold_ref,"
+                + " h.x_m, h.y_m, h.extra_fields FROM hold_placement h JOIN route r ON r.id = h.route_id"
+                + " WHERE " + where
                 + " ORDER BY h.route_id, h.ordinal", p, rs -> {
                     String size = rs.getString(5);
                     HoldRecord h = new HoldRecord((Integer) rs.getObject(2), HoldRole.valueOf(rs.getString(3)),
                             rs.getString(4), size == null ? null : HoldSize.valueOf(size),
                             doubles.convertToEntityAttribute(rs.getString(6)), rs.getString(7),
-                            (Double) rs.getObject(8), (Double) rs.getObject(9));
+                            (Double) rs.getObject(8), (Double) rs.getObject(9), extras(rs.getString(10)));
                     out.computeIfAbsent(rs.getLong(1), k -> new ArrayList<>()).add(h);
                 });
         return out;
@@ -122,6 +125,11 @@ public final class RouteReader {
                     out.computeIfAbsent(rs.getLong(1), k -> new ArrayList<>()).add(rs.getString(2));
                 });
         return out;
+    }
+
+    /** Extra columns from their JSON text; most rows have none, so the common case costs no parsing. */
+    private Map<String, String> extras(String json) {
+        return json == null || json.equals("{}") ? Map.of() : extraFields.convertToEntityAttribute(json);
     }
 
     private <T> List<T> query(String sql, List<Object> params, Sql.RowMapper<T> mapper) {

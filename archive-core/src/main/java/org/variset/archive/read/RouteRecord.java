@@ -23,20 +23,24 @@ import org.variset.archive.grade.GradeScale;
  * @param ircra its value on the IRCRA axis
  * @param color tape or hold colour, or null
  * @param angleDeg the angle where it climbs: its own, else its wall's, else null
+ * @param ownAngleDeg its own angle as imported, or null when it takes its wall's
  * @param setters setter names in the order given
  * @param moves notable move descriptors in climbing order
  * @param styles style tags
  * @param moveDifficulty the setters' difficulty of each hand move, 1 to 10
  * @param notes free text, or null
  * @param holds hold placements in file order
+ * @param extraFields the extra columns it was imported with, in file order
  */
 public record RouteRecord(long id, String gym, String wall, String reset, LocalDate resetOn, String label,
         LocalDate setOn, LocalDate strippedOn, Discipline discipline, String gradeText, GradeScale gradeScale,
-        double ircra, String color, Double angleDeg, List<String> setters, List<String> moves, List<String> styles,
-        List<Integer> moveDifficulty, String notes, List<HoldRecord> holds) {
+        double ircra, String color, Double angleDeg, Double ownAngleDeg, List<String> setters, List<String> moves,
+        List<String> styles, List<Integer> moveDifficulty, String notes, List<HoldRecord> holds,
+        java.util.Map<String, String> extraFields) {
 
     /** Copies the lists. */
     public RouteRecord {
+        extraFields = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(extraFields));
         setters = List.copyOf(setters);
         moves = List.copyOf(moves);
         styles = List.copyOf(styles);

@@ -47,6 +47,8 @@ public final class SearchIndex implements AutoCloseable {
 
     private final Directory directory;
     private final FacetsConfig facets = RouteDocuments.facetsConfig();
+    /** The reader searches use, opened on first use and refreshed when a commit changed the index. */
+    private DirectoryReader reader;
 
     private SearchIndex(Directory directory) {
         this.directory = directory;
@@ -216,8 +218,8 @@ public final class SearchIndex implements AutoCloseable {
      */
     public SearchHits search(SearchRequest r, org.variset.archive.vocabulary.Vocabulary vocabulary) {
         org.apache.lucene.search.Query q = SearchQueries.of(r, vocabulary);
-        try (DirectoryReader reader = DirectoryReader.open(directory)) {
-            return SearchQueries.run(new org.apache.lucene.search.IndexSearcher(reader), q, r, facets);
+        try {
+            return SearchQueries.run(new org.apache.lucene.search.IndexSearcher(reader()), q, r, facets);
         } catch (IOException e) {
             throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the search index: "
                     + e.getMessage() + ". Run 'variset reindex' to build it again.", e);
@@ -235,8 +237,8 @@ public final class SearchIndex implements AutoCloseable {
         if (q == null) {
             return List.of();
         }
-        try (DirectoryReader reader = DirectoryReader.open(directory)) {
-            org.apache.lucene.search.IndexSearcher s = new org.apache.lucene.search.IndexSearcher(reader);
+        try {
+            org.apache.lucene.search.IndexSearcher s = new org.apache.lucene.search.IndexSearcher(reader());
             List<Long> out = new ArrayList<>();
             org.apache.lucene.index.StoredFields stored = s.storedFields();
             for (org.apache.lucene.search.ScoreDoc d : s.search(q, n).scoreDocs) {
@@ -282,6 +284,20 @@ public final class SearchIndex implements AutoCloseable {
         }
     }
 
+    /** The current reader: opened once, reopened only when a commit has changed the index since. */
+    private synchronized DirectoryReader reader() throws IOException {
+        if (reader == null) {
+            reader = DirectoryReader.open(directory);
+        } else {
+            DirectoryReader newer = DirectoryReader.openIfChanged(reader);
+            if (newer != null) {
+                reader.close();
+                reader = newer;
+            }
+        }
+        return reader;
+    }
+
     /** The Lucene directory, for searching and checking. */
     Directory directory() {
         return directory;
@@ -298,8 +314,12 @@ public final class SearchIndex implements AutoCloseable {
     }
 
     @Override
-    public void close() {
+    public synchronized void close() {
         try {
+            if (reader != null) {
+                reader.close();
+                reader = null;
+            }
             directory.close();
         } catch (IOException e) {
             throw new UncheckedIOException(e);

@@ -21,6 +21,7 @@ import org.apache.lucene.search.Sort;
 import org.apache.lucene.search.SortField;
 import org.apache.lucene.search.TermQuery;
 import org.apache.lucene.search.TopDocs;
+import org.apache.lucene.search.TopFieldCollectorManager;
 import org.apache.lucene.index.StoredFields;
 import org.variset.archive.vocabulary.Vocabulary;
 
@@ -56,19 +57,37 @@ final class SearchQueries {
             case GRADE -> new Sort(new SortField(SearchFields.IRCRA, SortField.Type.DOUBLE),
                     new SortField(SearchFields.SET, SortField.Type.LONG, true));
         };
-        FacetsCollectorManager.FacetsResult result = FacetsCollectorManager.search(s, q, r.limit(), sort, true,
-                new FacetsCollectorManager());
-        TopDocs top = result.topDocs();
+        TopDocs top;
+        Map<String, List<SearchHits.FacetCount>> facets = new LinkedHashMap<>();
+        if (r.facets()) {
+            FacetsCollectorManager.FacetsResult result = FacetsCollectorManager.search(s, q, r.limit(), sort, true,
+                    new FacetsCollectorManager());
+            top = result.topDocs();
+            facets(s, result, config, facets);
+        } else {
+            // One pass gives the first hits and the exact number of matches.
+            top = s.search(q, new TopFieldCollectorManager(sort, r.limit(), null, Integer.MAX_VALUE, false));
+        }
         StoredFields stored = s.storedFields();
         List<SearchHits.Hit> hits = new ArrayList<>();
         for (ScoreDoc d : top.scoreDocs) {
-            hits.add(new SearchHits.Hit(Long.parseLong(stored.document(d.doc).get(SearchFields.ID)), d.score));
+            hits.add(new SearchHits.Hit(Long.parseLong(stored.document(d.doc).get(SearchFields.ID)), score(d)));
         }
-        Map<String, List<SearchHits.FacetCount>> facets = new LinkedHashMap<>();
-        if (r.facets()) {
-            facets(s, result, config, facets);
+        long total = r.facets() && top.totalHits.relation != org.apache.lucene.search.TotalHits.Relation.EQUAL_TO
+                ? s.count(q) : top.totalHits.value;
+        return new SearchHits(total, hits, facets);
+    }
+
+    /** A hit's score: a sorted search keeps it among the sort values; 0 where none was computed. */
+    private static float score(ScoreDoc d) {
+        if (d instanceof org.apache.lucene.search.FieldDoc f) {
+            for (Object v : f.fields) {
+                if (v instanceof Float x) {
+                    return x;
+                }
+            }
         }
-        return new SearchHits(s.count(q), hits, facets);
+        return Float.isNaN(d.score) ? 0 : d.score;
     }
 
     private static void facets(IndexSearcher s, FacetsCollectorManager.FacetsResult result, FacetsConfig config,

@@ -30,7 +30,8 @@ final class ArchiveWriter {
     private static final int HOLD_CHUNK = 2_000;
 
     private final Session session;
-    private final ArchiveImporter.Plan plan;
+    private final ImportPlan plan;
+    private final RowParser quiet;
     private final Map<String, Long> gyms = new HashMap<>();
     private final Map<List<String>, Long> walls = new HashMap<>();
     private final Map<List<String>, Long> resets = new HashMap<>();
@@ -38,22 +39,23 @@ final class ArchiveWriter {
     private final Map<RouteKey, Long> routeIds = new HashMap<>();
     private int wallsCreated;
 
-    ArchiveWriter(Session session, ArchiveImporter.Plan plan) {
+    ArchiveWriter(Session session, ImportPlan plan, RowParser quiet) {
         this.session = session;
         this.plan = plan;
+        this.quiet = quiet;
     }
 
     /** Writes walls, routes and holds, and records the routes written in the change log; returns holds written. */
     long write(List<RowSource> sources, RouteResolver resolver, ImportProgress progress) {
         long holds = writeRoutesAndHolds(sources, resolver, progress);
         java.util.Set<Long> changed = new java.util.TreeSet<>();
-        for (RouteRow row : plan.routes.values()) {
-            RouteKey k = row.key();
-            if (plan.newRoutes.contains(k) || plan.changedRoutes.contains(k) && plan.options.update()) {
+        for (RouteKey k : plan.routes.keySet()) {
+            if (!plan.refused.contains(k) && (plan.newRoutes.contains(k) || plan.changedRoutes.contains(k)
+                    && plan.options.update())) {
                 changed.add(routeId(k));
             }
         }
-        for (RouteKey k : plan.holds.keySet()) {
+        for (RouteKey k : plan.keysWithHolds()) {
             if (plan.writesHoldsOf(k)) {
                 changed.add(routeId(k));
             }
@@ -72,25 +74,24 @@ final class ArchiveWriter {
             }
         }
         int n = 0;
-        for (RouteRow row : plan.routes.values()) {
-            RouteKey k = row.key();
-            if (plan.refused.contains(k)) {
+        java.util.Set<RouteKey> written = new java.util.HashSet<>();
+        for (RowSource s : sources) {
+            if (s.kind() != TableKind.ROUTES) {
                 continue;
             }
-            if (plan.newRoutes.contains(k)) {
-                Route r = new Route(reset(row), k.label(), k.setOn(), row.discipline(), row.grade());
-                fill(r, row);
-                session.persist(r);
-                routeIds.put(k, r.id());
-            } else if (plan.changedRoutes.contains(k) && plan.options.update()) {
-                Route r = find(k);
-                r.setGrade(row.grade());
-                r.setReset(reset(row));
-                fill(r, row);
-            }
-            if (++n % ROUTE_CHUNK == 0) {
-                session.flush();
-                session.clear();
+            try (RowCursor c = s.rows()) {
+                while (c.hasNext()) {
+                    RouteRow row = quiet.route(c.next());
+                    RouteKey k = row == null ? null : plan.intern(row.key());
+                    ImportPlan.PlannedRoute p = k == null ? null : plan.routes.get(k);
+                    if (p == null || !p.from(row) || plan.refused.contains(k) || !written.add(k)) {
+                        continue;
+                    }
+                    if (writeRoute(k, row) && ++n % ROUTE_CHUNK == 0) {
+                        session.flush();
+                        session.clear();
+                    }
+                }
             }
         }
         session.flush();
@@ -98,9 +99,28 @@ final class ArchiveWriter {
         return writeHolds(sources, resolver, progress);
     }
 
+    /** Writes one route row when it is new, or changed and updated; true when it wrote. */
+    private boolean writeRoute(RouteKey k, RouteRow row) {
+        if (plan.newRoutes.contains(k)) {
+            Route r = new Route(reset(row), k.label(), k.setOn(), row.discipline(), row.grade());
+            fill(r, row);
+            session.persist(r);
+            routeIds.put(k, r.id());
+            return true;
+        }
+        if (plan.changedRoutes.contains(k) && plan.options.update()) {
+            Route r = find(k);
+            r.setGrade(row.grade());
+            r.setReset(reset(row));
+            fill(r, row);
+            return true;
+        }
+        return false;
+    }
+
     private long writeHolds(List<RowSource> sources, RouteResolver resolver, ImportProgress progress) {
         Map<RouteKey, Integer> ordinals = new HashMap<>();
-        for (RouteKey k : plan.holds.keySet()) {
+        for (RouteKey k : plan.keysWithHolds()) {
             if (plan.writesHoldsOf(k)) {
                 long id = routeId(k);
                 if (!plan.newRoutes.contains(k)) {
@@ -109,7 +129,6 @@ final class ArchiveWriter {
                 }
             }
         }
-        RowParser quiet = new RowParser(plan.options.vocabulary(), new org.variset.imports.ProblemList());
         long written = 0;
         for (RowSource s : sources) {
             if (s.kind() != TableKind.HOLDS) {

@@ -3,8 +3,7 @@ package org.variset.imports.load;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
-import org.variset.archive.route.Route;
-import org.variset.archive.route.Setter;
+import org.variset.archive.read.RouteRecord;
 import org.variset.imports.row.RouteRow;
 
 /** What differs between a route row and the route the archive holds under the same key. */
@@ -13,16 +12,16 @@ final class RouteDiff {
     }
 
     /** The differences as {@code field: archive -> file}; empty when the row matches. */
-    static List<String> between(Route r, RouteRow row) {
+    static List<String> between(RouteRecord r, RouteRow row) {
         List<String> d = new ArrayList<>();
         compare(d, "discipline", r.discipline().word(), row.discipline().word());
         compare(d, "grade", r.gradeText() + " (" + r.gradeScale().word() + ")",
                 row.grade().text().strip() + " (" + row.grade().scale().word() + ")");
         compare(d, "stripped_on", r.strippedOn(), row.strippedOn());
-        compare(d, "reset", r.reset().label(), row.reset());
-        compare(d, "setters", r.setters().stream().map(Setter::name).toList(), row.setters());
+        compare(d, "reset", r.reset(), row.reset());
+        compare(d, "setters", r.setters(), row.setters());
         compare(d, "color", r.color(), row.color());
-        compare(d, "angle_deg", r.angleDeg(), row.angleDeg());
+        compare(d, "angle_deg", r.ownAngleDeg(), row.angleDeg());
         compare(d, "moves", r.moves(), row.moves());
         compare(d, "styles", r.styles(), row.styles());
         compare(d, "move_difficulty", r.moveDifficulty(), row.moveDifficulty());

@@ -27,7 +27,8 @@ final class RouteResolver {
     RouteResolver(Session session, Iterable<RouteKey> fileRoutes, Iterable<RouteKey> badRouteRows) {
         this.session = session;
         for (RouteKey k : fileRoutes) {
-            inFile.computeIfAbsent(new Name(k.gym(), k.label(), k.setOn()), n -> new ArrayList<>()).add(k);
+            // Almost every name is one route: keep a one-element list until a second key comes.
+            inFile.merge(new Name(k.gym(), k.label(), k.setOn()), List.of(k), RouteResolver::concat);
         }
         badRouteRows.forEach(k -> badRows.add(new Name(k.gym(), k.label(), k.setOn())));
     }
@@ -79,8 +80,14 @@ final class RouteResolver {
         session.createSelectionQuery("select r.label, r.setOn, r.wall.name from Route r where r.gym.name = :g",
                 Object[].class).setParameter("g", gym).getResultList().forEach(row -> {
                     RouteKey k = new RouteKey(gym, (String) row[2], (String) row[0], (LocalDate) row[1]);
-                    out.computeIfAbsent(new Name(gym, k.label(), k.setOn()), x -> new ArrayList<>()).add(k);
+                    out.merge(new Name(gym, k.label(), k.setOn()), List.of(k), RouteResolver::concat);
                 });
         return out;
+    }
+
+    private static List<RouteKey> concat(List<RouteKey> a, List<RouteKey> b) {
+        List<RouteKey> out = new ArrayList<>(a);
+        out.addAll(b);
+        return List.copyOf(out);
     }
 }

@@ -1,0 +1,142 @@
+package org.variset.imports.load;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.variset.imports.ProblemList;
+import org.variset.imports.row.HoldRow;
+import org.variset.imports.row.RouteKey;
+import org.variset.imports.row.RouteRow;
+import org.variset.imports.row.WallRow;
+
+/**
+ * What an import found and decided, shared by its phases. It keeps little per route (its key, where it was read,
+ * its reset, how many holds the files bring) so that memory does not grow with the routes' content: the rows
+ * themselves are read again when they are compared and written. Names repeated on every row (gym, wall, reset) are
+ * kept once.
+ */
+final class ImportPlan {
+    final ImportOptions options;
+    final ProblemList problems;
+    final Map<List<String>, WallRow> walls = new LinkedHashMap<>();
+    final Map<RouteKey, PlannedRoute> routes = new LinkedHashMap<>();
+    /** Hold-list fingerprints of routes the archive already holds, to compare with it. */
+    final Map<RouteKey, HoldDigest> digests = new HashMap<>();
+    final Set<RouteKey> newRoutes = new LinkedHashSet<>();
+    final Set<RouteKey> changedRoutes = new LinkedHashSet<>();
+    final Set<RouteKey> refused = new LinkedHashSet<>();
+    /** Route rows with problems, by key: their holds are left out without a problem of their own. */
+    final Set<RouteKey> badRows = new LinkedHashSet<>();
+    final Set<List<String>> newWalls = new LinkedHashSet<>();
+    final Set<List<String>> changedWalls = new LinkedHashSet<>();
+    final List<String> changes = new ArrayList<>();
+    long unchanged;
+    private final Map<String, String> names = new HashMap<>();
+
+    /**
+     * A route the files bring: where its row is, its reset, and how many holds the files bring for it.
+     */
+    static final class PlannedRoute {
+        final String file;
+        final int line;
+        final String reset;
+        int holds;
+
+        PlannedRoute(String file, int line, String reset) {
+            this.file = file;
+            this.line = line;
+            this.reset = reset;
+        }
+
+        String where() {
+            return file + ":" + line;
+        }
+
+        /** True when a row is the one this route was planned from (a duplicate row is not). */
+        boolean from(RouteRow r) {
+            return line == r.line() && file.equals(r.file());
+        }
+    }
+
+    ImportPlan(ImportOptions options, ProblemList problems) {
+        this.options = options;
+        this.problems = problems;
+    }
+
+    /** The one copy of a name. */
+    String intern(String s) {
+        return s == null ? null : names.computeIfAbsent(s, x -> x);
+    }
+
+    /** A key whose gym and wall names are the plan's copies. */
+    RouteKey intern(RouteKey k) {
+        return new RouteKey(intern(k.gym()), intern(k.wall()), k.label(), k.setOn());
+    }
+
+    void addWall(WallRow w) {
+        if (w == null) {
+            return;
+        }
+        WallRow before = walls.putIfAbsent(List.of(w.gym(), w.wall()), w);
+        if (before != null) {
+            problems.add(w.file(), w.line(), "wall", "the same wall as line " + before.line());
+        }
+    }
+
+    void addRoute(RouteRow r) {
+        if (r == null) {
+            return;
+        }
+        PlannedRoute before = routes.putIfAbsent(intern(r.key()), new PlannedRoute(intern(r.file()), r.line(),
+                intern(r.reset())));
+        if (before != null) {
+            problems.add(r.file(), r.line(), "route", "the same route as " + before.where()
+                    + " (a route is identified by gym, wall, route and set_on)");
+        }
+    }
+
+    /** Counts a hold of a route; for a route the archive holds, adds it to the route's fingerprint too. */
+    void addHold(RouteKey k, HoldRow h, boolean archived) {
+        if (archived) {
+            digests.computeIfAbsent(k, x -> new HoldDigest()).add(h.spec(), h.file(), h.line());
+        } else {
+            routes.get(k).holds++;
+        }
+    }
+
+    /** The routes the files bring holds for. */
+    Set<RouteKey> keysWithHolds() {
+        Set<RouteKey> out = new LinkedHashSet<>(digests.keySet());
+        routes.forEach((k, p) -> {
+            if (p.holds > 0) {
+                out.add(k);
+            }
+        });
+        return out;
+    }
+
+    private long holdsOf(RouteKey k) {
+        HoldDigest d = digests.get(k);
+        return d != null ? d.size() : routes.containsKey(k) ? routes.get(k).holds : 0;
+    }
+
+    /** True when the route's holds are written: it is new, or changed and updated, and the files bring holds. */
+    boolean writesHoldsOf(RouteKey k) {
+        return holdsOf(k) > 0 && !refused.contains(k)
+                && (newRoutes.contains(k) || changedRoutes.contains(k) && options.update());
+    }
+
+    long holdCount() {
+        return keysWithHolds().stream().filter(this::writesHoldsOf).mapToLong(this::holdsOf).sum();
+    }
+
+    ImportSummary summary(long holdsWritten, long wallsNew, Set<String> extraColumns, Set<String> unknownTerms) {
+        return new ImportSummary(options.dryRun(), newRoutes.size(), unchanged, changedRoutes.size(),
+                wallsNew, changedWalls.size(), holdsWritten, List.copyOf(changes), problems.lines(),
+                problems.count(), Set.copyOf(extraColumns), Set.copyOf(unknownTerms));
+    }
+}
