@@ -46,6 +46,20 @@ class DayToDayCommandsTest {
     }
 
     @Test
+    void namesHowLongEachPhaseOfAnImportTookWhenVerbose() {
+        Path routes = example("routes.csv");
+        Path holds = example("holds.csv");
+        CliRun quiet = run("import", routes.toString(), holds.toString(), "--update").exits(ExitCode.OK);
+        assertThat(quiet.err()).doesNotContain(" took ");
+        CliRun r = run("--verbose", "import", routes.toString(), holds.toString(), "--update").exits(ExitCode.OK);
+        for (String phase : new String[] {"reading routes", "checking holds", "comparing with the archive",
+            "writing routes", "writing holds", "recording the change log", "committing",
+            "updating the search index"}) {
+            assertThat(r.err()).containsPattern("variset: " + phase + " took \\d+\\.\\d s");
+        }
+    }
+
+    @Test
     void listsLocatedProblemsForABadFileAndWritesNothing() throws Exception {
         Path bad = Files.writeString(home.resolve("routes.csv"), "gym,wall,route,set_on,discipline,grade\n"
                 + "Example Gym,North Arch,N9,2026-02-30,boulder,V2\n");

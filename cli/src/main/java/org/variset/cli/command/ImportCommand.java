@@ -48,10 +48,12 @@ final class ImportCommand extends VarisetSubcommand {
                 .withUpdate(update);
         ImportSummary s;
         try (Archive archive = openArchive();
-                ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal())) {
+                ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal(), root().verbose)) {
             s = new ArchiveImporter(archive).run(files, options, progress);
             if (!s.dryRun()) {
-                IndexUpkeep.afterWrite(archive, err());
+                long start = System.nanoTime();
+                IndexUpkeep.afterWrite(archive, err(), progress.indexing());
+                progress.finished("updating the search index", System.nanoTime() - start);
             }
         } catch (ImportException e) {
             err().println("variset import: " + e.getMessage());

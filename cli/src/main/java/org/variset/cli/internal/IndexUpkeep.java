@@ -24,12 +24,17 @@ public final class IndexUpkeep {
 
     /** Brings the index up to date after a write; a failure is a warning on {@code err}, never an error. */
     public static void afterWrite(Archive archive, PrintWriter err) {
+        afterWrite(archive, err, IndexProgress.NONE);
+    }
+
+    /** As {@link #afterWrite(Archive, PrintWriter)}, reporting progress (a large import changes many routes). */
+    public static void afterWrite(Archive archive, PrintWriter err, IndexProgress progress) {
         if (archive.dir() == null) {
             return;
         }
         pauseForTests(err);
         try (SearchIndex index = SearchIndex.at(archive.dir())) {
-            index.sync(archive.connection(), IndexProgress.NONE);
+            index.sync(archive.connection(), progress);
         } catch (RuntimeException e) {
             err.println("variset: warning: the search index could not be updated (" + e.getMessage() + "); the "
                     + "archive itself is complete, and the next search will bring the index up to date.");

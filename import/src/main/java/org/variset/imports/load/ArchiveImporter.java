@@ -51,20 +51,47 @@ public final class ArchiveImporter {
         ImportPlan plan = new ImportPlan(options, new ProblemList());
         RowParser parser = new RowParser(options.vocabulary(), plan.problems);
         RowParser quiet = new RowParser(options.vocabulary(), new ProblemList());
+        Stopwatch clock = new Stopwatch(progress);
         read(sources, parser, plan);
-        return archive.fromTransaction(session -> {
+        clock.lap("reading routes");
+        long[] committing = {0};
+        ImportSummary summary = archive.fromTransaction(session -> {
             RouteResolver resolver = new RouteResolver(session, plan.routes.keySet(), plan.badRows);
             checkHolds(sources, parser, resolver, plan, progress);
+            clock.lap("checking holds");
             refuseUnlessSkipping(plan);
             new ArchiveComparison(session, archive, plan, resolver).run(sources, quiet);
+            clock.lap("comparing with the archive");
             refuseUnlessSkipping(plan);
             if (plan.options.dryRun()) {
                 return plan.summary(plan.holdCount(), plan.newWalls.size(), extraColumns, parser.unknownTerms());
             }
             ArchiveWriter writer = new ArchiveWriter(session, plan, quiet);
-            long holds = writer.write(sources, resolver, progress);
+            long holds = writer.write(sources, resolver, progress, clock);
+            committing[0] = System.nanoTime();
             return plan.summary(holds, writer.wallsCreated(), extraColumns, parser.unknownTerms());
         });
+        if (committing[0] != 0) {
+            progress.finished("committing", System.nanoTime() - committing[0]);
+        }
+        return summary;
+    }
+
+    /** Times the phases of an import for {@link ImportProgress#finished}. */
+    static final class Stopwatch {
+        private final ImportProgress progress;
+        private long last = System.nanoTime();
+
+        Stopwatch(ImportProgress progress) {
+            this.progress = progress;
+        }
+
+        /** Reports the time since the last lap as a phase's. */
+        void lap(String phase) {
+            long now = System.nanoTime();
+            progress.finished(phase, now - last);
+            last = now;
+        }
     }
 
     private static void refuseUnlessSkipping(ImportPlan plan) {

@@ -1,15 +1,26 @@
 package org.variset.imports.load;
 
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.LocalDate;
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
 import org.hibernate.Session;
+import org.variset.archive.bulk.BulkInserts;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.gym.Wall;
-import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
+import org.variset.archive.store.ArchiveException;
 import org.variset.archive.store.ArchiveQueries;
 import org.variset.archive.store.ChangeLog;
 import org.variset.imports.row.HoldRow;
@@ -22,22 +33,42 @@ import org.variset.imports.table.RowSource;
 import org.variset.imports.table.TableKind;
 
 /**
- * Writes a checked import plan in the caller's transaction. The session is flushed and cleared in chunks so that
- * memory does not grow with the file; entities are found again by id after each clear.
+ * Writes a checked import plan in the caller's transaction. Gyms and walls (a few) go through Hibernate; new resets,
+ * setters, routes and holds (the bulk) through {@link BulkInserts} on the session's own connection, so they share
+ * its transaction; a changed route that is updated goes through its entity again. Rows are read again from the files,
+ * so memory does not grow with what the routes hold.
  */
 final class ArchiveWriter {
-    private static final int ROUTE_CHUNK = 500;
-    private static final int HOLD_CHUNK = 2_000;
+    private static final int PROGRESS_EVERY = 2_000;
 
     private final Session session;
     private final ImportPlan plan;
     private final RowParser quiet;
-    private final Map<String, Long> gyms = new HashMap<>();
-    private final Map<List<String>, Long> walls = new HashMap<>();
-    private final Map<List<String>, Long> resets = new HashMap<>();
+    /** Walls by gym and name: their ids and a detached entity to build transient resets on. */
+    private final Map<List<String>, WallRef> walls = new HashMap<>();
+    /** Resets by gym and label. */
+    private final Map<List<String>, ResetRef> resets = new HashMap<>();
     private final Map<String, Long> setters = new HashMap<>();
     private final Map<RouteKey, Long> routeIds = new HashMap<>();
     private int wallsCreated;
+
+    private record WallRef(long gymId, long wallId, Wall entity) {
+    }
+
+    /** A reset: its ids, its date so far, and a transient entity for building transient routes on. */
+    private static final class ResetRef {
+        final long id;
+        final long wallId;
+        final Reset entity;
+        LocalDate on;
+
+        ResetRef(long id, long wallId, Reset entity, LocalDate on) {
+            this.id = id;
+            this.wallId = wallId;
+            this.entity = entity;
+            this.on = on;
+        }
+    }
 
     ArchiveWriter(Session session, ImportPlan plan, RowParser quiet) {
         this.session = session;
@@ -46,12 +77,25 @@ final class ArchiveWriter {
     }
 
     /** Writes walls, routes and holds, and records the routes written in the change log; returns holds written. */
-    long write(List<RowSource> sources, RouteResolver resolver, ImportProgress progress) {
-        long holds = writeRoutesAndHolds(sources, resolver, progress);
-        java.util.Set<Long> changed = new java.util.TreeSet<>();
+    long write(List<RowSource> sources, RouteResolver resolver, ImportProgress progress,
+            ArchiveImporter.Stopwatch clock) {
+        writeWalls();
+        Connection c = session.doReturningWork(x -> x);
+        long holds;
+        try (BulkInserts bulk = new BulkInserts(c)) {
+            loadResets(c);
+            loadSetters(c);
+            writeRoutes(sources, bulk);
+            bulk.flush();
+            clock.lap("writing routes");
+            holds = writeHolds(c, sources, resolver, bulk, progress);
+        } catch (SQLException e) {
+            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot write to the archive: "
+                    + e.getMessage(), e);
+        }
+        Set<Long> changed = new TreeSet<>();
         for (RouteKey k : plan.routes.keySet()) {
-            if (!plan.refused.contains(k) && (plan.newRoutes.contains(k) || plan.changedRoutes.contains(k)
-                    && plan.options.update())) {
+            if (writesRoute(k)) {
                 changed.add(routeId(k));
             }
         }
@@ -60,21 +104,105 @@ final class ArchiveWriter {
                 changed.add(routeId(k));
             }
         }
+        clock.lap("writing holds");
         ChangeLog.routes(session, changed);
+        clock.lap("recording the change log");
         return holds;
     }
 
-    private long writeRoutesAndHolds(List<RowSource> sources, RouteResolver resolver, ImportProgress progress) {
+    /** Walls the write created, named in a walls file or only in a routes file. */
+    int wallsCreated() {
+        return wallsCreated;
+    }
+
+    private boolean writesRoute(RouteKey k) {
+        return !plan.refused.contains(k) && (plan.newRoutes.contains(k) || plan.changedRoutes.contains(k)
+                && plan.options.update());
+    }
+
+    /** Creates and describes walls with Hibernate: those of the walls files and those new routes name. */
+    private void writeWalls() {
         for (WallRow w : plan.walls.values()) {
-            Wall wall = wall(w.gym(), w.wall());
             List<String> key = List.of(w.gym(), w.wall());
+            Wall wall = wall(key);
             if (plan.newWalls.contains(key) || plan.changedWalls.contains(key) && plan.options.update()) {
                 wall.describe(w.discipline(), w.angleDeg(), w.heightM(), w.widthM(), w.cycleDays());
                 wall.setExtraFields(w.extraFields());
             }
         }
-        int n = 0;
-        java.util.Set<RouteKey> written = new java.util.HashSet<>();
+        Set<List<String>> named = new LinkedHashSet<>();
+        for (RouteKey k : plan.routes.keySet()) {
+            if (writesRoute(k)) {
+                named.add(List.of(k.gym(), k.wall()));
+            }
+        }
+        named.forEach(this::wall);
+        session.flush();
+    }
+
+    private Wall wall(List<String> key) {
+        WallRef ref = walls.get(key);
+        if (ref != null) {
+            return ref.entity();
+        }
+        Wall w = session.createSelectionQuery("from Wall w join fetch w.gym where w.gym.name = :g and w.name = :n",
+                Wall.class).setParameter("g", key.get(0)).setParameter("n", key.get(1)).uniqueResultOptional()
+                .orElseGet(() -> {
+                    Wall created = new Wall(gym(key.get(0)), key.get(1));
+                    session.persist(created);
+                    wallsCreated++;
+                    return created;
+                });
+        walls.put(key, new WallRef(w.gym().id(), w.id(), w));
+        return w;
+    }
+
+    private Gym gym(String name) {
+        return session.createSelectionQuery("from Gym g where g.name = :n", Gym.class).setParameter("n", name)
+                .uniqueResultOptional().orElseGet(() -> {
+                    Gym g = new Gym(name, plan.options.newGymZone());
+                    session.persist(g);
+                    session.flush();
+                    return g;
+                });
+    }
+
+    /** The stored resets of the gyms written to. */
+    private void loadResets(Connection c) throws SQLException {
+        Map<Long, String> gymNames = new HashMap<>();
+        Map<Long, WallRef> wallsById = new HashMap<>();
+        walls.forEach((k, w) -> {
+            gymNames.put(w.gymId(), k.get(0));
+            wallsById.put(w.wallId(), w);
+        });
+        try (PreparedStatement s = c.prepareStatement("SELECT r.id, r.label, r.reset_on, r.wall_id, w.name FROM reset r"
+                + " JOIN wall w ON w.id = r.wall_id WHERE r.gym_id = ?")) {
+            for (Map.Entry<Long, String> g : gymNames.entrySet()) {
+                s.setLong(1, g.getKey());
+                try (ResultSet r = s.executeQuery()) {
+                    while (r.next()) {
+                        long wallId = r.getLong(4);
+                        WallRef w = wallsById.get(wallId);
+                        Wall wall = w != null ? w.entity() : wall(List.of(g.getValue(), r.getString(5)));
+                        LocalDate on = r.getDate(3).toLocalDate();
+                        resets.put(List.of(g.getValue(), r.getString(2)), new ResetRef(r.getLong(1), wallId,
+                                new Reset(wall, r.getString(2), on), on));
+                    }
+                }
+            }
+        }
+    }
+
+    private void loadSetters(Connection c) throws SQLException {
+        try (PreparedStatement s = c.prepareStatement("SELECT id, name FROM setter"); ResultSet r = s.executeQuery()) {
+            while (r.next()) {
+                setters.put(r.getString(2), r.getLong(1));
+            }
+        }
+    }
+
+    private void writeRoutes(List<RowSource> sources, BulkInserts bulk) throws SQLException {
+        Set<RouteKey> written = new HashSet<>();
         for (RowSource s : sources) {
             if (s.kind() != TableKind.ROUTES) {
                 continue;
@@ -84,87 +212,75 @@ final class ArchiveWriter {
                     RouteRow row = quiet.route(c.next());
                     RouteKey k = row == null ? null : plan.intern(row.key());
                     ImportPlan.PlannedRoute p = k == null ? null : plan.routes.get(k);
-                    if (p == null || !p.from(row) || plan.refused.contains(k) || !written.add(k)) {
+                    if (p == null || !p.from(row) || !writesRoute(k) || !written.add(k)) {
                         continue;
                     }
-                    if (writeRoute(k, row) && ++n % ROUTE_CHUNK == 0) {
-                        session.flush();
-                        session.clear();
+                    if (plan.newRoutes.contains(k)) {
+                        insert(k, row, bulk);
+                    } else {
+                        update(k, row, bulk);
                     }
                 }
             }
         }
+    }
+
+    private void insert(RouteKey k, RouteRow row, BulkInserts bulk) throws SQLException {
+        ResetRef reset = reset(k, row, bulk);
+        Route r = new Route(reset.entity, k.label(), k.setOn(), row.discipline(), row.grade());
+        fill(r, row);
+        List<Long> ids = new ArrayList<>();
+        for (String name : row.setters()) {
+            ids.add(setterId(name, bulk));
+        }
+        WallRef wall = walls.get(List.of(k.gym(), k.wall()));
+        routeIds.put(k, bulk.route(r, wall.gymId(), reset.wallId, reset.id, ids));
+    }
+
+    /** A changed route, updated through its entity (rare: the batches are sent first, the session flushed after). */
+    private void update(RouteKey k, RouteRow row, BulkInserts bulk) throws SQLException {
+        ResetRef reset = reset(k, row, bulk);
+        List<Setter> list = new ArrayList<>();
+        for (String name : row.setters()) {
+            list.add(session.getReference(Setter.class, setterId(name, bulk)));
+        }
+        bulk.flush();
+        Route r = find(k);
+        r.setGrade(row.grade());
+        r.setReset(session.getReference(Reset.class, reset.id));
+        fill(r, row);
+        r.setSetters(list);
         session.flush();
-        session.clear();
-        return writeHolds(sources, resolver, progress);
+        routeIds.put(k, r.id());
     }
 
-    /** Writes one route row when it is new, or changed and updated; true when it wrote. */
-    private boolean writeRoute(RouteKey k, RouteRow row) {
-        if (plan.newRoutes.contains(k)) {
-            Route r = new Route(reset(row), k.label(), k.setOn(), row.discipline(), row.grade());
-            fill(r, row);
-            session.persist(r);
-            routeIds.put(k, r.id());
-            return true;
+    private ResetRef reset(RouteKey k, RouteRow row, BulkInserts bulk) throws SQLException {
+        List<String> key = List.of(k.gym(), row.reset());
+        ResetRef ref = resets.get(key);
+        if (ref == null) {
+            WallRef wall = walls.get(List.of(k.gym(), k.wall()));
+            Reset entity = new Reset(wall.entity(), row.reset(), k.setOn());
+            ref = new ResetRef(bulk.reset(entity, wall.gymId(), wall.wallId()), wall.wallId(), entity, k.setOn());
+            resets.put(key, ref);
+        } else if (k.setOn().isBefore(ref.on)) {
+            bulk.resetOnOrBefore(ref.id, k.setOn());
+            ref.on = k.setOn();
         }
-        if (plan.changedRoutes.contains(k) && plan.options.update()) {
-            Route r = find(k);
-            r.setGrade(row.grade());
-            r.setReset(reset(row));
-            fill(r, row);
-            return true;
-        }
-        return false;
+        return ref;
     }
 
-    private long writeHolds(List<RowSource> sources, RouteResolver resolver, ImportProgress progress) {
-        Map<RouteKey, Integer> ordinals = new HashMap<>();
-        for (RouteKey k : plan.keysWithHolds()) {
-            if (plan.writesHoldsOf(k)) {
-                long id = routeId(k);
-                if (!plan.newRoutes.contains(k)) {
-                    session.createMutationQuery("delete from HoldPlacement h where h.route.id = :id")
-                            .setParameter("id", id).executeUpdate();
-                }
-            }
+    private long setterId(String name, BulkInserts bulk) throws SQLException {
+        Setter transientSetter = new Setter(name);
+        Long id = setters.get(transientSetter.name());
+        if (id == null) {
+            id = bulk.setter(transientSetter);
+            setters.put(transientSetter.name(), id);
         }
-        long written = 0;
-        for (RowSource s : sources) {
-            if (s.kind() != TableKind.HOLDS) {
-                continue;
-            }
-            try (RowCursor c = s.rows()) {
-                while (c.hasNext()) {
-                    HoldRow h = quiet.hold(c.next());
-                    RouteKey k = h == null ? null : resolver.resolve(h, null);
-                    if (k == null || !plan.writesHoldsOf(k)) {
-                        continue;
-                    }
-                    int ordinal = ordinals.merge(k, 1, Integer::sum) - 1;
-                    Route ref = session.getReference(Route.class, routeId(k));
-                    session.persist(HoldPlacement.placedOn(ref, ordinal, h.spec()));
-                    if (++written % HOLD_CHUNK == 0) {
-                        session.flush();
-                        session.clear();
-                        progress.advanced("writing holds", written);
-                    }
-                }
-            }
-        }
-        session.flush();
-        session.clear();
-        return written;
+        return id;
     }
 
-    /** Walls the write created, named in a walls file or only in a routes file. */
-    int wallsCreated() {
-        return wallsCreated;
-    }
-
-    private void fill(Route r, RouteRow row) {
+    private static void fill(Route r, RouteRow row) {
         r.setStrippedOn(row.strippedOn());
-        r.setSetters(row.setters().stream().map(this::setter).toList());
         r.setColor(row.color());
         r.setAngleDeg(row.angleDeg());
         r.setMoves(row.moves());
@@ -174,55 +290,45 @@ final class ArchiveWriter {
         r.setExtraFields(row.extraFields());
     }
 
+    private long writeHolds(Connection c, List<RowSource> sources, RouteResolver resolver, BulkInserts bulk,
+            ImportProgress progress) throws SQLException {
+        try (PreparedStatement delete = c.prepareStatement("DELETE FROM hold_placement WHERE route_id = ?")) {
+            for (RouteKey k : plan.keysWithHolds()) {
+                if (plan.writesHoldsOf(k) && !plan.newRoutes.contains(k)) {
+                    delete.setLong(1, routeId(k));
+                    delete.executeUpdate();
+                }
+            }
+        }
+        Map<RouteKey, Integer> ordinals = new HashMap<>();
+        long written = 0;
+        for (RowSource s : sources) {
+            if (s.kind() != TableKind.HOLDS) {
+                continue;
+            }
+            try (RowCursor cursor = s.rows()) {
+                while (cursor.hasNext()) {
+                    HoldRow h = quiet.hold(cursor.next());
+                    RouteKey k = h == null ? null : resolver.resolve(h, null);
+                    if (k == null || !plan.writesHoldsOf(k)) {
+                        continue;
+                    }
+                    int ordinal = ordinals.merge(k, 1, Integer::sum) - 1;
+                    bulk.hold(routeId(k), ordinal, h.spec());
+                    if (++written % PROGRESS_EVERY == 0) {
+                        progress.advanced("writing holds", written);
+                    }
+                }
+            }
+        }
+        return written;
+    }
+
     private long routeId(RouteKey k) {
         return routeIds.computeIfAbsent(k, key -> find(key).id());
     }
 
     private Route find(RouteKey k) {
         return new ArchiveQueries(session).route(k.gym(), k.wall(), k.label(), k.setOn()).orElse(null);
-    }
-
-    private Gym gym(String name) {
-        Long id = gyms.computeIfAbsent(name, n -> session.createSelectionQuery("select g.id from Gym g"
-                + " where g.name = :n", Long.class).setParameter("n", n).uniqueResultOptional().orElseGet(() -> {
-                    Gym g = new Gym(n, plan.options.newGymZone());
-                    session.persist(g);
-                    return g.id();
-                }));
-        return session.get(Gym.class, id);
-    }
-
-    private Wall wall(String gymName, String name) {
-        Long id = walls.computeIfAbsent(List.of(gymName, name), k -> session.createSelectionQuery(
-                "select w.id from Wall w where w.gym.name = :g and w.name = :n", Long.class)
-                .setParameter("g", gymName).setParameter("n", name).uniqueResultOptional().orElseGet(() -> {
-                    Wall w = new Wall(gym(gymName), name);
-                    session.persist(w);
-                    wallsCreated++;
-                    return w.id();
-                }));
-        return session.get(Wall.class, id);
-    }
-
-    private Reset reset(RouteRow row) {
-        RouteKey k = row.key();
-        Long id = resets.computeIfAbsent(List.of(k.gym(), row.reset()), key -> session.createSelectionQuery(
-                "select r.id from Reset r where r.gym.name = :g and r.label = :l", Long.class)
-                .setParameter("g", k.gym()).setParameter("l", row.reset()).uniqueResultOptional().orElseGet(() -> {
-                    Reset r = new Reset(wall(k.gym(), k.wall()), row.reset(), k.setOn());
-                    session.persist(r);
-                    return r.id();
-                }));
-        return session.get(Reset.class, id);
-    }
-
-    private Setter setter(String name) {
-        Long id = setters.computeIfAbsent(name, n -> session.createSelectionQuery("select s.id from Setter s"
-                + " where s.name = :n", Long.class).setParameter("n", n).uniqueResultOptional().orElseGet(() -> {
-                    Setter s = new Setter(n);
-                    session.persist(s);
-                    return s.id();
-                }));
-        return session.get(Setter.class, id);
     }
 }

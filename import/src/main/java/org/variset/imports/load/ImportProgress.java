@@ -12,4 +12,13 @@ public interface ImportProgress {
      * @param rows rows done so far in this phase
      */
     void advanced(String phase, long rows);
+
+    /**
+     * Called when a phase of the import ends, with how long it took (for a front end's timings).
+     *
+     * @param phase the phase ({@code reading routes}, {@code checking holds}, {@code writing holds}, ...)
+     * @param nanos how long it took
+     */
+    default void finished(String phase, long nanos) {
+    }
 }

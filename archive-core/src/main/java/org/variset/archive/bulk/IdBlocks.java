@@ -1,0 +1,52 @@
+package org.variset.archive.bulk;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.util.HashMap;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * Ids from the archive's sequences, handed out as Hibernate's pooled optimizer hands them out (every sequence steps
+ * by {@link #BLOCK}): a sequence value {@code v} is the top of the block {@code v-49 .. v}, and the sequence's first
+ * value 1 is a block of its own. Both can therefore draw from the same sequence without ever giving one id twice.
+ */
+public final class IdBlocks {
+    /** The step of every id sequence (the migrations' {@code INCREMENT BY}, the entities' allocation size). */
+    public static final int BLOCK = 50;
+
+    private final Connection connection;
+    private final boolean postgres;
+    private final Map<String, long[]> blocks = new HashMap<>();
+
+    /** Ids drawn through a connection (in its transaction). */
+    public IdBlocks(Connection connection) throws SQLException {
+        this.connection = connection;
+        this.postgres = connection.getMetaData().getDatabaseProductName().toLowerCase(Locale.ROOT)
+                .contains("postgres");
+    }
+
+    /** The next id of a sequence ({@code route_seq}, {@code hold_seq}, ...). */
+    public long next(String sequence) throws SQLException {
+        long[] b = blocks.get(sequence);
+        if (b == null || b[0] > b[1]) {
+            long hi = nextValue(sequence);
+            b = new long[] {hi == 1 ? 1 : hi - BLOCK + 1, hi};
+            blocks.put(sequence, b);
+        }
+        return b[0]++;
+    }
+
+    private long nextValue(String sequence) throws SQLException {
+        if (!sequence.matches("[a-z_]+")) {
+            throw new IllegalArgumentException("not a sequence name: " + sequence);
+        }
+        String sql = postgres ? "SELECT nextval('" + sequence + "')" : "SELECT NEXT VALUE FOR " + sequence;
+        try (PreparedStatement s = connection.prepareStatement(sql); ResultSet r = s.executeQuery()) {
+            r.next();
+            return r.getLong(1);
+        }
+    }
+}
