@@ -32,6 +32,9 @@ public final class GripDirection {
      */
     public static double parse(String text) {
         String t = text == null ? "" : text.strip().toLowerCase(Locale.ROOT);
+        if (plainNumber(t)) {
+            return ofDegrees(Double.parseDouble(t), text);
+        }
         Double word = WORDS.get(t);
         if (word != null) {
             return word;
@@ -49,6 +52,23 @@ public final class GripDirection {
             return ofDegrees(Double.parseDouble(t), text);
         }
         throw new IllegalArgumentException("'" + text + "' is not a grip direction (expected " + EXPECTED + ")");
+    }
+
+    /** Digits with at most one decimal point: the common case, read without a regular expression. */
+    private static boolean plainNumber(String t) {
+        if (t.isEmpty() || t.length() > 12) {
+            return false;
+        }
+        int dots = 0;
+        for (int i = 0; i < t.length(); i++) {
+            char c = t.charAt(i);
+            if (c == '.') {
+                dots++;
+            } else if (c < '0' || c > '9') {
+                return false;
+            }
+        }
+        return dots <= 1 && t.charAt(0) != '.' && t.charAt(t.length() - 1) != '.';
     }
 
     /**

@@ -116,7 +116,7 @@ public final class SearchIndex implements AutoCloseable {
         try (IndexWriter w = writer(IndexWriterConfig.OpenMode.CREATE)) {
             new RouteReader(c).forEachChunk(RouteFilter.all(), CHUNK, chunk -> {
                 for (RouteRecord r : chunk) {
-                    add(w, r, timelines);
+                    add(w, r, timelines, false);
                 }
                 done[0] += chunk.size();
                 progress.indexed(done[0], total);
@@ -138,7 +138,7 @@ public final class SearchIndex implements AutoCloseable {
                 Set<Long> present = new HashSet<>();
                 for (RouteRecord r : reader.read(RouteFilter.all().withIds(ids))) {
                     present.add(r.id());
-                    add(w, r, timelines);
+                    add(w, r, timelines, true);
                 }
                 for (Long id : ids) {
                     if (!present.contains(id)) {
@@ -154,10 +154,15 @@ public final class SearchIndex implements AutoCloseable {
         return new IndexSync(IndexSync.Action.CAUGHT_UP, changed.size(), "", to);
     }
 
-    private void add(IndexWriter w, RouteRecord r, Map<String, SettingsTimeline> timelines) {
+    /** Adds a route's document; {@code replace} when the index may hold an older one (not in a rebuild). */
+    private void add(IndexWriter w, RouteRecord r, Map<String, SettingsTimeline> timelines, boolean replace) {
         try {
             Document d = facets.build(RouteDocuments.of(r, timelines.get(r.gym()).on(r.setOn())));
-            w.updateDocument(new Term(SearchFields.ID, Long.toString(r.id())), d);
+            if (replace) {
+                w.updateDocument(new Term(SearchFields.ID, Long.toString(r.id())), d);
+            } else {
+                w.addDocument(d);
+            }
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

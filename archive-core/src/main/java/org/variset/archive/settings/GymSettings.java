@@ -2,6 +2,7 @@ package org.variset.archive.settings;
 
 import java.math.BigDecimal;
 import java.util.Collection;
+import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
@@ -35,6 +36,7 @@ public final class GymSettings {
 
     private final Map<String, SettingValue> inEffect;
     private Vocabulary vocabulary;
+    private final Map<Discipline, BandSet> bandSets = new EnumMap<>(Discipline.class);
 
     private GymSettings(Map<String, SettingValue> inEffect) {
         this.inEffect = inEffect;
@@ -89,9 +91,9 @@ public final class GymSettings {
     }
 
     /** The grade bands of a discipline (grades.md defaults). */
-    public BandSet bands(Discipline d) {
-        return given(SettingKey.BANDS, scopeOf(d)).map(v -> SettingKey.bandSet(v.value()))
-                .orElse(BandSet.defaults(d));
+    public synchronized BandSet bands(Discipline d) {
+        return bandSets.computeIfAbsent(d, x -> given(SettingKey.BANDS, scopeOf(x)).map(v -> SettingKey.bandSet(
+                v.value())).orElse(BandSet.defaults(x)));
     }
 
     /** The near-repeat threshold. */

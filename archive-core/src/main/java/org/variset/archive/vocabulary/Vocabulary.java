@@ -87,8 +87,25 @@ public final class Vocabulary {
         return freeze(s, t);
     }
 
+    /** Stripped, runs of white space as one space, lower case: how spellings are compared. */
     static String key(String text) {
-        return text == null ? "" : text.strip().replaceAll("\\s+", " ").toLowerCase(Locale.ROOT);
+        if (text == null) {
+            return "";
+        }
+        String t = text.strip();
+        StringBuilder b = new StringBuilder(t.length());
+        boolean afterSpace = false;
+        for (int i = 0; i < t.length(); i++) {
+            char c = t.charAt(i);
+            boolean space = Character.isWhitespace(c);
+            if (!space) {
+                b.append(c);
+            } else if (!afterSpace) {
+                b.append(' ');
+            }
+            afterSpace = space;
+        }
+        return b.toString().toLowerCase(Locale.ROOT);
     }
 
     private static Vocabulary loadDefault() {

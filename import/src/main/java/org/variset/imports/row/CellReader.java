@@ -11,7 +11,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
 import org.variset.imports.ProblemList;
-import org.variset.imports.table.Columns;
 import org.variset.imports.table.TableKind;
 import org.variset.imports.table.TableRow;
 
@@ -199,7 +198,7 @@ final class CellReader {
             if (k.startsWith("#")) {
                 problem("cell " + k.substring(1), "this row has more cells than the header has columns");
             } else if (!k.startsWith("@") && !kind.knows(k) && !(kind == TableKind.ROUTES && k.equals("holds"))) {
-                String near = Columns.nearest(Columns.normalise(k), kind.columns());
+                String near = kind.nearest(k);
                 if (near != null) {
                     problem(k, "unknown column (did you mean `" + near + "`?)");
                     return;

@@ -36,6 +36,8 @@ public final class CsvSource implements RowSource {
     private final char delimiter;
     private final List<String> header;
     private final TableKind kind;
+    /** The key of each header column in a row's cells: the spec's name in lower case, or an extra name as written. */
+    private final String[] keys;
 
     private CsvSource(Path path, String file, char delimiter, List<String> header) {
         this.path = path;
@@ -44,6 +46,8 @@ public final class CsvSource implements RowSource {
         this.header = header;
         this.kind = TableKind.detect(path.getFileName().toString(),
                 header.stream().map(Columns::normalise).collect(Collectors.toSet()));
+        this.keys = header.stream().map(name -> kind.knows(Columns.normalise(name)) ? Columns.normalise(name)
+                : name.strip()).toArray(String[]::new);
     }
 
     /**
@@ -201,10 +205,8 @@ public final class CsvSource implements RowSource {
                 throw failure(file, line, e);
             }
             Map<String, Object> cells = new LinkedHashMap<>();
-            for (int i = 0; i < header.size() && i < r.size(); i++) {
-                String name = header.get(i);
-                String key = kind.knows(Columns.normalise(name)) ? Columns.normalise(name) : name.strip();
-                cells.put(key, r.get(i));
+            for (int i = 0; i < keys.length && i < r.size(); i++) {
+                cells.put(keys[i], r.get(i));
             }
             if (r.size() > header.size()) {
                 for (int i = header.size(); i < r.size(); i++) {

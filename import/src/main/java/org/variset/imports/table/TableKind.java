@@ -2,7 +2,11 @@ package org.variset.imports.table;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.stream.Stream;
 
 /** The three tables of the interchange formats, with their columns (interchange.md). */
 public enum TableKind {
@@ -19,11 +23,19 @@ public enum TableKind {
     private final String word;
     private final List<String> required;
     private final List<String> optional;
+    private final Set<String> known;
+    /** The nearest known column of a name that is not one (see {@link #nearest}), remembered per name. */
+    private final Map<String, Optional<String>> nearest = new ConcurrentHashMap<>();
 
     TableKind(String word, List<String> required, List<String> optional) {
         this.word = word;
         this.required = required;
         this.optional = optional;
+        this.known = Set.copyOf(columns(required, optional));
+    }
+
+    private static List<String> columns(List<String> required, List<String> optional) {
+        return Stream.concat(required.stream(), optional.stream()).toList();
     }
 
     /** The table's name, also the XLSX sheet name. */
@@ -38,12 +50,27 @@ public enum TableKind {
 
     /** The columns in the order the spec lists them: required first, then optional. */
     public List<String> columns() {
-        return java.util.stream.Stream.concat(required.stream(), optional.stream()).toList();
+        return columns(required, optional);
     }
 
     /** True for a column the spec defines for this table. */
     public boolean knows(String column) {
-        return required.contains(column) || optional.contains(column);
+        return known.contains(column);
+    }
+
+    /**
+     * The known column within two edits of an unknown one ({@link Columns#nearest}), or null; remembered, since it is
+     * asked for every row of a file with an extra column.
+     */
+    public String nearest(String column) {
+        Optional<String> n = nearest.get(column);
+        if (n == null) {
+            n = Optional.ofNullable(Columns.nearest(Columns.normalise(column), columns()));
+            if (nearest.size() < 10_000) {
+                nearest.put(column, n);
+            }
+        }
+        return n.orElse(null);
     }
 
     /**

@@ -64,6 +64,7 @@ public final class XlsxWorkbook {
     private static RowSource table(Sheet sheet, String file, TableKind kind) {
         List<String> header = new ArrayList<>();
         List<TableRow> rows = new ArrayList<>();
+        List<String> keys = new ArrayList<>();
         int headerLine = 0;
         for (Row row : sheet) {
             if (header.isEmpty()) {
@@ -71,6 +72,8 @@ public final class XlsxWorkbook {
                     String v = value(row.getCell(c));
                     header.add(v == null ? "" : v);
                 }
+                header.forEach(name -> keys.add(kind.knows(Columns.normalise(name)) ? Columns.normalise(name)
+                        : name.strip()));
                 headerLine = row.getRowNum() + 1;
                 continue;
             }
@@ -79,8 +82,7 @@ public final class XlsxWorkbook {
             for (int c = 0; c < header.size(); c++) {
                 String v = value(row.getCell(c));
                 if (v != null) {
-                    String name = header.get(c);
-                    cells.put(kind.knows(Columns.normalise(name)) ? Columns.normalise(name) : name.strip(), v);
+                    cells.put(keys.get(c), v);
                     any = true;
                 }
             }
