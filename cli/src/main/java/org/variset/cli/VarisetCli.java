@@ -57,6 +57,7 @@ public record VarisetCli(BufferedReader in, PrintWriter out, PrintWriter err, Ma
      */
     public int run(String... args) {
         CommandLine cl = new CommandLine(new RootCommand(this));
+        RootCommand.addSubcommands(cl, args);
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);

@@ -23,6 +23,33 @@ class RootCommandTest {
     }
 
     @Test
+    void listsEveryCommandInTheHelpAlthoughARunBuildsOnlyTheOneItNames() {
+        String help = CliRun.run(home, "--help").exits(ExitCode.OK).out();
+        String helpCommand = CliRun.run(home, "help").exits(ExitCode.OK).out();
+        for (String name : new String[] {"demo", "init", "info", "import", "export", "audit", "plan", "trend", "search",
+            "similar", "reindex", "generate", "check", "backup", "restore", "settings", "strip", "remove", "amend",
+            "setter", "template", "grade", "help"}) {
+            assertThat(help).as(name).containsPattern("(?m)^  " + name + " ");
+            assertThat(helpCommand).as(name).containsPattern("(?m)^  " + name + " ");
+        }
+        assertThat(help).doesNotContain("train-start-up");
+    }
+
+    @Test
+    void helpForOneCommandIsThatCommandsHelp() {
+        CliRun r = CliRun.run(home, "help", "audit").exits(ExitCode.OK);
+        assertThat(r.out()).contains("--standing-on").contains("--setter");
+    }
+
+    @Test
+    void findsTheCommandAfterTheArchiveOptionAndItsValue() {
+        Path archive = home.resolve("info");
+        CliRun r = CliRun.run(home, "--archive", archive.toString(), "init").exits(ExitCode.OK);
+        assertThat(r.out()).contains("Created an empty archive at " + archive);
+        CliRun.run(home, "--archive", archive.toString(), "info").exits(ExitCode.OK);
+    }
+
+    @Test
     void suggestsTheNearestCommandForATypo() {
         CliRun r = CliRun.run(home, "gradee").exits(ExitCode.USAGE);
         assertThat(r.err()).contains("Did you mean").contains("grade");

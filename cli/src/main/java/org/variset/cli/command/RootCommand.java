@@ -1,6 +1,7 @@
 package org.variset.cli.command;
 
 import java.nio.file.Path;
+import java.util.List;
 import org.variset.archive.store.ArchiveLocation;
 import org.variset.cli.ExitCode;
 import org.variset.cli.VarisetCli;
@@ -16,12 +17,6 @@ import picocli.CommandLine.ScopeType;
         header = "Variset: the archive of a gym's route setting, and variety audits of every reset.",
         description = {"", "Keeps every reset, route and hold placement in an archive, and audits resets for "
                 + "variety of grip directions, holds, moves and grades.", ""},
-        subcommands = {DemoCommand.class, InitCommand.class, InfoCommand.class, ImportCommand.class, ExportCommand.class,
-            AuditCommand.class, PlanCommand.class, TrendCommand.class, SearchCommand.class, SimilarCommand.class, ReindexCommand.class,
-            GenerateCommand.class, CheckCommand.class, BackupCommand.class, RestoreCommand.class,
-            SettingsCommand.class,
-            StripCommand.class, RemoveCommand.class, AmendCommand.class, SetterCommand.class, TemplateCommand.class,
-            GradeCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit status:%n",
         footer = {"  0   done", "  1   bad input (the message names the file, line and what was expected)",
             "  2   bad usage (unknown option or command, missing argument)",
@@ -30,6 +25,18 @@ import picocli.CommandLine.ScopeType;
             "Where the archive lives: --archive DIR, else $VARISET_ARCHIVE, else $XDG_DATA_HOME/variset, "
                 + "else ~/.local/share/variset."})
 public final class RootCommand implements Runnable {
+    /**
+     * The subcommands, in the order the help lists them. They are added per run by {@link #addSubcommands}: building
+     * picocli's model of every command costs a few hundred milliseconds of start-up, so a run that names its command
+     * builds only that one.
+     */
+    static final List<Class<?>> SUBCOMMANDS = List.of(DemoCommand.class, InitCommand.class, InfoCommand.class,
+            ImportCommand.class, ExportCommand.class, AuditCommand.class, PlanCommand.class, TrendCommand.class,
+            SearchCommand.class, SimilarCommand.class, ReindexCommand.class, GenerateCommand.class, CheckCommand.class,
+            BackupCommand.class, RestoreCommand.class, SettingsCommand.class, StripCommand.class, RemoveCommand.class,
+            AmendCommand.class, SetterCommand.class, TemplateCommand.class, GradeCommand.class,
+            TrainStartUpCommand.class, CommandLine.HelpCommand.class);
+
     private final VarisetCli cli;
 
     @Option(names = "--archive", paramLabel = "DIR", scope = ScopeType.INHERIT,
@@ -38,7 +45,8 @@ public final class RootCommand implements Runnable {
     Path archive;
 
     @Option(names = "--verbose", scope = ScopeType.INHERIT,
-            description = "Show library log lines and stack traces on standard error.")
+            description = "Show how long each phase of an import took, library log lines and stack traces on "
+                    + "standard error.")
     boolean verbose;
 
     @CommandLine.Spec
@@ -62,6 +70,38 @@ public final class RootCommand implements Runnable {
     @Override
     public void run() {
         spec.commandLine().usage(cli.out());
+    }
+
+    /**
+     * Adds the subcommand a command line names, or all of them when it names none, names one that does not exist
+     * (so that picocli can suggest the nearest) or asks for {@code help}.
+     */
+    public static void addSubcommands(CommandLine cl, String[] args) {
+        String wanted = commandName(args);
+        List<Class<?>> chosen = SUBCOMMANDS.stream().filter(c -> nameOf(c).equals(wanted)).toList();
+        for (Class<?> c : chosen.isEmpty() || "help".equals(wanted) ? SUBCOMMANDS : chosen) {
+            cl.addSubcommand(c);
+        }
+    }
+
+    /** The first word of a command line that is neither an option nor the value of {@code --archive}. */
+    static String commandName(String[] args) {
+        for (int i = 0; i < args.length; i++) {
+            String a = args[i];
+            if (a.equals("--")) {
+                return null;
+            }
+            if (a.equals("--archive")) {
+                i++;
+            } else if (!a.startsWith("-")) {
+                return a;
+            }
+        }
+        return null;
+    }
+
+    static String nameOf(Class<?> command) {
+        return command.getAnnotation(Command.class).name();
     }
 
     /** Prints a usage error with the command's short help and returns the usage exit code. */
