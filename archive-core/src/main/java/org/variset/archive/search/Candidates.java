@@ -20,7 +20,7 @@ final class Candidates {
 
     /** The query, or null when the route has no hand hold and no move to look for. */
     static Query of(RouteRecord r, Vocabulary vocabulary) {
-        TermKeys keys = new TermKeys(vocabulary);
+        TermKeys keys = TermKeys.of(vocabulary);
         Set<Term> terms = new LinkedHashSet<>();
         for (HoldRecord h : r.handHoldsInOrder()) {
             String type = keys.key(VocabularyField.HOLD_TYPES, h.type());

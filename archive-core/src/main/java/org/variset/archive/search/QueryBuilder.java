@@ -37,12 +37,13 @@ final class QueryBuilder {
 
     private final String query;
     private final TermKeys keys;
-    private final TextAnalyzer analyzer = new TextAnalyzer();
+    /** Analyzers are thread-safe and keep their token streams per thread for reuse. */
+    private static final TextAnalyzer ANALYZER = new TextAnalyzer();
     private final GradeReader grades = GradeReader.standard();
 
     QueryBuilder(String query, Vocabulary vocabulary) {
         this.query = query;
-        this.keys = new TermKeys(vocabulary);
+        this.keys = TermKeys.of(vocabulary);
     }
 
     Query build(QueryNode n) {
@@ -120,7 +121,7 @@ final class QueryBuilder {
                         ? SearchFields.STYLE : SearchFields.HOLD;
                 BooleanQuery.Builder b = new BooleanQuery.Builder();
                 b.add(new TermQuery(new Term(field, keys.key(f, spelled))), Occur.SHOULD);
-                List<String> tokens = analyzer.tokens(SearchFields.TEXT, spelled);
+                List<String> tokens = ANALYZER.tokens(SearchFields.TEXT, spelled);
                 if (!tokens.isEmpty()) {
                     b.add(phrase(SearchFields.TEXT, tokens), Occur.SHOULD);
                 }
@@ -135,7 +136,7 @@ final class QueryBuilder {
         if (v != null && field.equals(SearchFields.TEXT)) {
             return v;
         }
-        List<String> tokens = analyzer.tokens(field, text);
+        List<String> tokens = ANALYZER.tokens(field, text);
         if (tokens.isEmpty()) {
             throw new QuerySyntaxException(query, position, "'" + text + "' has no letters or digits to search for");
         }

@@ -1,10 +1,7 @@
 package org.variset.archive.search;
 
-import java.util.Collections;
 import java.util.LinkedHashSet;
-import java.util.Map;
 import java.util.Set;
-import java.util.WeakHashMap;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.document.DoubleDocValuesField;
 import org.apache.lucene.document.DoublePoint;
@@ -30,7 +27,6 @@ import org.variset.archive.vocabulary.VocabularyField;
 final class RouteDocuments {
     static final String[] FACETS = {"move", "hold", "grip", "band", "wall", "setter"};
     /** Term keys by vocabulary (by identity: settings share one vocabulary for as long as it is in effect). */
-    private static final Map<Vocabulary, TermKeys> KEYS = Collections.synchronizedMap(new WeakHashMap<>());
 
     private RouteDocuments() {
     }
@@ -46,7 +42,7 @@ final class RouteDocuments {
 
     /** The document of a route, with the bands and vocabulary of the settings in effect on its set date. */
     static Document of(RouteRecord r, GymSettings s) {
-        TermKeys keys = KEYS.computeIfAbsent(s.vocabulary(), TermKeys::new);
+        TermKeys keys = TermKeys.of(s.vocabulary());
         Document d = new Document();
         d.add(new StringField(SearchFields.ID, Long.toString(r.id()), Field.Store.YES));
         keyword(d, SearchFields.GYM, r.gym());

@@ -11,6 +11,8 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.atomic.AtomicLong;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.facet.FacetsConfig;
 import org.apache.lucene.index.DirectoryReader;
@@ -45,13 +47,23 @@ public final class SearchIndex implements AutoCloseable {
     private static final String STAMP_KEY = "variset-change-stamp";
     private static final int CHUNK = 1_000;
 
+    /**
+     * Commits made by this process, per index folder. Only one process at a time uses an archive (its lock), so an
+     * index changes only through commits counted here, and a reader need not ask the disk before every search.
+     */
+    private static final Map<Path, AtomicLong> COMMITS = new ConcurrentHashMap<>();
+
     private final Directory directory;
+    private final AtomicLong commits;
     private final FacetsConfig facets = RouteDocuments.facetsConfig();
     /** The reader searches use, opened on first use and refreshed when a commit changed the index. */
     private DirectoryReader reader;
+    /** The commit count the reader was opened (or last refreshed) at. */
+    private long readerAt;
 
-    private SearchIndex(Directory directory) {
+    private SearchIndex(Directory directory, AtomicLong commits) {
         this.directory = directory;
+        this.commits = commits;
     }
 
     /** The index of the archive in a folder (its {@code index} subfolder, created when first written). */
@@ -59,7 +71,8 @@ public final class SearchIndex implements AutoCloseable {
         try {
             Path p = archiveDir.resolve("index");
             Files.createDirectories(p);
-            return new SearchIndex(FSDirectory.open(p));
+            return new SearchIndex(FSDirectory.open(p), COMMITS.computeIfAbsent(p.toAbsolutePath().normalize(),
+                    k -> new AtomicLong()));
         } catch (IOException e) {
             throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot open the search index in "
                     + archiveDir + ": " + e.getMessage(), e);
@@ -68,7 +81,7 @@ public final class SearchIndex implements AutoCloseable {
 
     /** An index in memory (for an archive in memory). */
     public static SearchIndex inMemory() {
-        return new SearchIndex(new ByteBuffersDirectory());
+        return new SearchIndex(new ByteBuffersDirectory(), new AtomicLong());
     }
 
     /** The change stamp the index reflects, or -1 when it is missing, unreadable or of another format. */
@@ -187,12 +200,16 @@ public final class SearchIndex implements AutoCloseable {
         return new IndexWriter(directory, cfg);
     }
 
-    private static void commit(IndexWriter w, long stamp) throws IOException {
+    private void commit(IndexWriter w, long stamp) throws IOException {
         Map<String, String> data = new HashMap<>();
         data.put(FORMAT_KEY, FORMAT);
         data.put(STAMP_KEY, Long.toString(stamp));
         w.setLiveCommitData(data.entrySet());
-        w.commit();
+        try {
+            w.commit();
+        } finally {
+            commits.incrementAndGet();
+        }
     }
 
     /** Deletes every file of an index that cannot be read, so that it can be built afresh. */
@@ -205,6 +222,8 @@ public final class SearchIndex implements AutoCloseable {
             }
         } catch (IOException e) {
             throw failure(e);
+        } finally {
+            commits.incrementAndGet();
         }
     }
 
@@ -291,9 +310,12 @@ public final class SearchIndex implements AutoCloseable {
 
     /** The current reader: opened once, reopened only when a commit has changed the index since. */
     private synchronized DirectoryReader reader() throws IOException {
+        long now = commits.get();
         if (reader == null) {
             reader = DirectoryReader.open(directory);
-        } else {
+            readerAt = now;
+        } else if (readerAt != now) {
+            readerAt = now;
             DirectoryReader newer = DirectoryReader.openIfChanged(reader);
             if (newer != null) {
                 reader.close();

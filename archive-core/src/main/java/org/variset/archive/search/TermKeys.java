@@ -1,9 +1,11 @@
 package org.variset.archive.search;
 
 import java.text.Normalizer;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.Locale;
 import java.util.Map;
+import java.util.WeakHashMap;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 
@@ -14,9 +16,17 @@ import org.variset.archive.vocabulary.VocabularyField;
  * included) leads to its term's key ({@code hooky heel} to {@code heelhook}).
  */
 final class TermKeys {
+    /** Keys per vocabulary, built once: indexing and every query ask for them. */
+    private static final Map<Vocabulary, TermKeys> CACHE = Collections.synchronizedMap(new WeakHashMap<>());
+
     private final Map<VocabularyField, Map<String, String>> byKey = new HashMap<>();
 
-    TermKeys(Vocabulary v) {
+    /** The keys of a vocabulary. */
+    static TermKeys of(Vocabulary v) {
+        return CACHE.computeIfAbsent(v, TermKeys::new);
+    }
+
+    private TermKeys(Vocabulary v) {
         for (VocabularyField f : VocabularyField.values()) {
             Map<String, String> m = new HashMap<>();
             v.terms(f).forEach(t -> m.put(squash(t), t));

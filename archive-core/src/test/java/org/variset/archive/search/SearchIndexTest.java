@@ -277,6 +277,22 @@ class SearchIndexTest {
         }
 
         @Test
+        void seesWhatAnotherHandleOnTheSameFolderCommitted(@TempDir Path dir) {
+            try (SearchIndex searching = SearchIndex.at(dir); SearchIndex writing = SearchIndex.at(dir)) {
+                writing.sync(archive.connection(), IndexProgress.NONE);
+                SearchRequest bicycle = new SearchRequest("bicycle", null, null, null, SearchOrder.RELEVANCE, 5, false);
+                assertThat(searching.search(bicycle, Vocabulary.defaults()).total()).isZero();
+                archive.inTransaction(s -> {
+                    Route c1 = s.createSelectionQuery("from Route where label = 'C1'", Route.class).getSingleResult();
+                    c1.setMoves(List.of("bicycle"));
+                    ChangeLog.routes(s, List.of(c1.id()));
+                });
+                writing.sync(archive.connection(), IndexProgress.NONE);
+                assertThat(searching.search(bicycle, Vocabulary.defaults()).total()).isEqualTo(1);
+            }
+        }
+
+        @Test
         void readsHitsBackFromTheDatabase() {
             SearchHits h = index.search(new SearchRequest("route:C4", null, null, null, SearchOrder.RELEVANCE, 5,
                     false), Vocabulary.defaults());
