@@ -190,6 +190,7 @@ public final class BulkInserts implements AutoCloseable {
             for (PreparedStatement s : new PreparedStatement[] {setter, reset, resetDate, route, routeSetter, hold}) {
                 s.close();
             }
+            ids.close();
         }
     }
 }

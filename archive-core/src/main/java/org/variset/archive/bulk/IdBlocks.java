@@ -4,6 +4,7 @@ import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.util.ArrayDeque;
 import java.util.HashMap;
 import java.util.Locale;
 import java.util.Map;
@@ -13,13 +14,18 @@ import java.util.Map;
  * by {@link #BLOCK}): a sequence value {@code v} is the top of the block {@code v-49 .. v}, and the sequence's first
  * value 1 is a block of its own. Both can therefore draw from the same sequence without ever giving one id twice.
  */
-public final class IdBlocks {
+public final class IdBlocks implements AutoCloseable {
     /** The step of every id sequence (the migrations' {@code INCREMENT BY}, the entities' allocation size). */
     public static final int BLOCK = 50;
+
+    /** Sequence values drawn per round trip (each the top of a block), so 1,000 ids cost one query. */
+    static final int VALUES_PER_QUERY = 20;
 
     private final Connection connection;
     private final boolean postgres;
     private final Map<String, long[]> blocks = new HashMap<>();
+    private final Map<String, ArrayDeque<Long>> drawn = new HashMap<>();
+    private final Map<String, PreparedStatement> queries = new HashMap<>();
 
     /** Ids drawn through a connection (in its transaction). */
     public IdBlocks(Connection connection) throws SQLException {
@@ -40,13 +46,37 @@ public final class IdBlocks {
     }
 
     private long nextValue(String sequence) throws SQLException {
-        if (!sequence.matches("[a-z_]+")) {
-            throw new IllegalArgumentException("not a sequence name: " + sequence);
+        ArrayDeque<Long> values = drawn.computeIfAbsent(sequence, k -> new ArrayDeque<>());
+        if (values.isEmpty()) {
+            try (ResultSet r = query(sequence).executeQuery()) {
+                while (r.next()) {
+                    values.add(r.getLong(1));
+                }
+            }
         }
-        String sql = postgres ? "SELECT nextval('" + sequence + "')" : "SELECT NEXT VALUE FOR " + sequence;
-        try (PreparedStatement s = connection.prepareStatement(sql); ResultSet r = s.executeQuery()) {
-            r.next();
-            return r.getLong(1);
+        return values.remove();
+    }
+
+    private PreparedStatement query(String sequence) throws SQLException {
+        PreparedStatement q = queries.get(sequence);
+        if (q == null) {
+            if (!sequence.matches("[a-z_]+")) {
+                throw new IllegalArgumentException("not a sequence name: " + sequence);
+            }
+            q = connection.prepareStatement(postgres
+                    ? "SELECT nextval('" + sequence + "') FROM generate_series(1, " + VALUES_PER_QUERY + ")"
+                    : "SELECT NEXT VALUE FOR " + sequence + " FROM SYSTEM_RANGE(1, " + VALUES_PER_QUERY + ")");
+            queries.put(sequence, q);
         }
+        return q;
+    }
+
+    /** Closes the prepared queries (the connection stays open). */
+    @Override
+    public void close() throws SQLException {
+        for (PreparedStatement q : queries.values()) {
+            q.close();
+        }
+        queries.clear();
     }
 }

@@ -126,14 +126,17 @@ public final class SearchIndex implements AutoCloseable {
         if (stamp() < 0) {
             clear();
         }
-        try (IndexWriter w = writer(IndexWriterConfig.OpenMode.CREATE)) {
-            new RouteReader(c).forEachChunk(RouteFilter.all(), CHUNK, chunk -> {
-                for (RouteRecord r : chunk) {
-                    add(w, r, timelines, false);
-                }
-                done[0] += chunk.size();
-                progress.indexed(done[0], total);
-            });
+        try (IndexWriter w = writer(IndexWriterConfig.OpenMode.CREATE);
+                OverlappedChunks<RouteRecord> lane = new OverlappedChunks<>("variset-indexer", chunk -> {
+                    for (RouteRecord r : chunk) {
+                        add(w, r, timelines, false);
+                    }
+                    done[0] += chunk.size();
+                    progress.indexed(done[0], total);
+                })) {
+            // The database is read for the next chunk while the last one is being indexed.
+            new RouteReader(c).forEachChunk(RouteFilter.all(), CHUNK, lane::submit);
+            lane.finish();
             commit(w, db);
         } catch (IOException e) {
             throw failure(e);
