@@ -23,6 +23,7 @@ import org.apache.lucene.index.Term;
 import org.apache.lucene.store.ByteBuffersDirectory;
 import org.apache.lucene.store.Directory;
 import org.apache.lucene.store.FSDirectory;
+import org.variset.archive.bulk.OverlappedChunks;
 import org.variset.archive.read.ArchiveCatalog;
 import org.variset.archive.read.GymRecord;
 import org.variset.archive.read.RouteFilter;

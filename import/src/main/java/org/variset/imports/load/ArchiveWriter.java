@@ -15,8 +15,10 @@ import java.util.Set;
 import java.util.TreeSet;
 import org.hibernate.Session;
 import org.variset.archive.bulk.BulkInserts;
+import org.variset.archive.bulk.OverlappedChunks;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.gym.Wall;
+import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
@@ -40,6 +42,8 @@ import org.variset.imports.table.TableKind;
  */
 final class ArchiveWriter {
     private static final int PROGRESS_EVERY = 2_000;
+    /** Holds handed to the writing thread at a time. */
+    private static final int HOLD_CHUNK = 2_000;
 
     private final Session session;
     private final ImportPlan plan;
@@ -302,26 +306,53 @@ final class ArchiveWriter {
         }
         Map<RouteKey, Integer> ordinals = new HashMap<>();
         long written = 0;
-        for (RowSource s : sources) {
-            if (s.kind() != TableKind.HOLDS) {
-                continue;
-            }
-            try (RowCursor cursor = s.rows()) {
-                while (cursor.hasNext()) {
-                    HoldRow h = quiet.hold(cursor.next());
-                    RouteKey k = h == null ? null : resolver.resolve(h, null);
-                    if (k == null || !plan.writesHoldsOf(k)) {
-                        continue;
-                    }
-                    int ordinal = ordinals.merge(k, 1, Integer::sum) - 1;
-                    bulk.hold(routeId(k), ordinal, h.spec());
-                    if (++written % PROGRESS_EVERY == 0) {
-                        progress.advanced("writing holds", written);
+        List<PlacedHold> chunk = new ArrayList<>(HOLD_CHUNK);
+        // This thread reads and parses the rows; a second one sends the batches (every route id is known by now, so
+        // the second thread needs nothing from this one but the chunks).
+        try (OverlappedChunks<PlacedHold> inserts = new OverlappedChunks<>("variset-hold-writer",
+                part -> insertHolds(part, bulk))) {
+            for (RowSource s : sources) {
+                if (s.kind() != TableKind.HOLDS) {
+                    continue;
+                }
+                try (RowCursor cursor = s.rows()) {
+                    while (cursor.hasNext()) {
+                        HoldRow h = quiet.hold(cursor.next());
+                        RouteKey k = h == null ? null : resolver.resolve(h, null);
+                        if (k == null || !plan.writesHoldsOf(k)) {
+                            continue;
+                        }
+                        int ordinal = ordinals.merge(k, 1, Integer::sum) - 1;
+                        chunk.add(new PlacedHold(routeId(k), ordinal, h.spec()));
+                        if (chunk.size() == HOLD_CHUNK) {
+                            inserts.submit(chunk);
+                            chunk = new ArrayList<>(HOLD_CHUNK);
+                        }
+                        if (++written % PROGRESS_EVERY == 0) {
+                            progress.advanced("writing holds", written);
+                        }
                     }
                 }
             }
+            inserts.submit(chunk);
+            inserts.finish();
         }
         return written;
+    }
+
+    /** A hold placement ready to insert. */
+    private record PlacedHold(long routeId, int ordinal, HoldPlacement.Spec spec) {
+    }
+
+    private static void insertHolds(List<PlacedHold> part, BulkInserts bulk) {
+        try {
+            for (PlacedHold p : part) {
+                bulk.hold(p.routeId(), p.ordinal(), p.spec());
+            }
+        } catch (SQLException e) {
+            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot write to the archive: "
+                    + e.getMessage(), e);
+        }
     }
 
     private long routeId(RouteKey k) {

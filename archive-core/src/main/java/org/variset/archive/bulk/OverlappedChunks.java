@@ -1,4 +1,4 @@
-package org.variset.archive.search;
+package org.variset.archive.bulk;
 
 import java.util.List;
 import java.util.concurrent.ExecutionException;
@@ -9,19 +9,19 @@ import java.util.concurrent.TimeUnit;
 import java.util.function.Consumer;
 
 /**
- * Hands chunks to one worker thread, one chunk at a time, so that the caller can produce the next chunk (read it from
- * the database) while the worker consumes the last (indexes it). At most two chunks are in memory. The worker's
- * failure is thrown to the caller at the next {@link #submit} or at {@link #finish}.
+ * Hands chunks to one worker thread, one chunk at a time, so that the caller can produce the next chunk (read rows
+ * from a file or the database) while the worker consumes the last (writes or indexes them). At most two chunks are in
+ * memory. The worker's failure is thrown to the caller at the next {@link #submit} or at {@link #finish}.
  *
  * @param <T> what a chunk holds
  */
-final class OverlappedChunks<T> implements AutoCloseable {
+public final class OverlappedChunks<T> implements AutoCloseable {
     private final ExecutorService worker;
     private final Consumer<List<T>> consumer;
     private Future<?> pending;
 
     /** A worker thread of the given name that passes each chunk to the consumer, in order. */
-    OverlappedChunks(String threadName, Consumer<List<T>> consumer) {
+    public OverlappedChunks(String threadName, Consumer<List<T>> consumer) {
         this.worker = Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, threadName);
             t.setDaemon(true);
@@ -31,13 +31,13 @@ final class OverlappedChunks<T> implements AutoCloseable {
     }
 
     /** Waits for the previous chunk to be consumed, then hands this one over. */
-    void submit(List<T> chunk) {
+    public void submit(List<T> chunk) {
         finish();
         pending = worker.submit(() -> consumer.accept(chunk));
     }
 
     /** Waits until every chunk handed over has been consumed. */
-    void finish() {
+    public void finish() {
         if (pending == null) {
             return;
         }
@@ -45,7 +45,7 @@ final class OverlappedChunks<T> implements AutoCloseable {
             pending.get();
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while indexing", e);
+            throw new IllegalStateException("interrupted while waiting for the worker thread", e);
         } catch (ExecutionException e) {
             if (e.getCause() instanceof RuntimeException r) {
                 throw r;

@@ -1,4 +1,4 @@
-package org.variset.archive.search;
+package org.variset.archive.bulk;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
