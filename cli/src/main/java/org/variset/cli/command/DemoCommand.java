@@ -82,7 +82,8 @@ final class DemoCommand extends VarisetSubcommand {
         }
     }
 
-    private static void deleteTree(Path p) throws IOException {
+    /** Deletes a folder and everything in it; nothing when it does not exist. */
+    static void deleteTree(Path p) throws IOException {
         if (!Files.exists(p)) {
             return;
         }

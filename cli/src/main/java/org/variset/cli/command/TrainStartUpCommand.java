@@ -8,9 +8,7 @@ import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Comparator;
 import java.util.List;
-import java.util.stream.Stream;
 import org.variset.cli.ExitCode;
 import org.variset.cli.VarisetCli;
 import picocli.CommandLine.Command;
@@ -66,8 +64,8 @@ final class TrainStartUpCommand extends VarisetSubcommand {
     }
 
     private static void deleteQuietly(Path dir) {
-        try (Stream<Path> s = Files.walk(dir)) {
-            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+        try {
+            DemoCommand.deleteTree(dir);
         } catch (IOException e) {
             // a temporary folder; the system cleans it up in time
         }

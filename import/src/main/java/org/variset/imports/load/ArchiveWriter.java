@@ -94,8 +94,7 @@ final class ArchiveWriter {
             clock.lap("writing routes");
             holds = writeHolds(c, sources, resolver, bulk, progress);
         } catch (SQLException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot write to the archive: "
-                    + e.getMessage(), e);
+            throw writeFailure(e);
         }
         Set<Long> changed = new TreeSet<>();
         for (RouteKey k : plan.routes.keySet()) {
@@ -350,9 +349,13 @@ final class ArchiveWriter {
                 bulk.hold(p.routeId(), p.ordinal(), p.spec());
             }
         } catch (SQLException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot write to the archive: "
-                    + e.getMessage(), e);
+            throw writeFailure(e);
         }
+    }
+
+    private static ArchiveException writeFailure(SQLException e) {
+        return new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot write to the archive: " + e.getMessage(),
+                e);
     }
 
     private long routeId(RouteKey k) {
