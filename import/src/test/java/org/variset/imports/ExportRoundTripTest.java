@@ -1,5 +1,6 @@
 package org.variset.imports;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.variset.imports.ImportFiles.write;
@@ -50,7 +51,7 @@ class ExportRoundTripTest {
     }
 
     private static Archive importInto(ImportOptions options, Path... files) {
-        Archive a = Archive.inMemory();
+        Archive a = TestArchives.fresh();
         new ArchiveImporter(a).run(List.of(files), options, ImportProgress.NONE);
         return a;
     }

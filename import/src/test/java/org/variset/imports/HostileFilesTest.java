@@ -1,5 +1,6 @@
 package org.variset.imports;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.catchThrowable;
 
@@ -31,7 +32,7 @@ class HostileFilesTest {
 
     @BeforeEach
     void open() {
-        archive = Archive.inMemory();
+        archive = TestArchives.fresh();
     }
 
     @AfterEach

@@ -1,5 +1,6 @@
 package org.variset.imports;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.variset.imports.ImportFiles.write;
@@ -32,7 +33,7 @@ class WorkbookAndJsonImportTest {
 
     @BeforeEach
     void open() {
-        archive = Archive.inMemory();
+        archive = TestArchives.fresh();
     }
 
     @AfterEach

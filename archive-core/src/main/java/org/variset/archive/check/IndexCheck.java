@@ -5,10 +5,21 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.variset.archive.search.SearchIndex;
+import org.variset.archive.store.ChangeLog;
 
 /** The index's part of a check: sound, in step with the database, one document per route. */
 final class IndexCheck {
     private IndexCheck() {
+    }
+
+    private static boolean shared(Connection c) {
+        try {
+            return ChangeLog.isShared(c);
+        } catch (java.sql.SQLException e) {
+            throw new org.variset.archive.store.ArchiveException(
+                    org.variset.archive.store.ArchiveException.Problem.DAMAGED, "Cannot read the archive: "
+                            + e.getMessage(), e);
+        }
     }
 
     static void add(SearchIndex index, Connection c, long routes, long dbStamp, List<CheckReport.Item> items) {
@@ -17,9 +28,18 @@ final class IndexCheck {
         if (!h.clean()) {
             return;
         }
-        items.add(new CheckReport.Item("index", "change stamp", h.stamp() == dbStamp, "index " + h.stamp()
-                + ", database " + dbStamp + (h.stamp() == dbStamp ? "" : h.stamp() < dbStamp
-                        ? " (behind: the next search catches up)" : " (ahead of the database)")));
+        if (shared(c)) {
+            // A shared archive's stamps are transaction ids (ChangeLog): the index is behind when changes made at or
+            // after its stamp are visible (some may already be applied, when a transaction was running as it synced).
+            int unseen = h.stamp() < 0 ? -1 : ChangeLog.changedSince(c, h.stamp(), dbStamp).size();
+            items.add(new CheckReport.Item("index", "change stamp", unseen == 0, "index at transaction "
+                    + h.stamp() + ", oldest running " + dbStamp + (unseen == 0 ? "" : "; " + unseen
+                            + " routes changed since (behind: the next search catches up)")));
+        } else {
+            items.add(new CheckReport.Item("index", "change stamp", h.stamp() == dbStamp, "index " + h.stamp()
+                    + ", database " + dbStamp + (h.stamp() == dbStamp ? "" : h.stamp() < dbStamp
+                            ? " (behind: the next search catches up)" : " (ahead of the database)")));
+        }
         Set<Long> db = ArchiveCheck.routeIds(c);
         Set<Long> missing = new HashSet<>(db);
         missing.removeAll(h.ids());

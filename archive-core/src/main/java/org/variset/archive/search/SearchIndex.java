@@ -32,7 +32,9 @@ import org.variset.archive.read.RouteRecord;
 import org.variset.archive.settings.SettingsReader;
 import org.variset.archive.settings.SettingsTimeline;
 import org.variset.archive.store.ArchiveException;
+import org.variset.archive.store.Archive;
 import org.variset.archive.store.ChangeLog;
+import org.variset.archive.store.SchemaVersion;
 
 /**
  * The Lucene index of an archive's routes, in the folder {@code index} of the archive. It is derived data: each
@@ -43,9 +45,11 @@ import org.variset.archive.store.ChangeLog;
  */
 public final class SearchIndex implements AutoCloseable {
     /** The document layout; a change of layout rebuilds every index made with another. */
-    static final String FORMAT = "1";
+    static final String FORMAT = "2";
     private static final String FORMAT_KEY = "variset-index-format";
     private static final String STAMP_KEY = "variset-change-stamp";
+    /** The archive the index was built from ({@link SchemaVersion#identity}). */
+    private static final String ARCHIVE_KEY = "variset-archive";
     private static final int CHUNK = 1_000;
 
     /**
@@ -69,8 +73,12 @@ public final class SearchIndex implements AutoCloseable {
 
     /** The index of the archive in a folder (its {@code index} subfolder, created when first written). */
     public static SearchIndex at(Path archiveDir) {
+        return at(archiveDir, "index");
+    }
+
+    private static SearchIndex at(Path archiveDir, String name) {
         try {
-            Path p = archiveDir.resolve("index");
+            Path p = archiveDir.resolve(name);
             Files.createDirectories(p);
             return new SearchIndex(FSDirectory.open(p), COMMITS.computeIfAbsent(p.toAbsolutePath().normalize(),
                     k -> new AtomicLong()));
@@ -80,6 +88,15 @@ public final class SearchIndex implements AutoCloseable {
         }
     }
 
+    /**
+     * The index of an open archive: in its folder for an embedded archive, in this client's cache folder for a
+     * shared one, in memory for an archive in memory.
+     */
+    public static SearchIndex of(Archive archive) {
+        Path dir = archive.indexDir();
+        return dir == null ? inMemory() : at(dir.getParent(), dir.getFileName().toString());
+    }
+
     /** An index in memory (for an archive in memory). */
     public static SearchIndex inMemory() {
         return new SearchIndex(new ByteBuffersDirectory(), new AtomicLong());
@@ -87,35 +104,56 @@ public final class SearchIndex implements AutoCloseable {
 
     /** The change stamp the index reflects, or -1 when it is missing, unreadable or of another format. */
     public long stamp() {
+        Map<String, String> data = commitData();
+        return data.isEmpty() ? -1 : Long.parseLong(data.get(STAMP_KEY));
+    }
+
+    /** The last commit's data, or empty when the index is missing, unreadable or of another format. */
+    private Map<String, String> commitData() {
         try {
             if (!DirectoryReader.indexExists(directory)) {
-                return -1;
+                return Map.of();
             }
             Map<String, String> data = SegmentInfos.readLatestCommit(directory).getUserData();
             if (!FORMAT.equals(data.get(FORMAT_KEY)) || data.get(STAMP_KEY) == null) {
-                return -1;
+                return Map.of();
             }
-            return Long.parseLong(data.get(STAMP_KEY));
+            Long.parseLong(data.get(STAMP_KEY));
+            return data;
         } catch (IOException | RuntimeException e) {
-            return -1;
+            return Map.of();
         }
     }
 
     /** Brings the index up to date with the database: nothing, the changes it has not seen, or a rebuild. */
     public IndexSync sync(Connection c, IndexProgress progress) {
         long db = ChangeLog.stamp(c);
-        long idx = stamp();
-        if (idx == db) {
-            return new IndexSync(IndexSync.Action.CURRENT, 0, "", db);
-        }
+        boolean shared = isShared(c);
+        Map<String, String> data = commitData();
+        long idx = data.isEmpty() ? -1 : Long.parseLong(data.get(STAMP_KEY));
         if (idx < 0) {
             return rebuild(c, progress, exists() ? "it was unreadable or from another version of Variset"
                     : "there was none yet");
         }
-        if (idx > db) {
+        if (!SchemaVersion.identity(c).equals(data.get(ARCHIVE_KEY))) {
+            return rebuild(c, progress, "it was built from another archive");
+        }
+        if (!shared && idx == db) {
+            return new IndexSync(IndexSync.Action.CURRENT, 0, "", db);
+        }
+        if (!shared && idx > db) {
             return rebuild(c, progress, "it was ahead of the archive (was the archive restored from a backup?)");
         }
         return catchUp(c, idx, db, progress);
+    }
+
+    private static boolean isShared(Connection c) {
+        try {
+            return ChangeLog.isShared(c);
+        } catch (java.sql.SQLException e) {
+            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the archive: " + e.getMessage(),
+                    e);
+        }
     }
 
     /** Builds the index again from every route of the database. */
@@ -138,7 +176,7 @@ public final class SearchIndex implements AutoCloseable {
             // The database is read for the next chunk while the last one is being indexed.
             new RouteReader(c).forEachChunk(RouteFilter.all(), CHUNK, lane::submit);
             lane.finish();
-            commit(w, db);
+            commit(w, db, SchemaVersion.identity(c));
         } catch (IOException e) {
             throw failure(e);
         }
@@ -146,7 +184,10 @@ public final class SearchIndex implements AutoCloseable {
     }
 
     private IndexSync catchUp(Connection c, long from, long to, IndexProgress progress) {
-        List<Long> changed = ChangeLog.changedBetween(c, from, to);
+        List<Long> changed = ChangeLog.changedSince(c, from, to);
+        if (changed.isEmpty() && from == to) {
+            return new IndexSync(IndexSync.Action.CURRENT, 0, "", to);
+        }
         Map<String, SettingsTimeline> timelines = timelines(c);
         RouteReader reader = new RouteReader(c);
         try (IndexWriter w = writer(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)) {
@@ -164,11 +205,11 @@ public final class SearchIndex implements AutoCloseable {
                 }
                 progress.indexed(Math.min(changed.size(), i + CHUNK), changed.size());
             }
-            commit(w, to);
+            commit(w, to, SchemaVersion.identity(c));
         } catch (IOException e) {
             throw failure(e);
         }
-        return new IndexSync(IndexSync.Action.CAUGHT_UP, changed.size(), "", to);
+        return new IndexSync(changed.isEmpty() ? IndexSync.Action.CURRENT : IndexSync.Action.CAUGHT_UP, changed.size(), "", to);
     }
 
     /** Adds a route's document; {@code replace} when the index may hold an older one (not in a rebuild). */
@@ -204,10 +245,11 @@ public final class SearchIndex implements AutoCloseable {
         return new IndexWriter(directory, cfg);
     }
 
-    private void commit(IndexWriter w, long stamp) throws IOException {
+    private void commit(IndexWriter w, long stamp, String archive) throws IOException {
         Map<String, String> data = new HashMap<>();
         data.put(FORMAT_KEY, FORMAT);
         data.put(STAMP_KEY, Long.toString(stamp));
+        data.put(ARCHIVE_KEY, archive);
         w.setLiveCommitData(data.entrySet());
         try {
             w.commit();

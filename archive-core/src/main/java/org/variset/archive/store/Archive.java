@@ -10,15 +10,22 @@ import java.sql.SQLException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.Consumer;
 import java.util.function.Function;
+import javax.sql.DataSource;
 import org.h2.jdbcx.JdbcDataSource;
+import org.postgresql.ds.PGSimpleDataSource;
 import org.hibernate.Session;
 import org.hibernate.SessionFactory;
 import org.hibernate.StatelessSession;
 import org.variset.archive.store.ArchiveException.Problem;
 
 /**
- * An open archive. It holds one JDBC connection for its whole life, so the database file is opened once per
+ * An open archive: embedded (an H2 database in a folder, the default) or shared (a PostgreSQL server, see
+ * {@link ServerAddress}). It holds one JDBC connection for its whole life, so the database is opened once per
  * command; Hibernate is booted only on first use of {@link #sessionFactory()}.
+ *
+ * <p>An embedded archive is used by one process at a time (a lock file in its folder). A shared one is used by many
+ * clients at once: the database's transactions keep them apart, and writers take turns ({@link #takeWriterTurn}).
+ * Each client keeps its own search index, under a folder of its cache that the archive is given.
  */
 public final class Archive implements AutoCloseable {
 
@@ -27,15 +34,29 @@ public final class Archive implements AutoCloseable {
     private static final int H2_DATABASE_IN_USE = 90020;
     private static final AtomicInteger MEMORY_IDS = new AtomicInteger();
 
+    /**
+     * The key of the PostgreSQL advisory lock that writers hold for their transaction, so that two clients never
+     * write at once (two imports adding the same setter, say); readers never wait for it. Any number: it only has to
+     * be the same in every Variset ("VARI" in ASCII).
+     */
+    private static final long WRITER_LOCK = 0x5641_5249L;
+
     private final Path dir;
-    private final JdbcDataSource dataSource;
+    private final ServerAddress server;
+    private final Path indexDir;
+    private final DataSource dataSource;
     private final Connection keeper;
     private final SchemaVersion schema;
     private ArchiveLock lock;
     private SessionFactory sessionFactory;
+    /** True when this open made the archive's tables (a new archive). */
+    private boolean created;
 
-    private Archive(Path dir, JdbcDataSource dataSource, Connection keeper, SchemaVersion schema) {
+    private Archive(Path dir, ServerAddress server, Path indexDir, DataSource dataSource, Connection keeper,
+            SchemaVersion schema) {
         this.dir = dir;
+        this.server = server;
+        this.indexDir = indexDir;
         this.dataSource = dataSource;
         this.keeper = keeper;
         this.schema = schema;
@@ -63,7 +84,7 @@ public final class Archive implements AutoCloseable {
         }
         ArchiveLock lock = ArchiveLock.acquire(dir, ArchiveLock.DEFAULT_WAIT);
         try {
-            Archive archive = connect(dir, url(dir, false));
+            Archive archive = connect(dir, h2(url(dir, false)));
             archive.lock = lock;
             restrictToOwner(dir.resolve(DB_NAME + ".mv.db"));
             return archive;
@@ -106,7 +127,7 @@ public final class Archive implements AutoCloseable {
         }
         ArchiveLock lock = ArchiveLock.acquire(dir, wait);
         try {
-            Archive archive = connect(dir, url(dir, true));
+            Archive archive = connect(dir, h2(url(dir, true)));
             archive.lock = lock;
             return archive;
         } catch (RuntimeException e) {
@@ -115,9 +136,85 @@ public final class Archive implements AutoCloseable {
         }
     }
 
+    /**
+     * Opens the archive a location names: embedded, or shared on a server (which must already hold an archive).
+     *
+     * @throws ArchiveException when there is none, it stays in use, the server cannot be reached, or it is newer
+     *     than this code
+     */
+    public static Archive open(ArchiveLocation where, java.time.Duration wait) {
+        return where.shared() ? openServer(where.server(), where.indexDir(), false, wait) : open(where.dir(), wait);
+    }
+
     /** A new, empty, migrated archive in memory, gone when closed (for tests and dry runs). */
     public static Archive inMemory() {
-        return connect(null, "jdbc:h2:mem:variset-" + MEMORY_IDS.incrementAndGet());
+        return connect(null, h2("jdbc:h2:mem:variset-" + MEMORY_IDS.incrementAndGet()));
+    }
+
+    /**
+     * Opens the shared archive on a PostgreSQL server. This client's search index lives in {@code indexDir}, whose
+     * lock keeps two processes of this client from writing it at once.
+     *
+     * @param create true to make the archive's tables when the database (or schema) has none yet ({@code init});
+     *     false to refuse such a database, saying how to make one
+     * @throws ArchiveException when the server cannot be reached, the database holds no archive (and
+     *     {@code create} is false), or its schema is newer than this code
+     */
+    public static Archive openServer(ServerAddress address, Path indexDir, boolean create, java.time.Duration wait) {
+        PGSimpleDataSource ds = new PGSimpleDataSource();
+        ds.setURL(address.jdbcUrl());
+        ds.setUser(address.user());
+        if (address.password() != null) {
+            ds.setPassword(address.password());
+        }
+        Connection probe;
+        try {
+            probe = ds.getConnection();
+        } catch (SQLException e) {
+            throw new ArchiveException(Problem.MISSING, "Cannot connect to the archive at " + address.shown() + ": "
+                    + e.getMessage() + ". Check the address, that the server is running, and the user's password "
+                    + "(PGPASSWORD or ~/.pgpass).", e);
+        }
+        try {
+            if (!create && SchemaVersion.read(probe).version() == 0) {
+                throw new ArchiveException(Problem.MISSING, "The database at " + address.shown() + " holds no "
+                        + "Variset archive. Create one with: variset --db " + address.shown() + " init");
+            }
+        } catch (SQLException e) {
+            closeQuietly(probe);
+            throw new ArchiveException(Problem.DAMAGED, "Cannot read the archive at " + address.shown() + ": "
+                    + e.getMessage(), e);
+        } catch (RuntimeException e) {
+            closeQuietly(probe);
+            throw e;
+        }
+        ArchiveLock clientLock;
+        try {
+            createPrivateDirectories(indexDir);
+            clientLock = ArchiveLock.acquire(indexDir, wait, "This client's search index of " + address.shown()
+                    + " (in " + indexDir + ")");
+        } catch (IOException e) {
+            closeQuietly(probe);
+            throw new ArchiveException(Problem.DAMAGED, "Cannot create this client's index folder " + indexDir + ": "
+                    + e.getMessage(), e);
+        } catch (RuntimeException e) {
+            closeQuietly(probe);
+            throw e;
+        }
+        try {
+            Archive archive = connect(null, address, indexDir, ds, probe);
+            archive.lock = clientLock;
+            return archive;
+        } catch (RuntimeException e) {
+            clientLock.close();
+            throw e;
+        }
+    }
+
+    private static JdbcDataSource h2(String url) {
+        JdbcDataSource ds = new JdbcDataSource();
+        ds.setURL(url);
+        return ds;
     }
 
     /**
@@ -130,33 +227,40 @@ public final class Archive implements AutoCloseable {
                 + (mustExist ? ";IFEXISTS=TRUE" : "");
     }
 
-    private static Archive connect(Path dir, String url) {
-        JdbcDataSource ds = new JdbcDataSource();
-        ds.setURL(url);
+    private static Archive connect(Path dir, JdbcDataSource ds) {
         Connection keeper;
         try {
             keeper = ds.getConnection();
         } catch (SQLException e) {
             throw openFailure(dir, e);
         }
+        return connect(dir, null, dir == null ? null : dir.resolve("index"), ds, keeper);
+    }
+
+    private static Archive connect(Path dir, ServerAddress server, Path indexDir, DataSource ds, Connection keeper) {
+        Object where = server != null ? server.shown() : dir;
         try {
             SchemaVersion version = SchemaVersion.read(keeper);
             if (version.version() > SchemaVersion.LATEST) {
-                throw new ArchiveException(Problem.TOO_NEW, "The archive at " + dir + " has schema version "
+                throw new ArchiveException(Problem.TOO_NEW, "The archive at " + where + " has schema version "
                         + version.version() + ", newer than this Variset knows (" + SchemaVersion.LATEST
                         + "). Use a newer Variset; this one will not change the archive.");
             }
+            boolean empty = version.version() == 0;
             if (version.behind()) {
-                SchemaMigrator.migrate(ds, dir);
+                SchemaMigrator.migrate(ds, where);
                 version = SchemaVersion.read(keeper);
             }
-            return new Archive(dir, ds, keeper, version);
+            SchemaVersion.ensureIdentity(keeper);
+            Archive archive = new Archive(dir, server, indexDir, ds, keeper, version);
+            archive.created = empty;
+            return archive;
         } catch (SQLException | RuntimeException e) {
             closeQuietly(keeper);
             if (e instanceof ArchiveException ae) {
                 throw ae;
             }
-            throw new ArchiveException(Problem.DAMAGED, "Cannot read the archive at " + dir + ": " + e.getMessage()
+            throw new ArchiveException(Problem.DAMAGED, "Cannot read the archive at " + where + ": " + e.getMessage()
                     + ". Run 'variset check' for details.", e);
         }
     }
@@ -179,9 +283,53 @@ public final class Archive implements AutoCloseable {
         }
     }
 
-    /** The archive folder, or null for an archive in memory. */
+    /** The archive folder, or null for an archive in memory or on a server. */
     public Path dir() {
         return dir;
+    }
+
+    /** True when opening this archive made its tables: it is new. */
+    public boolean wasCreated() {
+        return created;
+    }
+
+    /** The server of a shared archive, or null for an embedded one. */
+    public ServerAddress server() {
+        return server;
+    }
+
+    /** True for a shared archive on a PostgreSQL server. */
+    public boolean shared() {
+        return server != null;
+    }
+
+    /**
+     * The folder of this client's search index: the archive folder's {@code index}, the folder a shared archive was
+     * opened with, or null for an archive in memory.
+     */
+    public Path indexDir() {
+        return indexDir;
+    }
+
+    /** Where the archive is, for messages: its folder or its server address (never a password). */
+    public String describe() {
+        return server != null ? server.shown() : dir != null ? dir.toString() : "(memory)";
+    }
+
+    /** The data source of the archive's database (each connection from it is new; close it when done). */
+    public DataSource dataSource() {
+        return dataSource;
+    }
+
+    /**
+     * Waits for this client's turn to write, until the session's transaction ends. On a shared archive this takes a
+     * PostgreSQL transaction-level advisory lock, so that writers of several clients take turns; an embedded
+     * archive's lock file already lets one process at a time in, so there it does nothing.
+     */
+    public void takeWriterTurn(Session s) {
+        if (server != null) {
+            s.createNativeQuery("SELECT pg_advisory_xact_lock(" + WRITER_LOCK + ")", Object.class).getSingleResult();
+        }
     }
 
     /** The schema version the archive had once opened (after any migration). */
@@ -206,19 +354,28 @@ public final class Archive implements AutoCloseable {
     /** Hibernate's session factory, booted on first call. */
     public synchronized SessionFactory sessionFactory() {
         if (sessionFactory == null) {
-            sessionFactory = OrmBootstrap.build(dataSource);
+            sessionFactory = OrmBootstrap.build(dataSource, server != null);
         }
         return sessionFactory;
     }
 
-    /** Runs work in one transaction: committed when it returns, rolled back when it throws. */
+    /**
+     * Runs work in one transaction: committed when it returns, rolled back when it throws. On a shared archive the
+     * transaction first waits for its turn among writers ({@link #takeWriterTurn}).
+     */
     public <T> T fromTransaction(Function<Session, T> work) {
-        return sessionFactory().fromTransaction(work);
+        return sessionFactory().fromTransaction(s -> {
+            takeWriterTurn(s);
+            return work.apply(s);
+        });
     }
 
-    /** Runs work in one transaction: committed when it returns, rolled back when it throws. */
+    /** As {@link #fromTransaction}, for work that returns nothing. */
     public void inTransaction(Consumer<Session> work) {
-        sessionFactory().inTransaction(work);
+        fromTransaction(s -> {
+            work.accept(s);
+            return null;
+        });
     }
 
     /** Runs bulk work in one stateless-session transaction. */

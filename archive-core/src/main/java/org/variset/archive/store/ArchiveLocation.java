@@ -1,41 +1,152 @@
 package org.variset.archive.store;
 
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
+import java.util.Properties;
 
 /**
- * Where the archive lives, and why there. Precedence (README, "Where the archive lives"):
- * the {@code --archive DIR} option, else the environment variable {@code VARISET_ARCHIVE}, else
- * {@code $XDG_DATA_HOME/variset}, else {@code ~/.local/share/variset}.
+ * Where the archive lives, and why there: an embedded archive in a folder, or a shared one on a PostgreSQL server.
+ * Precedence (README, "Where the archive lives"), first found wins:
+ * <ol>
+ * <li>the options {@code --db URL} or {@code --archive DIR} (not both);</li>
+ * <li>the environment variables {@code VARISET_DB} or {@code VARISET_ARCHIVE} (not both);</li>
+ * <li>the configuration file {@code $XDG_CONFIG_HOME/variset/variset.properties} (else
+ * {@code ~/.config/variset/variset.properties}), key {@code db} or {@code archive};</li>
+ * <li>{@code $XDG_DATA_HOME/variset}, else {@code ~/.local/share/variset}.</li>
+ * </ol>
+ * A shared archive's search index is this client's own, in {@code $XDG_CACHE_HOME/variset/} (else
+ * {@code ~/.cache/variset/}), in a folder named after the server and database.
  *
- * @param dir the archive folder, absolute
- * @param source how it was chosen, for messages ({@code --archive}, {@code VARISET_ARCHIVE}, ...)
+ * @param dir the archive folder, absolute; null for a shared archive
+ * @param server the shared archive's server; null for an embedded archive
+ * @param indexDir the folder of the search index (the archive folder's {@code index}, or this client's cache)
+ * @param source how it was chosen, for messages ({@code --archive}, {@code VARISET_DB}, ...)
  */
-public record ArchiveLocation(Path dir, String source) {
+public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, String source) {
 
     /** The environment variable that names the archive folder. */
     public static final String ENV = "VARISET_ARCHIVE";
+    /** The environment variable that names a shared archive's server. */
+    public static final String DB_ENV = "VARISET_DB";
+    /** The configuration file's name, in {@code $XDG_CONFIG_HOME/variset/}. */
+    public static final String CONFIG_FILE = "variset.properties";
+
+    /** An embedded archive in a folder. */
+    public static ArchiveLocation embedded(Path dir, String source) {
+        Path d = dir.toAbsolutePath().normalize();
+        return new ArchiveLocation(d, null, d.resolve("index"), source);
+    }
+
+    /** True for a shared archive on a PostgreSQL server. */
+    public boolean shared() {
+        return server != null;
+    }
+
+    /** The archive for messages: its folder, or its server's address (never a password). */
+    public String shown() {
+        return server != null ? server.shown() : dir.toString();
+    }
+
+    /** Resolves an embedded archive's folder from {@code --archive}, the environment and the defaults. */
+    public static ArchiveLocation resolve(Path option, Map<String, String> env, Path home) {
+        return resolve(option, null, env, home);
+    }
 
     /**
-     * Resolves the archive folder.
+     * Resolves where the archive lives.
      *
-     * @param option the {@code --archive} value, or null
+     * @param archiveOption the {@code --archive} value, or null
+     * @param dbOption the {@code --db} value, or null
      * @param env the process environment
      * @param home the user's home folder
+     * @throws IllegalArgumentException when both kinds are given at one level, a configuration file cannot be read,
+     *     or a server address is malformed
      */
-    public static ArchiveLocation resolve(Path option, Map<String, String> env, Path home) {
-        if (option != null) {
-            return new ArchiveLocation(option.toAbsolutePath().normalize(), "--archive");
+    public static ArchiveLocation resolve(Path archiveOption, String dbOption, Map<String, String> env, Path home) {
+        if (archiveOption != null && dbOption != null) {
+            throw new IllegalArgumentException("Give either --archive (an embedded archive) or --db (a shared one on "
+                    + "a PostgreSQL server), not both");
         }
-        String fromEnv = env.get(ENV);
-        if (fromEnv != null && !fromEnv.isBlank()) {
-            return new ArchiveLocation(Path.of(fromEnv).toAbsolutePath().normalize(), ENV);
+        if (dbOption != null) {
+            return server(dbOption, "--db", env, home);
+        }
+        if (archiveOption != null) {
+            return embedded(archiveOption, "--archive");
+        }
+        String db = blankToNull(env.get(DB_ENV));
+        String dir = blankToNull(env.get(ENV));
+        if (db != null && dir != null) {
+            throw new IllegalArgumentException("Both " + DB_ENV + " and " + ENV + " are set; unset one of them (or "
+                    + "name the archive with --db or --archive)");
+        }
+        if (db != null) {
+            return server(db, DB_ENV, env, home);
+        }
+        if (dir != null) {
+            return embedded(Path.of(dir), ENV);
+        }
+        Path config = configFile(env, home);
+        if (config != null && Files.isRegularFile(config)) {
+            Properties p = new Properties();
+            try (Reader r = Files.newBufferedReader(config, StandardCharsets.UTF_8)) {
+                p.load(r);
+            } catch (IOException | IllegalArgumentException e) {
+                throw new IllegalArgumentException("Cannot read the configuration file " + config + ": "
+                        + e.getMessage());
+            }
+            String cdb = blankToNull(p.getProperty("db"));
+            String cdir = blankToNull(p.getProperty("archive"));
+            if (cdb != null && cdir != null) {
+                throw new IllegalArgumentException("The configuration file " + config + " sets both 'db' and "
+                        + "'archive'; keep one of them");
+            }
+            if (cdb != null) {
+                return server(cdb, config.toString(), env, home);
+            }
+            if (cdir != null) {
+                return embedded(Path.of(cdir), config.toString());
+            }
         }
         String xdg = env.get("XDG_DATA_HOME");
         if (xdg != null && !xdg.isBlank() && Path.of(xdg).isAbsolute()) {
-            return new ArchiveLocation(Path.of(xdg, "variset").normalize(), "XDG_DATA_HOME");
+            return embedded(Path.of(xdg, "variset"), "XDG_DATA_HOME");
         }
-        return new ArchiveLocation(home.resolve(".local/share/variset").toAbsolutePath().normalize(),
-                "the default location");
+        return embedded(home.resolve(".local/share/variset"), "the default location");
+    }
+
+    private static ArchiveLocation server(String url, String source, Map<String, String> env, Path home) {
+        ServerAddress a;
+        try {
+            a = ServerAddress.parse(url, env, home);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException(e.getMessage() + " (the address came from " + source + ")");
+        }
+        return new ArchiveLocation(null, a, cacheHome(env, home).resolve(a.cacheKey()), source);
+    }
+
+    /** {@code $XDG_CONFIG_HOME/variset/variset.properties}, else {@code ~/.config/variset/variset.properties}. */
+    static Path configFile(Map<String, String> env, Path home) {
+        String xdg = env.get("XDG_CONFIG_HOME");
+        if (xdg != null && !xdg.isBlank() && Path.of(xdg).isAbsolute()) {
+            return Path.of(xdg, "variset", CONFIG_FILE);
+        }
+        return home == null ? null : home.resolve(".config/variset").resolve(CONFIG_FILE);
+    }
+
+    /** {@code $XDG_CACHE_HOME/variset}, else {@code ~/.cache/variset}. */
+    static Path cacheHome(Map<String, String> env, Path home) {
+        String xdg = env.get("XDG_CACHE_HOME");
+        if (xdg != null && !xdg.isBlank() && Path.of(xdg).isAbsolute()) {
+            return Path.of(xdg, "variset");
+        }
+        return home.resolve(".cache/variset").toAbsolutePath().normalize();
+    }
+
+    private static String blankToNull(String s) {
+        return s == null || s.isBlank() ? null : s.strip();
     }
 }

@@ -43,6 +43,16 @@ public final class ArchiveLock implements AutoCloseable {
      * @throws ArchiveException (in use) naming the process that holds it, when it does not let go in time
      */
     public static ArchiveLock acquire(Path dir, Duration wait) {
+        return acquire(dir, wait, "The archive at " + dir);
+    }
+
+    /**
+     * Takes the lock of a folder, waiting up to {@code wait}; {@code what} names the folder in messages ("The archive
+     * at ...", "This client's search index of ...").
+     *
+     * @throws ArchiveException (in use) naming the process that holds it, when it does not let go in time
+     */
+    public static ArchiveLock acquire(Path dir, Duration wait, String what) {
         Path file = dir.resolve(FILE);
         long deadline = System.nanoTime() + wait.toNanos();
         try {
@@ -63,13 +73,13 @@ public final class ArchiveLock implements AutoCloseable {
                 if (System.nanoTime() >= deadline) {
                     String holder = holder(file);
                     ch.close();
-                    throw new ArchiveException(ArchiveException.Problem.IN_USE, "The archive at " + dir
+                    throw new ArchiveException(ArchiveException.Problem.IN_USE, what
                             + " is in use by " + holder + ". Wait for it to finish and try again.");
                 }
                 sleep();
             }
         } catch (IOException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot lock the archive at " + dir + ": "
+            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot lock " + dir + ": "
                     + e.getMessage(), e);
         }
     }

@@ -1,6 +1,5 @@
 package org.variset.archive.store;
 
-import java.nio.file.Path;
 import javax.sql.DataSource;
 import org.flywaydb.core.Flyway;
 import org.flywaydb.core.api.FlywayException;
@@ -12,7 +11,7 @@ final class SchemaMigrator {
     private SchemaMigrator() {
     }
 
-    static void migrate(DataSource ds, Path dir) {
+    static void migrate(DataSource ds, Object where) {
         try {
             Flyway.configure(SchemaMigrator.class.getClassLoader())
                     .dataSource(ds)
@@ -22,7 +21,7 @@ final class SchemaMigrator {
                     .load()
                     .migrate();
         } catch (FlywayException e) {
-            throw new ArchiveException(Problem.DAMAGED, "The archive at " + (dir == null ? "(memory)" : dir)
+            throw new ArchiveException(Problem.DAMAGED, "The archive at " + (where == null ? "(memory)" : where)
                     + " could not be brought to schema version " + SchemaVersion.LATEST + ": " + e.getMessage()
                     + ". Nothing was changed by the failed step; restore a backup or report the message.", e);
         }

@@ -1,5 +1,6 @@
 package org.variset.archive.bulk;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -35,7 +36,7 @@ class BulkInsertsTest {
 
     @BeforeEach
     void open() {
-        archive = Archive.inMemory();
+        archive = TestArchives.fresh();
         archive.inTransaction(ResetFixture::storeFullReset);
     }
 

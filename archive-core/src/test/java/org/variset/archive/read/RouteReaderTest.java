@@ -1,5 +1,6 @@
 package org.variset.archive.read;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -23,7 +24,7 @@ class RouteReaderTest {
 
     @BeforeEach
     void storeTheFixture() {
-        archive = Archive.inMemory();
+        archive = TestArchives.fresh();
         archive.inTransaction(ResetFixture::storeFullReset);
         reader = new RouteReader(archive.connection());
         catalog = new ArchiveCatalog(archive.connection());

@@ -1,5 +1,6 @@
 package org.variset.archive.search;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -31,7 +32,7 @@ class SearchIndexTest {
 
     @BeforeEach
     void indexTheFixture() {
-        archive = Archive.inMemory();
+        archive = TestArchives.fresh();
         archive.inTransaction(SearchFixture::store);
         index = SearchIndex.inMemory();
         assertThat(index.sync(archive.connection(), IndexProgress.NONE).action()).isEqualTo(IndexSync.Action.REBUILT);
@@ -251,7 +252,7 @@ class SearchIndexTest {
         }
 
         @Test
-        void rebuildsAnIndexThatIsMissingDamagedOrAhead(@TempDir Path dir) throws IOException {
+        void rebuildsAnIndexThatIsMissingDamagedOrAhead(@TempDir Path dir) throws Exception {
             try (SearchIndex onDisk = SearchIndex.at(dir)) {
                 IndexSync first = onDisk.sync(archive.connection(), IndexProgress.NONE);
                 assertThat(first.action()).isEqualTo(IndexSync.Action.REBUILT);
@@ -269,10 +270,20 @@ class SearchIndexTest {
                 assertThat(again.notice()).contains("unreadable");
                 assertThat(damaged.ids()).hasSize(7);
             }
-            try (Archive fresh = Archive.inMemory(); SearchIndex ahead = SearchIndex.at(dir)) {
-                assertThat(ahead.sync(fresh.connection(), IndexProgress.NONE).notice()).contains("ahead of the "
-                        + "archive");
-                assertThat(ahead.ids()).isEmpty();
+            if (!TestArchives.onPostgres()) {
+                // An embedded archive restored from an older backup: its newest change is older than the index's.
+                try (var s = archive.connection().createStatement()) {
+                    s.execute("DELETE FROM route_change WHERE id = (SELECT MAX(id) FROM route_change)");
+                }
+                try (SearchIndex ahead = SearchIndex.at(dir)) {
+                    assertThat(ahead.sync(archive.connection(), IndexProgress.NONE).notice())
+                            .contains("ahead of the archive");
+                }
+            }
+            try (Archive fresh = TestArchives.fresh(); SearchIndex other = SearchIndex.at(dir)) {
+                assertThat(other.sync(fresh.connection(), IndexProgress.NONE).notice()).contains("built from another"
+                        + " archive");
+                assertThat(other.ids()).isEmpty();
             }
         }
 

@@ -1,5 +1,6 @@
 package org.variset.archive.settings;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -104,7 +105,7 @@ class GymSettingsTest {
 
         @BeforeEach
         void store() {
-            archive = Archive.inMemory();
+            archive = TestArchives.fresh();
             archive.inTransaction(ResetFixture::storeFullReset);
             ArchiveCatalog catalog = new ArchiveCatalog(archive.connection());
             gym = catalog.gym(null);

@@ -1,5 +1,6 @@
 package org.variset.archive.store;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.time.LocalDate;
@@ -26,7 +27,7 @@ class ArchivePersistenceTest {
 
     @BeforeEach
     void openFreshArchive() {
-        archive = Archive.inMemory();
+        archive = TestArchives.fresh();
         archive.inTransaction(ResetFixture::storeFullReset);
     }
 

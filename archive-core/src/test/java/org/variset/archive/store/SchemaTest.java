@@ -1,5 +1,6 @@
 package org.variset.archive.store;
 
+import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -11,7 +12,6 @@ import java.sql.Statement;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
-import org.h2.jdbcx.JdbcDataSource;
 import org.hibernate.SessionFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -33,10 +33,8 @@ class SchemaTest {
     /** Normal runs skip validation, so this test is the one place the mapping meets the migrated schema. */
     @Test
     void mapsTheEntitiesOntoTheSchemaTheMigrationsBuild() {
-        try (Archive archive = Archive.inMemory()) {
-            JdbcDataSource ds = new JdbcDataSource();
-            ds.setURL(archiveUrl(archive));
-            try (SessionFactory sf = OrmBootstrap.buildValidating(ds)) {
+        try (Archive archive = TestArchives.fresh()) {
+            try (SessionFactory sf = OrmBootstrap.buildValidating(archive.dataSource(), archive.shared())) {
                 assertThat(sf.isOpen()).isTrue();
             }
         }
@@ -88,13 +86,5 @@ class SchemaTest {
         Archive.create(dir).close();
         assertThat(java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(dir)))
                 .isEqualTo("rwx------");
-    }
-
-    private static String archiveUrl(Archive archive) {
-        try {
-            return archive.connection().getMetaData().getURL();
-        } catch (java.sql.SQLException e) {
-            throw new IllegalStateException(e);
-        }
     }
 }

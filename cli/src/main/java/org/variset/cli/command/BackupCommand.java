@@ -31,7 +31,7 @@ final class BackupCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
         JsonNode m;
-        try (Archive archive = Archive.open(root().location().dir(), Duration.ofSeconds(Math.max(0, waitSeconds)))) {
+        try (Archive archive = Archive.open(embeddedDir("backup"), Duration.ofSeconds(Math.max(0, waitSeconds)))) {
             m = ArchiveBackup.write(archive, file, force);
         }
         JsonNode c = m.get("counts");

@@ -32,7 +32,7 @@ final class CheckCommand extends VarisetSubcommand {
     ExitCode execute() {
         CheckReport report;
         boolean repaired = false;
-        try (Archive archive = openArchive(); SearchIndex index = SearchIndex.at(archive.dir())) {
+        try (Archive archive = openArchive(); SearchIndex index = SearchIndex.of(archive)) {
             report = ArchiveCheck.run(archive, index);
             if (repair && !report.healthy() && report.databaseHealthy()) {
                 index.rebuild(archive.connection(), IndexProgress.NONE, "repair asked for");

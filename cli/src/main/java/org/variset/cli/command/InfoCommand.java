@@ -26,7 +26,8 @@ final class InfoCommand extends VarisetSubcommand {
         }
         if (format.json()) {
             ObjectNode o = Json.object();
-            o.put("archive", where.dir().toString());
+            o.put("archive", where.shown());
+            o.put("shared", where.shared());
             o.put("schema_version", s.schemaVersion());
             o.put("gyms", s.gyms());
             o.put("walls", s.walls());
@@ -39,7 +40,10 @@ final class InfoCommand extends VarisetSubcommand {
             out().println(Json.write(o));
             return ExitCode.OK;
         }
-        out().printf("Archive   %s (from %s)%n", where.dir(), where.source());
+        out().printf("Archive   %s (from %s)%n", where.shown(), where.source());
+        if (where.shared()) {
+            out().printf("Index     %s (this client's own)%n", where.indexDir());
+        }
         out().printf("Schema    version %d%n", s.schemaVersion());
         out().printf("Gyms      %d%n", s.gyms());
         out().printf("Walls     %d%n", s.walls());

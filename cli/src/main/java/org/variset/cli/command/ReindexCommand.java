@@ -19,7 +19,7 @@ final class ReindexCommand extends VarisetSubcommand {
         IndexSync s;
         try (Archive archive = openArchive();
                 ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal());
-                SearchIndex index = SearchIndex.at(archive.dir())) {
+                SearchIndex index = SearchIndex.of(archive)) {
             s = index.rebuild(archive.connection(), (d, t) -> progress.advanced("indexing routes", d), "asked for");
         }
         out().printf("Indexed %d routes in %.1f s (change stamp %d).%n", s.routes(), (System.nanoTime() - start)

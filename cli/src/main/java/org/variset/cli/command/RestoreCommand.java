@@ -24,7 +24,7 @@ final class RestoreCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        Path dir = root().location().dir();
+        Path dir = embeddedDir("restore");
         ArchiveRestore.Result r = ArchiveRestore.restore(file, dir, force);
         JsonNode c = r.manifest().get("counts");
         out().println("Restored " + file + " into " + dir + (r.replaced() ? " (the archive that was there is "

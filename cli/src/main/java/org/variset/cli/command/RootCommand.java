@@ -22,8 +22,10 @@ import picocli.CommandLine.ScopeType;
             "  2   bad usage (unknown option or command, missing argument)",
             "  3   archive problem (missing, in use, damaged, or newer than this Variset)",
             "  70  internal fault (run again with --verbose and report the stack trace)", "",
-            "Where the archive lives: --archive DIR, else $VARISET_ARCHIVE, else $XDG_DATA_HOME/variset, "
-                + "else ~/.local/share/variset."})
+            "Where the archive lives: --archive DIR or --db URL, else $VARISET_ARCHIVE or $VARISET_DB, else "
+                + "'archive' or 'db' in $XDG_CONFIG_HOME/variset/variset.properties, else $XDG_DATA_HOME/variset, "
+                + "else ~/.local/share/variset. A shared archive's search index is kept per client in "
+                + "$XDG_CACHE_HOME/variset."})
 public final class RootCommand implements Runnable {
     /**
      * The subcommands, in the order the help lists them. They are added per run by {@link #addSubcommands}: building
@@ -43,6 +45,12 @@ public final class RootCommand implements Runnable {
             description = "The archive folder (default: $VARISET_ARCHIVE, else $XDG_DATA_HOME/variset, "
                     + "else ~/.local/share/variset).")
     Path archive;
+
+    @Option(names = "--db", paramLabel = "URL", scope = ScopeType.INHERIT,
+            description = "A shared archive on a PostgreSQL server, as postgresql://[user@]host[:port]/database"
+                    + "[?currentSchema=name] (default: $VARISET_DB, else 'db' in the configuration file). The "
+                    + "password comes from $PGPASSWORD or ~/.pgpass, never from the address.")
+    String db;
 
     @Option(names = "--verbose", scope = ScopeType.INHERIT,
             description = "Show how long each phase of an import took, library log lines and stack traces on "
@@ -64,7 +72,7 @@ public final class RootCommand implements Runnable {
 
     /** Where the archive lives for this run. */
     ArchiveLocation location() {
-        return ArchiveLocation.resolve(archive, cli.env(), cli.home());
+        return ArchiveLocation.resolve(archive, db, cli.env(), cli.home());
     }
 
     @Override
@@ -84,14 +92,14 @@ public final class RootCommand implements Runnable {
         }
     }
 
-    /** The first word of a command line that is neither an option nor the value of {@code --archive}. */
+    /** The first word of a command line that is neither an option nor the value of {@code --archive} or {@code --db}. */
     static String commandName(String[] args) {
         for (int i = 0; i < args.length; i++) {
             String a = args[i];
             if (a.equals("--")) {
                 return null;
             }
-            if (a.equals("--archive")) {
+            if (a.equals("--archive") || a.equals("--db")) {
                 i++;
             } else if (!a.startsWith("-")) {
                 return a;

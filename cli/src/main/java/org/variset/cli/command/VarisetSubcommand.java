@@ -34,10 +34,20 @@ abstract class VarisetSubcommand implements Callable<Integer> {
         return root().cli().err();
     }
 
+    /** The folder of an embedded archive; a clear error for a shared one, whose server keeps its own files. */
+    java.nio.file.Path embeddedDir(String what) {
+        ArchiveLocation where = root().location();
+        if (where.shared()) {
+            throw new IllegalArgumentException(what + " works on an embedded archive, and this one is shared on "
+                    + where.shown() + "; back up a PostgreSQL archive with the server's own tools (pg_dump and "
+                    + "pg_restore, or the server's continuous archiving)");
+        }
+        return where.dir();
+    }
+
     /** Opens the archive of this run, migrating it if it is behind. */
     Archive openArchive() {
-        ArchiveLocation where = root().location();
-        return Archive.open(where.dir());
+        return Archive.open(root().location(), org.variset.archive.store.ArchiveLock.DEFAULT_WAIT);
     }
 
     @Override

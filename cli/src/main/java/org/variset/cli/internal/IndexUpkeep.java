@@ -29,11 +29,11 @@ public final class IndexUpkeep {
 
     /** As {@link #afterWrite(Archive, PrintWriter)}, reporting progress (a large import changes many routes). */
     public static void afterWrite(Archive archive, PrintWriter err, IndexProgress progress) {
-        if (archive.dir() == null) {
+        if (archive.indexDir() == null) {
             return;
         }
         pauseForTests(err);
-        try (SearchIndex index = SearchIndex.at(archive.dir())) {
+        try (SearchIndex index = SearchIndex.of(archive)) {
             index.sync(archive.connection(), progress);
         } catch (RuntimeException e) {
             err.println("variset: warning: the search index could not be updated (" + e.getMessage() + "); the "
@@ -59,7 +59,7 @@ public final class IndexUpkeep {
 
     /** Brings the index up to date before it answers, saying so on {@code err} when it had to. */
     public static SearchIndex current(Archive archive, PrintWriter err, IndexProgress progress) {
-        SearchIndex index = SearchIndex.at(archive.dir());
+        SearchIndex index = SearchIndex.of(archive);
         try {
             IndexSync s = index.sync(archive.connection(), progress);
             if (!s.notice().isEmpty()) {
