@@ -29,12 +29,12 @@ class AuditPlanTrendTest {
 
     @TempDir
     static Path home;
-    private String archive;
+    private TestArchive archive;
     private JsonNode expected;
 
     @BeforeAll
     void importTheGym() throws IOException {
-        archive = home.resolve("archive").toString();
+        archive = TestArchive.fresh(home, "archive");
         run("init").exits(ExitCode.OK);
         run("import", FILES.resolve("walls.csv").toString(), FILES.resolve("routes.csv").toString(),
                 FILES.resolve("holds.csv").toString()).exits(ExitCode.OK);
@@ -42,11 +42,7 @@ class AuditPlanTrendTest {
     }
 
     private CliRun run(String... args) {
-        String[] all = new String[args.length + 2];
-        all[0] = "--archive";
-        all[1] = archive;
-        System.arraycopy(args, 0, all, 2, args.length);
-        return CliRun.run(home, all);
+        return archive.run(home, args);
     }
 
     private JsonNode json(String... args) throws IOException {

@@ -143,7 +143,7 @@ public final class Archive implements AutoCloseable {
      *     than this code
      */
     public static Archive open(ArchiveLocation where, java.time.Duration wait) {
-        return where.shared() ? openServer(where.server(), where.indexDir(), false, wait) : open(where.dir(), wait);
+        return where.shared() ? openServer(where.server(), where.clientDir(), false, wait) : open(where.dir(), wait);
     }
 
     /** A new, empty, migrated archive in memory, gone when closed (for tests and dry runs). */
@@ -152,15 +152,15 @@ public final class Archive implements AutoCloseable {
     }
 
     /**
-     * Opens the shared archive on a PostgreSQL server. This client's search index lives in {@code indexDir}, whose
-     * lock keeps two processes of this client from writing it at once.
+     * Opens the shared archive on a PostgreSQL server. This client's own files (its search index, in {@code index})
+     * live in {@code clientDir}, whose lock keeps two processes of this client from using them at once.
      *
      * @param create true to make the archive's tables when the database (or schema) has none yet ({@code init});
      *     false to refuse such a database, saying how to make one
      * @throws ArchiveException when the server cannot be reached, the database holds no archive (and
      *     {@code create} is false), or its schema is newer than this code
      */
-    public static Archive openServer(ServerAddress address, Path indexDir, boolean create, java.time.Duration wait) {
+    public static Archive openServer(ServerAddress address, Path clientDir, boolean create, java.time.Duration wait) {
         PGSimpleDataSource ds = new PGSimpleDataSource();
         ds.setURL(address.jdbcUrl());
         ds.setUser(address.user());
@@ -190,19 +190,19 @@ public final class Archive implements AutoCloseable {
         }
         ArchiveLock clientLock;
         try {
-            createPrivateDirectories(indexDir);
-            clientLock = ArchiveLock.acquire(indexDir, wait, "This client's search index of " + address.shown()
-                    + " (in " + indexDir + ")");
+            createPrivateDirectories(clientDir);
+            clientLock = ArchiveLock.acquire(clientDir, wait, "This client's search index of " + address.shown()
+                    + " (in " + clientDir + ")");
         } catch (IOException e) {
             closeQuietly(probe);
-            throw new ArchiveException(Problem.DAMAGED, "Cannot create this client's index folder " + indexDir + ": "
+            throw new ArchiveException(Problem.DAMAGED, "Cannot create this client's folder " + clientDir + ": "
                     + e.getMessage(), e);
         } catch (RuntimeException e) {
             closeQuietly(probe);
             throw e;
         }
         try {
-            Archive archive = connect(null, address, indexDir, ds, probe);
+            Archive archive = connect(null, address, clientDir.resolve("index"), ds, probe);
             archive.lock = clientLock;
             return archive;
         } catch (RuntimeException e) {

@@ -19,7 +19,7 @@ import java.util.Properties;
  * <li>{@code $XDG_DATA_HOME/variset}, else {@code ~/.local/share/variset}.</li>
  * </ol>
  * A shared archive's search index is this client's own, in {@code $XDG_CACHE_HOME/variset/} (else
- * {@code ~/.cache/variset/}), in a folder named after the server and database.
+ * {@code ~/.cache/variset/}), in a folder named after the server and database ({@code .../KEY/index}).
  *
  * @param dir the archive folder, absolute; null for a shared archive
  * @param server the shared archive's server; null for an embedded archive
@@ -39,6 +39,14 @@ public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, Str
     public static ArchiveLocation embedded(Path dir, String source) {
         Path d = dir.toAbsolutePath().normalize();
         return new ArchiveLocation(d, null, d.resolve("index"), source);
+    }
+
+    /**
+     * The folder of this client's own files for a shared archive (its search index and the lock that keeps two
+     * processes of this client from using it at once), or null for an embedded archive.
+     */
+    public Path clientDir() {
+        return server == null ? null : indexDir.getParent();
     }
 
     /** True for a shared archive on a PostgreSQL server. */
@@ -125,7 +133,7 @@ public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, Str
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException(e.getMessage() + " (the address came from " + source + ")");
         }
-        return new ArchiveLocation(null, a, cacheHome(env, home).resolve(a.cacheKey()), source);
+        return new ArchiveLocation(null, a, cacheHome(env, home).resolve(a.cacheKey()).resolve("index"), source);
     }
 
     /** {@code $XDG_CONFIG_HOME/variset/variset.properties}, else {@code ~/.config/variset/variset.properties}. */

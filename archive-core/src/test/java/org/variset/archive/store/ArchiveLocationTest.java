@@ -33,7 +33,9 @@ class ArchiveLocationTest {
         assertThat(l.shared()).isTrue();
         assertThat(l.source()).isEqualTo("--db");
         assertThat(l.shown()).isEqualTo("postgresql://ops@db.example:6543/chain");
-        assertThat(l.indexDir().toString()).startsWith("/var/cache/kit/variset/db.example-6543-chain-");
+        assertThat(l.indexDir().toString()).startsWith("/var/cache/kit/variset/db.example-6543-chain-").endsWith(
+                "/index");
+        assertThat(l.clientDir()).isEqualTo(l.indexDir().getParent());
         assertThat(l.dir()).isNull();
     }
 

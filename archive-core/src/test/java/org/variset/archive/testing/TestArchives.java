@@ -133,6 +133,20 @@ public final class TestArchives {
         }
     }
 
+    /**
+     * Why the test server cannot be used, or null when it answers. Checked once per test process; says so on
+     * standard error the first time it does not answer (unless a skip is not allowed).
+     */
+    static synchronized String unreachable() {
+        ServerAddress a = server();
+        try {
+            requireServer(a);
+            return null;
+        } catch (org.opentest4j.TestAbortedException | AssertionError e) {
+            return e.getMessage();
+        }
+    }
+
     /** Skips (or fails, when required) unless the server answers; drops leftovers of dead test processes once. */
     private static synchronized void requireServer(ServerAddress a) {
         if (!checked) {

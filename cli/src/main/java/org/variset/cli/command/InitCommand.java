@@ -23,7 +23,7 @@ final class InitCommand extends VarisetSubcommand {
         boolean existed;
         int version;
         if (where.shared()) {
-            try (Archive archive = Archive.openServer(where.server(), where.indexDir(), true,
+            try (Archive archive = Archive.openServer(where.server(), where.clientDir(), true,
                     org.variset.archive.store.ArchiveLock.DEFAULT_WAIT)) {
                 existed = !archive.wasCreated();
                 version = archive.schemaVersion().version();

@@ -35,7 +35,7 @@ public final class RootCommand implements Runnable {
     static final List<Class<?>> SUBCOMMANDS = List.of(DemoCommand.class, InitCommand.class, InfoCommand.class,
             ImportCommand.class, ExportCommand.class, AuditCommand.class, PlanCommand.class, TrendCommand.class,
             SearchCommand.class, SimilarCommand.class, ReindexCommand.class, GenerateCommand.class, CheckCommand.class,
-            BackupCommand.class, RestoreCommand.class, SettingsCommand.class, StripCommand.class, RemoveCommand.class,
+            BackupCommand.class, RestoreCommand.class, MigrateToCommand.class, SettingsCommand.class, StripCommand.class, RemoveCommand.class,
             AmendCommand.class, SetterCommand.class, TemplateCommand.class, GradeCommand.class,
             TrainStartUpCommand.class, CommandLine.HelpCommand.class);
 

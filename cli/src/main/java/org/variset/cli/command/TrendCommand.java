@@ -1,6 +1,11 @@
 package org.variset.cli.command;
 
 import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import org.variset.archive.read.GymRecord;
+import org.variset.reports.trend.ChainComparison;
 import org.variset.archive.gym.GymCalendar;
 import org.variset.archive.read.ArchiveCatalog;
 import org.variset.archive.store.Archive;
@@ -18,18 +23,28 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
 
-/** A gym's trends over a year or a period. */
+/** A gym's trends over a year or a period, or several gyms' side by side. */
 @Command(name = "trend", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Show a gym's trends over a year or a period: month-end figures of the gym's and each wall's "
                 + "routes up, resets per wall and how long each wall has been up against its reset cycle (due, "
                 + "overdue), route lifetimes, the setter mix with each setter's grip, hold and move profile, the "
-                + "period's grades against the target, and its near-repeats.", ""},
-        footer = {"", "Formats: text, json, or csv (the monthly series, one row per day and wall).", "",
+                + "period's grades against the target, and its near-repeats.",
+            "",
+            "With several gyms (--gym A --gym B, or --all-gyms), for a chain: the gyms side by side (routes set, "
+                + "resets and their mean score, month-end figures, walls due and overdue, route lifetime, "
+                + "repeats), then each gym's own trend.", ""},
+        footer = {"", "Formats: text, json, or csv (one gym: the monthly series, one row per day and wall; several: "
+                + "one row per gym).", "",
             "Examples:", "  variset trend --year 2026 --pdf annual-2026.pdf",
-            "  variset trend --from 2026-03 --to 2026-08 --format csv"})
+            "  variset trend --from 2026-03 --to 2026-08 --format csv",
+            "  variset --db postgresql://db.example/chain trend --all-gyms --year 2026 --pdf chain-2026.pdf"})
 final class TrendCommand extends VarisetSubcommand {
-    @Mixin
-    GymOptions gym;
+    @Option(names = "--gym", paramLabel = "GYM", description = "A gym (needed when the archive holds several); "
+            + "repeat it to compare gyms.")
+    List<String> gyms = new ArrayList<>();
+
+    @Option(names = "--all-gyms", description = "Compare every gym of the archive.")
+    boolean allGyms;
 
     @Option(names = "--year", paramLabel = "YYYY", description = "The calendar year.")
     Integer year;
@@ -57,15 +72,38 @@ final class TrendCommand extends VarisetSubcommand {
         if ((year == null) == (from == null)) {
             throw new ParameterException(spec.commandLine(), "give --year, or --from (with --to if not today)");
         }
-        Trend t;
+        if (allGyms && !gyms.isEmpty()) {
+            throw new ParameterException(spec.commandLine(), "give --gym, or --all-gyms, not both");
+        }
+        List<Trend> trends = new ArrayList<>();
         LocalDate today;
         try (Archive archive = openArchive()) {
-            today = new GymCalendar(root().cli().clock()).today(new ArchiveCatalog(archive.connection())
-                    .gym(gym.gym).zone());
+            ArchiveCatalog catalog = new ArchiveCatalog(archive.connection());
+            List<String> names = allGyms ? catalog.gyms().stream().map(GymRecord::name).toList()
+                    : gyms.isEmpty() ? java.util.Collections.singletonList(null) : List.copyOf(new LinkedHashSet<>(gyms));
+            if (names.isEmpty()) {
+                throw new IllegalArgumentException("the archive holds no gym yet; import some sets first");
+            }
+            // One "today" for all: the first gym's (gyms of a chain may lie in several time zones).
+            today = new GymCalendar(root().cli().clock()).today(catalog.gym(names.get(0)).zone());
             LocalDate first = year != null ? LocalDate.of(year, 1, 1) : from.first();
             LocalDate last = year != null ? LocalDate.of(year, 12, 31) : to == null ? today : to.last();
-            t = new TrendReport(archive.connection()).of(gym.gym, first, last, today);
+            TrendReport report = new TrendReport(archive.connection());
+            for (String name : names) {
+                trends.add(report.of(name, first, last, today));
+            }
         }
+        if (trends.size() > 1) {
+            ChainComparison c = ChainComparison.of(trends);
+            pdf.write(today, err(), (options, out) -> TrendPdf.write(c, trends, options, out));
+            switch (format) {
+                case "json" -> out().println(Json.write(TrendJson.of(c, trends)));
+                case "csv" -> out().print(TrendJson.csv(c));
+                default -> out().print(TrendText.of(c, trends));
+            }
+            return ExitCode.OK;
+        }
+        Trend t = trends.get(0);
         pdf.write(today, err(), (options, out) -> TrendPdf.write(t, options, out));
         switch (format) {
             case "json" -> out().println(Json.write(TrendJson.of(t)));

@@ -11,6 +11,7 @@ import org.variset.archive.grade.Discipline;
 import org.variset.reports.audit.Headline;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
+import org.variset.reports.trend.ChainComparison;
 import org.variset.reports.trend.Trend;
 
 /**
@@ -37,6 +38,62 @@ public final class TrendPdf {
             trends(doc, t);
             grades(doc, t);
             setters(doc, t);
+            return Set.copyOf(doc.missingCharacters());
+        }
+    }
+
+    /**
+     * Writes a chain's report: the gyms side by side with their month-end scores on one chart, then each gym's own
+     * sections.
+     *
+     * @return characters no font could print
+     */
+    public static Set<String> write(ChainComparison c, List<Trend> trends, PdfOptions options, OutputStream out) {
+        boolean year = c.from().getDayOfYear() == 1 && c.to().equals(c.from().withDayOfYear(c.from().lengthOfYear()));
+        String title = (year ? "Chain report " + c.from().getYear() : "Chain trend report");
+        try (PdfDoc doc = new PdfDoc(out, options, title, c.rows().size() + " gyms · " + c.from() + " to " + c.to())) {
+            doc.heading("Gyms side by side", false);
+            List<List<String>> rows = new ArrayList<>();
+            for (ChainComparison.Row r : c.rows()) {
+                List<String> row = new ArrayList<>(List.of(r.gym(), String.valueOf(r.routesSet()),
+                        String.valueOf(r.resets()), FigureFormat.of("score", r.meanResetScore()),
+                        String.valueOf(r.routesUp())));
+                ChainComparison.FIGURES.forEach(k -> row.add(Headline.text(k, r.figures().get(k))));
+                row.add(r.wallsOverdue() + "/" + r.walls());
+                row.add(String.valueOf(r.nearRepeats()));
+                rows.add(row);
+            }
+            List<String> header = new ArrayList<>(List.of("gym", "set", "resets", "mean score", "up"));
+            ChainComparison.FIGURES.forEach(k -> header.add(ChainComparison.label(k)));
+            header.add("overdue");
+            header.add("repeats");
+            doc.table(header, rows, new float[] {2.2f, 0.75f, 1.05f, 0.95f, 0.7f, 0.9f, 0.9f, 0.95f, 1.05f,
+                1.15f, 1.05f, 1.35f, 1.35f});
+            doc.paragraph("Score: the composite score at the last month end. Grip sprd: grip-direction spread (sector"
+                    + " entropy). Up share: share of hand grips facing up. Hold types: effective number of hold types. "
+                    + "Moves cov: share of the move vocabulary used. Grade dist: bands from the grade target.",
+                    7.5f, false, Palette.MUTED);
+            doc.paragraph("Set: routes set in the period. Mean score: of its resets. Up: routes up at the last month "
+                    + "end, where the figures are taken. Overdue: walls past their reset cycle of all walls. Each "
+                    + "figure means what it means in the gym's own report; scores and thresholds are heuristics.");
+            Map<String, Map<LocalDate, Double>> score = new LinkedHashMap<>();
+            for (Trend t : trends) {
+                Map<LocalDate, Double> line = score.computeIfAbsent(t.gym(), k -> new LinkedHashMap<>());
+                t.months().stream().filter(p -> p.scope().equals("gym")).forEach(p -> line.put(p.day(),
+                        p.figures().get("score.score")));
+            }
+            doc.paragraph("Month-end score of each gym's routes up (a heuristic, without novelty here)", PdfDoc.BODY,
+                    true, Palette.INK);
+            doc.chart(Charts.lines(doc.fonts(), "score", score), doc.width(), 200);
+            doc.safety();
+            for (Trend t : trends) {
+                doc.heading(t.gym(), true);
+                walls(doc, t);
+                repeats(doc, t);
+                trends(doc, t);
+                grades(doc, t);
+                setters(doc, t);
+            }
             return Set.copyOf(doc.missingCharacters());
         }
     }

@@ -21,10 +21,12 @@ import org.variset.reports.scoring.repetition.RepetitionFigures;
  * @param grades the grades of the routes set in the period, against the target, per discipline
  * @param targetIsExample per discipline, true when the target is the example pyramid
  * @param repeats the period's near-repeats: each reset's routes against its look-back window
+ * @param routesSet routes set in the period
+ * @param meanResetScore the mean composite score of the period's scored resets, or null without any
  */
 public record Trend(String gym, LocalDate from, LocalDate to, LocalDate asOf, List<MonthPoint> months,
         List<WallStatus> walls, Lifetime lifetime, List<SetterProfile> setters, Map<Discipline, GradeFigures> grades,
-        Map<Discipline, Boolean> targetIsExample, List<Repeat> repeats) {
+        Map<Discipline, Boolean> targetIsExample, List<Repeat> repeats, int routesSet, Double meanResetScore) {
 
     /**
      * The standing set of the gym or one wall on a month's last day (or the period's last day).

@@ -62,6 +62,44 @@ public final class TrendJson {
         return o;
     }
 
+    /** Several gyms: the comparison, then each gym's trend as {@link #of(Trend)} writes it. */
+    public static ObjectNode of(ChainComparison c, java.util.List<Trend> trends) {
+        ObjectNode o = MAPPER.createObjectNode().put("from", c.from().toString()).put("to", c.to().toString());
+        ArrayNode rows = o.putArray("comparison");
+        for (ChainComparison.Row r : c.rows()) {
+            ObjectNode x = rows.addObject().put("gym", r.gym()).put("routes_set", r.routesSet())
+                    .put("resets", r.resets()).put("mean_reset_score", r.meanResetScore())
+                    .put("routes_up", r.routesUp());
+            FiguresJson.map(x.putObject("figures"), r.figures());
+            x.put("walls", r.walls()).put("walls_due", r.wallsDue()).put("walls_overdue", r.wallsOverdue())
+                    .put("median_lifetime_days", r.medianLifetimeDays()).put("near_repeats", r.nearRepeats());
+        }
+        ArrayNode gyms = o.putArray("gyms");
+        trends.forEach(t -> gyms.add(of(t)));
+        return o;
+    }
+
+    /** The comparison as CSV: one row per gym (RFC 4180). */
+    public static String csv(ChainComparison c) {
+        StringBuilder b = new StringBuilder("gym,from,to,routes_set,resets,mean_reset_score,routes_up");
+        ChainComparison.FIGURES.forEach(k -> b.append(',').append(k));
+        b.append(",walls,walls_due,walls_overdue,median_lifetime_days,near_repeats\r\n");
+        for (ChainComparison.Row r : c.rows()) {
+            b.append(quote(r.gym())).append(',').append(c.from()).append(',').append(c.to()).append(',')
+                    .append(r.routesSet()).append(',').append(r.resets()).append(',').append(num(r.meanResetScore()))
+                    .append(',').append(r.routesUp());
+            ChainComparison.FIGURES.forEach(k -> b.append(',').append(num(r.figures().get(k))));
+            b.append(',').append(r.walls()).append(',').append(r.wallsDue()).append(',').append(r.wallsOverdue())
+                    .append(',').append(num(r.medianLifetimeDays())).append(',').append(r.nearRepeats())
+                    .append("\r\n");
+        }
+        return b.toString();
+    }
+
+    private static String num(Double v) {
+        return v == null ? "" : v.toString();
+    }
+
     /** The monthly series as CSV: one row per day and scope, one column per headline figure (RFC 4180). */
     public static String csv(Trend t) {
         StringBuilder b = new StringBuilder("day,scope,routes");

@@ -73,7 +73,9 @@ public final class TrendReport {
         }
         return new Trend(gym.name(), from, to, asOf, months(gym, walls, all, from, asOf), status(gym, walls, resets,
                 scores, asOf), TrendMath.lifetime(all, from, to), TrendMath.setters(setInPeriod),
-                SetFigures.of(setInPeriod, endSettings).grades(), example, repeats);
+                SetFigures.of(setInPeriod, endSettings).grades(), example, repeats, setInPeriod.size(),
+                scores.values().stream().flatMap(List::stream).filter(java.util.Objects::nonNull).mapToDouble(Double::doubleValue).average().stream()
+                        .boxed().findFirst().orElse(null));
     }
 
     /** Month-end points up to {@code to} (the period's end, or today when earlier: no point lies ahead). */

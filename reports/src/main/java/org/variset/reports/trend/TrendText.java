@@ -74,6 +74,36 @@ public final class TrendText {
         return b.toString();
     }
 
+    /** Several gyms side by side, then each gym's own trend. */
+    public static String of(ChainComparison c, List<Trend> trends) {
+        StringBuilder b = new StringBuilder();
+        b.append("Gyms compared, ").append(c.from()).append(" to ").append(c.to()).append(" (").append(c.rows().size())
+                .append(" gyms)\n\n");
+        b.append(String.format("  %-24s %6s %6s %6s %6s", "gym", "set", "resets", "mean", "up"));
+        ChainComparison.FIGURES.forEach(k -> b.append(String.format(" %10s", shortLabel(k))));
+        b.append(String.format(" %7s %7s %8s %7s%n", "due", "overdue", "lifetime", "repeats"));
+        for (ChainComparison.Row r : c.rows()) {
+            b.append(String.format("  %-24s %6d %6d %6s %6d", clip(r.gym(), 24), r.routesSet(), r.resets(),
+                    FigureFormat.of("score", r.meanResetScore()), r.routesUp()));
+            ChainComparison.FIGURES.forEach(k -> b.append(String.format(" %10s", Headline.text(k, r.figures()
+                    .get(k)))));
+            b.append(String.format(" %7s %7s %8s %7d%n", r.wallsDue() + "/" + r.walls(), r.wallsOverdue() + "/"
+                    + r.walls(), r.medianLifetimeDays() == null ? FigureFormat.NONE : FigureFormat.round(
+                            r.medianLifetimeDays(), 1), r.nearRepeats()));
+        }
+        b.append("\n  set: routes set in the period; mean: mean score of its resets; up: routes up at the last month "
+                + "end, where the figures are taken; due, overdue: walls of all walls; lifetime: median days up of "
+                + "the routes that came down. Scores and thresholds are heuristics.\n");
+        for (Trend t : trends) {
+            b.append("\n").append("=".repeat(78)).append("\n").append(of(t));
+        }
+        return b.toString();
+    }
+
+    private static String clip(String s, int n) {
+        return s.length() <= n ? s : s.substring(0, n - 1) + "…";
+    }
+
     /** The largest shares: {@code up 62%, right 12%}. */
     static String top(Map<String, Double> shares, int n) {
         if (shares.values().stream().allMatch(v -> v == 0)) {
@@ -85,13 +115,6 @@ public final class TrendText {
     }
 
     private static String shortLabel(String key) {
-        return switch (key) {
-            case "score.score" -> "score";
-            case "grip.sector_entropy" -> "grip sprd";
-            case "grip.up_share" -> "up share";
-            case "holds.hill_n1" -> "hold types";
-            case "moves.coverage" -> "moves cov";
-            default -> "grade dist";
-        };
+        return ChainComparison.label(key);
     }
 }

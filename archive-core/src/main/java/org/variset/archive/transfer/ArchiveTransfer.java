@@ -1,0 +1,235 @@
+package org.variset.archive.transfer;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.ResultSetMetaData;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.BiConsumer;
+import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveException;
+import org.variset.archive.store.ArchiveException.Problem;
+
+/**
+ * Copies every row of an archive into another, empty, archive of the same schema version (an embedded archive into
+ * a shared one on PostgreSQL), then proves the copy: each table's row count and a SHA-256 over its rows, read back
+ * from the target in the copying transaction, must equal the source's, or nothing is committed.
+ *
+ * <p>The change log is not copied: it serves indexes of the source, and every client of the target builds its own
+ * index on first use. The target keeps its own identity. Id sequences are moved past the copied ids.
+ */
+public final class ArchiveTransfer {
+    /** The tables copied, parents before children, each with the columns that order its rows. */
+    static final List<Table> TABLES = List.of(new Table("gym", "id", "gym_seq"), new Table("wall", "id", "wall_seq"),
+            new Table("setter", "id", "setter_seq"), new Table("reset", "id", "reset_seq"),
+            new Table("route", "id", "route_seq"), new Table("route_setter", "route_id, ord", null),
+            new Table("hold_placement", "id", "hold_seq"), new Table("gym_setting", "id", "gym_setting_seq"));
+    private static final int BATCH = 1_000;
+    /** Hibernate's pooled ids take blocks of this many below each sequence value (the migrations' INCREMENT BY). */
+    private static final int ID_BLOCK = 50;
+
+    private ArchiveTransfer() {
+    }
+
+    /**
+     * A table to copy.
+     *
+     * @param name its name
+     * @param order the columns that order its rows (its primary key)
+     * @param sequence the sequence its ids come from, or null
+     */
+    record Table(String name, String order, String sequence) {
+    }
+
+    /**
+     * One table's copy.
+     *
+     * @param table the table
+     * @param rows how many rows (the same on both sides)
+     * @param sha256 the SHA-256 of its rows, in key order (the same on both sides)
+     */
+    public record Copied(String table, long rows, String sha256) {
+    }
+
+    /**
+     * Copies {@code from} into {@code to} in one transaction of {@code to}, verified before it commits.
+     *
+     * @param progress told each table's name and rows once it is copied
+     * @throws ArchiveException when the target is not empty, the schema versions differ, or the copy does not
+     *     verify (then nothing was committed)
+     */
+    public static List<Copied> copy(Archive from, Archive to, BiConsumer<String, Long> progress) {
+        if (from.schemaVersion().version() != to.schemaVersion().version()) {
+            throw new ArchiveException(Problem.DAMAGED, "The archives have different schema versions ("
+                    + from.schemaVersion().version() + " and " + to.schemaVersion().version() + "); open both with "
+                    + "this Variset first");
+        }
+        List<Copied> out = new ArrayList<>();
+        try (Connection target = to.dataSource().getConnection()) {
+            target.setAutoCommit(false);
+            try {
+                refuseUnlessEmpty(target, to.describe());
+                for (Table t : TABLES) {
+                    long rows = copyTable(from.connection(), target, t);
+                    moveSequence(target, t);
+                    Copied source = digest(from.connection(), t);
+                    Copied copied = digest(target, t);
+                    if (source.rows() != rows || !source.equals(copied)) {
+                        throw new ArchiveException(Problem.DAMAGED, "The copy of table " + t.name() + " does not "
+                                + "match its source (source " + source.rows() + " rows, SHA-256 " + source.sha256()
+                                + "; copy " + copied.rows() + " rows, SHA-256 " + copied.sha256() + "). Nothing was "
+                                + "committed to " + to.describe() + ".");
+                    }
+                    out.add(source);
+                    progress.accept(t.name(), rows);
+                }
+                target.commit();
+            } catch (SQLException | RuntimeException e) {
+                target.rollback();
+                throw e;
+            }
+        } catch (SQLException e) {
+            throw new ArchiveException(Problem.DAMAGED, "Copying into " + to.describe() + " failed: " + e.getMessage()
+                    + ". Nothing was committed.", e);
+        }
+        return out;
+    }
+
+    /** Each table's row count and SHA-256, as {@link #copy} computes them (to check a copy again later). */
+    public static List<Copied> digests(Connection c) throws SQLException {
+        List<Copied> out = new ArrayList<>();
+        for (Table t : TABLES) {
+            out.add(digest(c, t));
+        }
+        return out;
+    }
+
+    private static void refuseUnlessEmpty(Connection c, String where) throws SQLException {
+        Map<String, Long> filled = new LinkedHashMap<>();
+        for (Table t : TABLES) {
+            long n = count(c, t.name());
+            if (n > 0) {
+                filled.put(t.name(), n);
+            }
+        }
+        if (!filled.isEmpty()) {
+            throw new ArchiveException(Problem.EXISTS, "The archive at " + where + " is not empty (" + filled
+                    .toString().replaceAll("[{}]", "") + "); migrate-to copies into an empty archive only. Use a new "
+                    + "database or schema.");
+        }
+    }
+
+    private static long count(Connection c, String table) throws SQLException {
+        try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT COUNT(*) FROM " + table)) {
+            rs.next();
+            return rs.getLong(1);
+        }
+    }
+
+    private static long copyTable(Connection source, Connection target, Table t) throws SQLException {
+        long rows = 0;
+        try (Statement s = source.createStatement()) {
+            s.setFetchSize(BATCH);
+            try (ResultSet rs = s.executeQuery("SELECT * FROM " + t.name() + " ORDER BY " + t.order())) {
+                ResultSetMetaData md = rs.getMetaData();
+                int n = md.getColumnCount();
+                List<String> columns = new ArrayList<>();
+                for (int i = 1; i <= n; i++) {
+                    columns.add(md.getColumnLabel(i).toLowerCase(java.util.Locale.ROOT));
+                }
+                String insert = "INSERT INTO " + t.name() + " (" + String.join(", ", columns) + ") VALUES ("
+                        + String.join(", ", java.util.Collections.nCopies(n, "?")) + ")";
+                try (PreparedStatement p = target.prepareStatement(insert)) {
+                    while (rs.next()) {
+                        for (int i = 1; i <= n; i++) {
+                            p.setObject(i, rs.getObject(i));
+                        }
+                        p.addBatch();
+                        if (++rows % BATCH == 0) {
+                            p.executeBatch();
+                        }
+                    }
+                    p.executeBatch();
+                }
+            }
+        }
+        return rows;
+    }
+
+    /** Sets the sequence so that every id Hibernate or the bulk writer draws next is above the copied ones. */
+    private static void moveSequence(Connection target, Table t) throws SQLException {
+        if (t.sequence() == null) {
+            return;
+        }
+        long max;
+        try (Statement s = target.createStatement(); ResultSet rs = s.executeQuery("SELECT COALESCE(MAX(id), 0) FROM "
+                + t.name())) {
+            rs.next();
+            max = rs.getLong(1);
+        }
+        try (Statement s = target.createStatement()) {
+            s.execute("ALTER SEQUENCE " + t.sequence() + " RESTART WITH " + (max + ID_BLOCK + 1));
+        }
+    }
+
+    /**
+     * A table's row count and the SHA-256 of its rows in key order, each row as its columns' values in a form that
+     * does not depend on the database: numbers as Java prints them, dates as ISO dates, null as a mark of its own.
+     */
+    static Copied digest(Connection c, Table t) throws SQLException {
+        MessageDigest sha = sha256();
+        long rows = 0;
+        try (Statement s = c.createStatement()) {
+            s.setFetchSize(BATCH);
+            try (ResultSet rs = s.executeQuery("SELECT * FROM " + t.name() + " ORDER BY " + t.order())) {
+                int n = rs.getMetaData().getColumnCount();
+                List<String> names = new ArrayList<>();
+                for (int i = 1; i <= n; i++) {
+                    names.add(rs.getMetaData().getColumnLabel(i).toLowerCase(java.util.Locale.ROOT));
+                }
+                List<Integer> byName = new ArrayList<>();
+                names.stream().sorted().forEach(name -> byName.add(names.indexOf(name) + 1));
+                while (rs.next()) {
+                    rows++;
+                    StringBuilder row = new StringBuilder();
+                    for (int i : byName) {
+                        row.append(text(rs.getObject(i))).append('\u001f');
+                    }
+                    row.append('\u001e');
+                    sha.update(row.toString().getBytes(StandardCharsets.UTF_8));
+                }
+            }
+        }
+        return new Copied(t.name(), rows, HexFormat.of().formatHex(sha.digest()));
+    }
+
+    private static String text(Object v) {
+        if (v == null) {
+            return "\u0000";
+        }
+        if (v instanceof java.sql.Date d) {
+            return d.toLocalDate().toString();
+        }
+        if (v instanceof Number n && !(v instanceof Double || v instanceof Float)) {
+            return Long.toString(n.longValue());
+        }
+        return v.toString();
+    }
+
+    private static MessageDigest sha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is missing from this Java", e);
+        }
+    }
+}
