@@ -40,6 +40,8 @@ public final class Archive implements AutoCloseable {
      * be the same in every Variset ("VARI" in ASCII).
      */
     private static final long WRITER_LOCK = 0x5641_5249L;
+    /** The oldest PostgreSQL a shared archive runs on: {@code pg_current_xact_id()} came in version 13. */
+    static final int MIN_POSTGRESQL = 13;
 
     private final Path dir;
     private final ServerAddress server;
@@ -176,6 +178,12 @@ public final class Archive implements AutoCloseable {
                     + "(PGPASSWORD or ~/.pgpass).", e);
         }
         try {
+            int major = probe.getMetaData().getDatabaseMajorVersion();
+            if (major < MIN_POSTGRESQL) {
+                throw new ArchiveException(Problem.DAMAGED, "The server at " + address.shown() + " runs PostgreSQL "
+                        + major + "; a shared archive needs PostgreSQL " + MIN_POSTGRESQL + " or later (its change log "
+                        + "records 64-bit transaction ids, pg_current_xact_id).");
+            }
             if (!create && SchemaVersion.read(probe).version() == 0) {
                 throw new ArchiveException(Problem.MISSING, "The database at " + address.shown() + " holds no "
                         + "Variset archive. Create one with: variset --db " + address.shown() + " init");

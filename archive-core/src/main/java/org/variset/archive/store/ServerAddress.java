@@ -98,11 +98,15 @@ public record ServerAddress(String host, int port, String database, String schem
         return new ServerAddress(host, port, database, schema, user, password);
     }
 
-    /** The JDBC URL, without user or password (they are given to the driver apart). */
+    /**
+     * The JDBC URL, without user or password (they are given to the driver apart). {@code reWriteBatchedInserts}
+     * lets the driver send a batch of inserts as multi-row statements (pgJDBC documentation, "Connection
+     * Parameters"), which is how the bulk writer sends holds.
+     */
     public String jdbcUrl() {
         return "jdbc:postgresql://" + hostForUrl() + ":" + port + "/" + database
                 + (schema == null ? "" : "?currentSchema=" + schema) + (schema == null ? "?" : "&")
-                + "ApplicationName=variset";
+                + "ApplicationName=variset&reWriteBatchedInserts=true";
     }
 
     /** The address for messages: no password, ever. */

@@ -35,7 +35,7 @@ class ServerAddressTest {
         assertThat(s.port()).isEqualTo(6543);
         assertThat(s.schema()).isEqualTo("north");
         assertThat(s.jdbcUrl()).isEqualTo("jdbc:postgresql://db.example:6543/chain?currentSchema=north"
-                + "&ApplicationName=variset");
+                + "&ApplicationName=variset&reWriteBatchedInserts=true");
     }
 
     @Test
