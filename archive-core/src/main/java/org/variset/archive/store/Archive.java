@@ -174,7 +174,7 @@ public final class Archive implements AutoCloseable {
             probe = ds.getConnection();
         } catch (SQLException e) {
             throw new ArchiveException(Problem.MISSING, "Cannot connect to the archive at " + address.shown() + ": "
-                    + e.getMessage() + ". Check the address, that the server is running, and the user's password "
+                    + String.valueOf(e.getMessage()).replaceAll("\\.+$", "") + ". Check the address, that the server is running, and the user's password "
                     + "(PGPASSWORD or ~/.pgpass).", e);
         }
         try {
@@ -186,7 +186,7 @@ public final class Archive implements AutoCloseable {
             }
             if (!create && SchemaVersion.read(probe).version() == 0) {
                 throw new ArchiveException(Problem.MISSING, "The database at " + address.shown() + " holds no "
-                        + "Variset archive. Create one with: variset --db " + address.shown() + " init");
+                        + "Variset archive. Create one with: variset --db '" + address.shown() + "' init");
             }
         } catch (SQLException e) {
             closeQuietly(probe);

@@ -89,7 +89,7 @@ final class MigrateToCommand extends VarisetSubcommand {
         for (ArchiveTransfer.Copied c : copied) {
             out().printf("  %-15s %,10d rows  %s%n", c.table(), c.rows(), c.sha256().substring(0, 16));
         }
-        out().println("Use it with: variset --db " + target.shown() + " info");
+        out().println("Use it with: variset --db '" + target.shown() + "' info");
         return ExitCode.OK;
     }
 }
