@@ -129,7 +129,7 @@ class SharedArchivePostgresTest {
     }
 
     /** Copies the three files keeping the header and the rows of one gym (its name is the first column). */
-    private static Path splitByGym(Path from, String gym, Path to) throws IOException {
+    static Path splitByGym(Path from, String gym, Path to) throws IOException {
         Files.createDirectories(to);
         for (String name : List.of("walls.csv", "routes.csv", "holds.csv")) {
             List<String> lines = Files.readAllLines(from.resolve(name));

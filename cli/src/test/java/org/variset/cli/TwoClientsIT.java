@@ -44,7 +44,7 @@ class TwoClientsIT {
                 LocalDate.of(2026, 6, 30), false), all);
         List<Path> gyms = new ArrayList<>();
         for (int g = 1; g <= 3; g++) {
-            gyms.add(split(all, String.format("Synthetic Gym %03d", g), dir.resolve("gym-" + g)));
+            gyms.add(SharedArchivePostgresTest.splitByGym(all, String.format("Synthetic Gym %03d", g), dir.resolve("gym-" + g)));
         }
         String url = TestArchives.url(TestArchives.newSchema());
         assertThat(ChildProcess.run(dir.resolve("init.log"), client("a"), "--db", url, "init")).isZero();
@@ -83,16 +83,5 @@ class TwoClientsIT {
     /** The JSON document in a log that may also hold notices on standard error. */
     private static String jsonPart(String log) {
         return log.substring(log.indexOf('{'), log.lastIndexOf('}') + 1);
-    }
-
-    private static Path split(Path from, String gym, Path to) throws java.io.IOException {
-        Files.createDirectories(to);
-        for (String name : List.of("walls.csv", "routes.csv", "holds.csv")) {
-            List<String> lines = Files.readAllLines(from.resolve(name));
-            List<String> kept = new ArrayList<>(List.of(lines.get(0)));
-            lines.stream().skip(1).filter(l -> l.startsWith(gym + ",")).forEach(kept::add);
-            Files.write(to.resolve(name), kept);
-        }
-        return to;
     }
 }

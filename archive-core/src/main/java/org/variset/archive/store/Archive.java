@@ -336,7 +336,16 @@ public final class Archive implements AutoCloseable {
      */
     public void takeWriterTurn(Session s) {
         if (server != null) {
-            s.createNativeQuery("SELECT pg_advisory_xact_lock(" + WRITER_LOCK + ")", Object.class).getSingleResult();
+            s.doWork(this::takeWriterTurn);
+        }
+    }
+
+    /** As {@link #takeWriterTurn(Session)}, for plain JDBC work in a transaction of one of this archive's connections. */
+    public void takeWriterTurn(Connection c) throws SQLException {
+        if (server != null) {
+            try (java.sql.Statement st = c.createStatement()) {
+                st.execute("SELECT pg_advisory_xact_lock(" + WRITER_LOCK + ")");
+            }
         }
     }
 

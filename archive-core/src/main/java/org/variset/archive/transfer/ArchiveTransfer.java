@@ -77,6 +77,7 @@ public final class ArchiveTransfer {
         try (Connection target = to.dataSource().getConnection()) {
             target.setAutoCommit(false);
             try {
+                to.takeWriterTurn(target);
                 refuseUnlessEmpty(target, to.describe());
                 for (Table t : TABLES) {
                     long rows = copyTable(from.connection(), target, t);
