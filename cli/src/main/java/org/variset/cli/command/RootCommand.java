@@ -42,8 +42,8 @@ public final class RootCommand implements Runnable {
     private final VarisetCli cli;
 
     @Option(names = "--archive", paramLabel = "DIR", scope = ScopeType.INHERIT,
-            description = "The archive folder (default: $VARISET_ARCHIVE, else $XDG_DATA_HOME/variset, "
-                    + "else ~/.local/share/variset).")
+            description = "The archive folder (default: $VARISET_ARCHIVE, else 'archive' in the configuration "
+                    + "file, else $XDG_DATA_HOME/variset, else ~/.local/share/variset).")
     Path archive;
 
     @Option(names = "--db", paramLabel = "URL", scope = ScopeType.INHERIT,
