@@ -31,12 +31,10 @@ class ChainTrendTest {
     static Path home;
     private Path files;
 
+    private TestArchive archive;
+
     private CliRun run(String... args) {
-        String[] all = new String[args.length + 2];
-        all[0] = "--archive";
-        all[1] = home.resolve("archive").toString();
-        System.arraycopy(args, 0, all, 2, args.length);
-        return CliRun.run(home, all);
+        return archive.run(home, args);
     }
 
     private JsonNode json(String... args) throws IOException {
@@ -51,6 +49,7 @@ class ChainTrendTest {
 
     @BeforeAll
     void importTwoGyms() {
+        archive = TestArchive.fresh(home, "archive");
         files = home.resolve("files");
         SampleGenerator.write(new SampleGenerator.Options(2, 1, 8, LocalDate.of(2026, 6, 30), false), files);
         run("init").exits(ExitCode.OK);

@@ -6,8 +6,8 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.ArrayDeque;
 import java.util.HashMap;
-import java.util.Locale;
 import java.util.Map;
+import org.variset.archive.store.ChangeLog;
 
 /**
  * Ids from the archive's sequences, handed out as Hibernate's pooled optimizer hands them out (every sequence steps
@@ -30,8 +30,7 @@ public final class IdBlocks implements AutoCloseable {
     /** Ids drawn through a connection (in its transaction). */
     public IdBlocks(Connection connection) throws SQLException {
         this.connection = connection;
-        this.postgres = connection.getMetaData().getDatabaseProductName().toLowerCase(Locale.ROOT)
-                .contains("postgres");
+        this.postgres = ChangeLog.isShared(connection);
     }
 
     /** The next id of a sequence ({@code route_seq}, {@code hold_seq}, ...). */

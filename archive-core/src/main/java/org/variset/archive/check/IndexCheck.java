@@ -12,23 +12,13 @@ final class IndexCheck {
     private IndexCheck() {
     }
 
-    private static boolean shared(Connection c) {
-        try {
-            return ChangeLog.isShared(c);
-        } catch (java.sql.SQLException e) {
-            throw new org.variset.archive.store.ArchiveException(
-                    org.variset.archive.store.ArchiveException.Problem.DAMAGED, "Cannot read the archive: "
-                            + e.getMessage(), e);
-        }
-    }
-
     static void add(SearchIndex index, Connection c, long routes, long dbStamp, List<CheckReport.Item> items) {
         SearchIndex.Health h = index.health();
         items.add(new CheckReport.Item("index", "Lucene CheckIndex", h.clean(), h.detail()));
         if (!h.clean()) {
             return;
         }
-        if (shared(c)) {
+        if (ChangeLog.isShared(c)) {
             // A shared archive's stamps are transaction ids (ChangeLog): the index is behind when changes made at or
             // after its stamp are visible (some may already be applied, when a transaction was running as it synced).
             int unseen = h.stamp() < 0 ? -1 : ChangeLog.changedSince(c, h.stamp(), dbStamp).size();

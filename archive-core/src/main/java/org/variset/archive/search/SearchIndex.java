@@ -128,14 +128,15 @@ public final class SearchIndex implements AutoCloseable {
     /** Brings the index up to date with the database: nothing, the changes it has not seen, or a rebuild. */
     public IndexSync sync(Connection c, IndexProgress progress) {
         long db = ChangeLog.stamp(c);
-        boolean shared = isShared(c);
+        boolean shared = ChangeLog.isShared(c);
         Map<String, String> data = commitData();
         long idx = data.isEmpty() ? -1 : Long.parseLong(data.get(STAMP_KEY));
         if (idx < 0) {
             return rebuild(c, progress, exists() ? "it was unreadable or from another version of Variset"
                     : "there was none yet");
         }
-        if (!SchemaVersion.identity(c).equals(data.get(ARCHIVE_KEY))) {
+        String identity = SchemaVersion.identity(c);
+        if (!identity.equals(data.get(ARCHIVE_KEY))) {
             return rebuild(c, progress, "it was built from another archive");
         }
         if (!shared && idx == db) {
@@ -144,16 +145,7 @@ public final class SearchIndex implements AutoCloseable {
         if (!shared && idx > db) {
             return rebuild(c, progress, "it was ahead of the archive (was the archive restored from a backup?)");
         }
-        return catchUp(c, idx, db, progress);
-    }
-
-    private static boolean isShared(Connection c) {
-        try {
-            return ChangeLog.isShared(c);
-        } catch (java.sql.SQLException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the archive: " + e.getMessage(),
-                    e);
-        }
+        return catchUp(c, idx, db, identity, progress);
     }
 
     /** Builds the index again from every route of the database. */
@@ -183,7 +175,7 @@ public final class SearchIndex implements AutoCloseable {
         return new IndexSync(IndexSync.Action.REBUILT, done[0], reason, db);
     }
 
-    private IndexSync catchUp(Connection c, long from, long to, IndexProgress progress) {
+    private IndexSync catchUp(Connection c, long from, long to, String identity, IndexProgress progress) {
         List<Long> changed = ChangeLog.changedSince(c, from, to);
         if (changed.isEmpty()) {
             // Nothing to apply. On a shared archive the xmin moves with every transaction of every client; keeping
@@ -207,7 +199,7 @@ public final class SearchIndex implements AutoCloseable {
                 }
                 progress.indexed(Math.min(changed.size(), i + CHUNK), changed.size());
             }
-            commit(w, to, SchemaVersion.identity(c));
+            commit(w, to, identity);
         } catch (IOException e) {
             throw failure(e);
         }

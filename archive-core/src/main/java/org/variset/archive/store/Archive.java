@@ -173,9 +173,10 @@ public final class Archive implements AutoCloseable {
         try {
             probe = ds.getConnection();
         } catch (SQLException e) {
+            String why = String.valueOf(e.getMessage()).replaceAll("\\.+$", "");
             throw new ArchiveException(Problem.MISSING, "Cannot connect to the archive at " + address.shown() + ": "
-                    + String.valueOf(e.getMessage()).replaceAll("\\.+$", "") + ". Check the address, that the server is running, and the user's password "
-                    + "(PGPASSWORD or ~/.pgpass).", e);
+                    + why + ". Check the address, that the server is running, and the user's password (PGPASSWORD "
+                    + "or ~/.pgpass).", e);
         }
         try {
             int major = probe.getMetaData().getDatabaseMajorVersion();

@@ -68,8 +68,13 @@ public final class ChangeLog {
     }
 
     /** True when the connection is to a shared archive (PostgreSQL), whose stamps are transaction ids. */
-    public static boolean isShared(Connection c) throws SQLException {
-        return c.getMetaData().getDatabaseProductName().toLowerCase(Locale.ROOT).contains("postgres");
+    public static boolean isShared(Connection c) {
+        try {
+            return c.getMetaData().getDatabaseProductName().toLowerCase(Locale.ROOT).contains("postgres");
+        } catch (SQLException e) {
+            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the archive: " + e.getMessage(),
+                    e);
+        }
     }
 
     /**

@@ -61,11 +61,13 @@ public final class ArchiveTransfer {
     }
 
     /**
-     * Copies {@code from} into {@code to} in one transaction of {@code to}, verified before it commits.
+     * Copies {@code from} into {@code to} in one transaction of {@code to}, verified before it commits (the source's
+     * digest is taken from the rows as they are copied, the copy's read back in the transaction) and once more after,
+     * over a new connection.
      *
      * @param progress told each table's name and rows once it is copied
      * @throws ArchiveException when the target is not empty, the schema versions differ, or the copy does not
-     *     verify (then nothing was committed)
+     *     verify (before the commit: nothing was committed)
      */
     public static List<Copied> copy(Archive from, Archive to, BiConsumer<String, Long> progress) {
         if (from.schemaVersion().version() != to.schemaVersion().version()) {
@@ -80,18 +82,17 @@ public final class ArchiveTransfer {
                 to.takeWriterTurn(target);
                 refuseUnlessEmpty(target, to.describe());
                 for (Table t : TABLES) {
-                    long rows = copyTable(from.connection(), target, t);
+                    Copied source = copyTable(from.connection(), target, t);
                     moveSequence(target, t);
-                    Copied source = digest(from.connection(), t);
                     Copied copied = digest(target, t);
-                    if (source.rows() != rows || !source.equals(copied)) {
+                    if (!source.equals(copied)) {
                         throw new ArchiveException(Problem.DAMAGED, "The copy of table " + t.name() + " does not "
                                 + "match its source (source " + source.rows() + " rows, SHA-256 " + source.sha256()
                                 + "; copy " + copied.rows() + " rows, SHA-256 " + copied.sha256() + "). Nothing was "
                                 + "committed to " + to.describe() + ".");
                     }
                     out.add(source);
-                    progress.accept(t.name(), rows);
+                    progress.accept(t.name(), source.rows());
                 }
                 target.commit();
             } catch (SQLException | RuntimeException e) {
@@ -102,16 +103,25 @@ public final class ArchiveTransfer {
             throw new ArchiveException(Problem.DAMAGED, "Copying into " + to.describe() + " failed: " + e.getMessage()
                     + ". Nothing was committed.", e);
         }
+        checkAgain(to, out);
         return out;
     }
 
-    /** Each table's row count and SHA-256, as {@link #copy} computes them (to check a copy again later). */
-    public static List<Copied> digests(Connection c) throws SQLException {
-        List<Copied> out = new ArrayList<>();
-        for (Table t : TABLES) {
-            out.add(digest(c, t));
+    /** Reads every table of the committed copy again over a new connection and compares it with the source's. */
+    private static void checkAgain(Archive to, List<Copied> source) {
+        List<Copied> again = new ArrayList<>();
+        try (Connection c = to.dataSource().getConnection()) {
+            for (Table t : TABLES) {
+                again.add(digest(c, t));
+            }
+        } catch (SQLException e) {
+            throw new ArchiveException(Problem.DAMAGED, "Cannot read back " + to.describe() + ": " + e.getMessage(), e);
         }
-        return out;
+        if (!again.equals(source)) {
+            throw new ArchiveException(Problem.DAMAGED, "The archive at " + to.describe() + " was committed but does "
+                    + "not read back as the embedded archive: " + again + " against " + source + ". Drop it and run "
+                    + "migrate-to again.");
+        }
     }
 
     private static void refuseUnlessEmpty(Connection c, String where) throws SQLException {
@@ -136,26 +146,27 @@ public final class ArchiveTransfer {
         }
     }
 
-    private static long copyTable(Connection source, Connection target, Table t) throws SQLException {
-        long rows = 0;
+    /** Copies a table's rows in key order, and returns the row count and SHA-256 of what it copied. */
+    private static Copied copyTable(Connection source, Connection target, Table t) throws SQLException {
+        RowDigest digest = new RowDigest();
         try (Statement s = source.createStatement()) {
             s.setFetchSize(BATCH);
             try (ResultSet rs = s.executeQuery("SELECT * FROM " + t.name() + " ORDER BY " + t.order())) {
-                ResultSetMetaData md = rs.getMetaData();
-                int n = md.getColumnCount();
-                List<String> columns = new ArrayList<>();
-                for (int i = 1; i <= n; i++) {
-                    columns.add(md.getColumnLabel(i).toLowerCase(java.util.Locale.ROOT));
-                }
+                List<String> columns = columns(rs.getMetaData());
+                int n = columns.size();
+                int[] byName = byName(columns);
                 String insert = "INSERT INTO " + t.name() + " (" + String.join(", ", columns) + ") VALUES ("
                         + String.join(", ", java.util.Collections.nCopies(n, "?")) + ")";
                 try (PreparedStatement p = target.prepareStatement(insert)) {
+                    Object[] row = new Object[n];
                     while (rs.next()) {
                         for (int i = 1; i <= n; i++) {
-                            p.setObject(i, rs.getObject(i));
+                            row[i - 1] = rs.getObject(i);
+                            p.setObject(i, row[i - 1]);
                         }
+                        digest.add(row, byName);
                         p.addBatch();
-                        if (++rows % BATCH == 0) {
+                        if (digest.rows % BATCH == 0) {
                             p.executeBatch();
                         }
                     }
@@ -163,7 +174,20 @@ public final class ArchiveTransfer {
                 }
             }
         }
-        return rows;
+        return digest.of(t);
+    }
+
+    private static List<String> columns(ResultSetMetaData md) throws SQLException {
+        List<String> out = new ArrayList<>();
+        for (int i = 1; i <= md.getColumnCount(); i++) {
+            out.add(md.getColumnLabel(i).toLowerCase(java.util.Locale.ROOT));
+        }
+        return out;
+    }
+
+    /** The positions (from 0) of the columns in name order, so that column order in the table does not count. */
+    private static int[] byName(List<String> columns) {
+        return columns.stream().sorted().mapToInt(columns::indexOf).toArray();
     }
 
     /** Sets the sequence so that every id Hibernate or the bulk writer draws next is above the copied ones. */
@@ -187,30 +211,43 @@ public final class ArchiveTransfer {
      * does not depend on the database: numbers as Java prints them, dates as ISO dates, null as a mark of its own.
      */
     static Copied digest(Connection c, Table t) throws SQLException {
-        MessageDigest sha = sha256();
-        long rows = 0;
+        RowDigest digest = new RowDigest();
         try (Statement s = c.createStatement()) {
             s.setFetchSize(BATCH);
             try (ResultSet rs = s.executeQuery("SELECT * FROM " + t.name() + " ORDER BY " + t.order())) {
                 int n = rs.getMetaData().getColumnCount();
-                List<String> names = new ArrayList<>();
-                for (int i = 1; i <= n; i++) {
-                    names.add(rs.getMetaData().getColumnLabel(i).toLowerCase(java.util.Locale.ROOT));
-                }
-                List<Integer> byName = new ArrayList<>();
-                names.stream().sorted().forEach(name -> byName.add(names.indexOf(name) + 1));
+                int[] byName = byName(columns(rs.getMetaData()));
+                Object[] row = new Object[n];
                 while (rs.next()) {
-                    rows++;
-                    StringBuilder row = new StringBuilder();
-                    for (int i : byName) {
-                        row.append(text(rs.getObject(i))).append('\u001f');
+                    for (int i = 1; i <= n; i++) {
+                        row[i - 1] = rs.getObject(i);
                     }
-                    row.append('\u001e');
-                    sha.update(row.toString().getBytes(StandardCharsets.UTF_8));
+                    digest.add(row, byName);
                 }
             }
         }
-        return new Copied(t.name(), rows, HexFormat.of().formatHex(sha.digest()));
+        return digest.of(t);
+    }
+
+    /** A running SHA-256 over rows, each as its values in column-name order, separated by control characters. */
+    private static final class RowDigest {
+        private final MessageDigest sha = sha256();
+        private final StringBuilder line = new StringBuilder();
+        private long rows;
+
+        void add(Object[] row, int[] byName) {
+            rows++;
+            line.setLength(0);
+            for (int i : byName) {
+                line.append(text(row[i])).append('\u001f');
+            }
+            line.append('\u001e');
+            sha.update(line.toString().getBytes(StandardCharsets.UTF_8));
+        }
+
+        Copied of(Table t) {
+            return new Copied(t.name(), rows, HexFormat.of().formatHex(sha.digest()));
+        }
     }
 
     private static String text(Object v) {

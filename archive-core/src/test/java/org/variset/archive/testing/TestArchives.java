@@ -112,7 +112,7 @@ public final class TestArchives {
      * {@code REFERENTIAL_INTEGRITY}, PostgreSQL's {@code session_replication_role} (which needs a superuser).
      */
     public static void withoutForeignKeys(Connection c, String... statements) throws SQLException {
-        boolean pg = c.getMetaData().getDatabaseProductName().toLowerCase(java.util.Locale.ROOT).contains("postgres");
+        boolean pg = org.variset.archive.store.ChangeLog.isShared(c);
         try (Statement s = c.createStatement()) {
             s.execute(pg ? "SET session_replication_role = replica" : "SET REFERENTIAL_INTEGRITY FALSE");
             try {

@@ -2,11 +2,8 @@ package org.variset.cli.command;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.sql.Connection;
-import java.sql.SQLException;
 import java.util.List;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveException;
 import org.variset.archive.store.ArchiveLocation;
 import org.variset.archive.store.ArchiveLock;
 import org.variset.archive.transfer.ArchiveTransfer;
@@ -56,17 +53,6 @@ final class MigrateToCommand extends VarisetSubcommand {
                     err().flush();
                 }
             });
-            try (Connection c = to.dataSource().getConnection()) {
-                List<ArchiveTransfer.Copied> again = ArchiveTransfer.digests(c);
-                if (!again.equals(copied)) {
-                    throw new ArchiveException(ArchiveException.Problem.DAMAGED, "The archive at " + to.describe()
-                            + " was committed but does not read back as the embedded archive: " + again + " against "
-                            + copied + ". Drop it and run migrate-to again.");
-                }
-            } catch (SQLException e) {
-                throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read back " + to.describe()
-                        + ": " + e.getMessage(), e);
-            }
         }
         double seconds = (System.nanoTime() - start) / 1e9;
         if (format.json()) {

@@ -70,9 +70,14 @@ public final class RootCommand implements Runnable {
         return cli;
     }
 
-    /** Where the archive lives for this run. */
+    private ArchiveLocation location;
+
+    /** Where the archive lives for this run (resolved once: a server address reads the password file). */
     ArchiveLocation location() {
-        return ArchiveLocation.resolve(archive, db, cli.env(), cli.home());
+        if (location == null) {
+            location = ArchiveLocation.resolve(archive, db, cli.env(), cli.home());
+        }
+        return location;
     }
 
     @Override
