@@ -19,7 +19,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Audit, plan and trend of the invented gym Fernhollow Climbing (test resources {@code fernhollow/}), each figure
  * checked against {@code expected.json}, computed from the same files by {@code make-expected.py} with Python and
- * SciPy 1.17.1 straight from metrics.md (the command is in that folder's README). Tolerance 1e-9 absolute.
+ * SciPy 1.17.1 straight from docs/spec/metrics.md (the command is in that folder's README). Tolerance 1e-9 absolute.
  */
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
 class AuditPlanTrendTest {

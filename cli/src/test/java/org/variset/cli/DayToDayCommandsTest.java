@@ -17,7 +17,7 @@ class DayToDayCommandsTest {
     private String archive;
 
     private static Path example(String name) {
-        return Path.of("../import/src/test/resources/spec-examples", name);
+        return Path.of("../docs/spec/examples", name);
     }
 
     private CliRun run(String... args) {

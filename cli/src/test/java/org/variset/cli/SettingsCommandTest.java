@@ -40,7 +40,7 @@ class SettingsCommandTest {
         String out = run("settings").exits(ExitCode.OK).out();
         assertThat(out).contains("Settings of Fernhollow Climbing in effect on 2026-12-02")
                 .contains("target (boulder)").contains("VB=1 V0=2 V1=3 V2=4 V3=5 V4=6 V5=5 V6=4 V7=3 V8=1 V9=1")
-                .contains("lookback_days").contains("365  [default (metrics.md)]")
+                .contains("lookback_days").contains("365  [default (docs/spec/metrics.md)]")
                 .contains("cycle_days (wall Arch)   28  [walls file]");
     }
 

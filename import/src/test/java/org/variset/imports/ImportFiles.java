@@ -33,8 +33,8 @@ public final class ImportFiles {
         }
     }
 
-    /** One of the spec's example files, copied into {@code src/test/resources/spec-examples}. */
+    /** One of the spec's example files (docs/spec/examples in the repository). */
     public static Path specExample(String name) {
-        return Path.of("src/test/resources/spec-examples", name);
+        return Path.of("../docs/spec/examples", name);
     }
 }

@@ -20,7 +20,7 @@ import org.variset.imports.load.ArchiveImporter;
 import org.variset.imports.load.ImportOptions;
 import org.variset.imports.load.ImportProgress;
 
-/** Each validation case of interchange.md and the import issue: the message form is file:line: column: why. */
+/** Each validation case of docs/spec/interchange.md and the import issue: the message form is file:line: column: why. */
 class ImportValidationTest {
     @TempDir
     Path dir;

@@ -93,7 +93,7 @@ class WorkbookAndJsonImportTest {
         assertThat(seven.setOn()).isEqualTo(LocalDate.of(2026, 3, 2));
         assertThat(seven.angleDeg()).isEqualTo(-15.0);
         HoldPlacement hold = seven.holds().get(0);
-        // interchange.md: a clock position H:MM is 30 x (H mod 12) + 0.5 x MM degrees; 4:30 is 135.
+        // docs/spec/interchange.md: a clock position H:MM is 30 x (H mod 12) + 0.5 x MM degrees; 4:30 is 135.
         assertThat(hold.grips()).containsExactly(135.0);
         assertThat(hold.xM()).isEqualTo(1.25);
         assertThat(hold.seq()).isEqualTo(1);

@@ -4,7 +4,7 @@ import java.util.Objects;
 
 /**
  * One band of grades: a half-open interval [lo, hi) on the IRCRA axis. A value on an edge belongs to the
- * upper band (grades.md, "Default bands").
+ * upper band (docs/spec/grades.md, "Default bands").
  *
  * @param label the band's name ({@code V3}, {@code 6b+}, {@code <4})
  * @param lo the lower edge, included; null for a band open below

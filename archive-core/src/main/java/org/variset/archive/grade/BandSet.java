@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * An ordered list of grade bands for one discipline. The defaults are those of grades.md; each gym can
+ * An ordered list of grade bands for one discipline. The defaults are those of docs/spec/grades.md; each gym can
  * replace them.
  */
 public final class BandSet {
@@ -35,7 +35,7 @@ public final class BandSet {
         this.bands = List.copyOf(bands);
     }
 
-    /** The default bands of a discipline (grades.md). */
+    /** The default bands of a discipline (docs/spec/grades.md). */
     public static BandSet defaults(Discipline discipline) {
         return discipline == Discipline.BOULDER ? BOULDER : ROPE;
     }
@@ -60,7 +60,7 @@ public final class BandSet {
         return labels().indexOf(label);
     }
 
-    /** Boulders: one band per V grade, edges midway between neighbouring grades' level ranges (grades.md). */
+    /** Boulders: one band per V grade, edges midway between neighbouring grades' level ranges (docs/spec/grades.md). */
     private static BandSet boulderDefaults() {
         String[] labels = {"VB", "V0", "V1", "V2", "V3", "V4", "V5", "V6", "V7", "V8", "V9", "V10", "V11", "V12",
             "V13", "V14", "V15", "V16"};

@@ -7,7 +7,7 @@ import java.util.Set;
 
 /**
  * Converts grades between scales through the IRCRA table. A grade that spans several rows converts to every
- * grade of the target scale on those rows (grades.md), so {@code V2} gives Font {@code 5+, 6A, 6A+}.
+ * grade of the target scale on those rows (docs/spec/grades.md), so {@code V2} gives Font {@code 5+, 6A, 6A+}.
  */
 public final class GradeConverter {
 

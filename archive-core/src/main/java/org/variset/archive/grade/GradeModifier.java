@@ -2,7 +2,7 @@ package org.variset.archive.grade;
 
 /**
  * A {@code +} or {@code -} written after a grade that the table does not list for that grade ({@code V4+}).
- * The grade keeps its table value; the modifier is kept as a flag ("hard V4", grades.md).
+ * The grade keeps its table value; the modifier is kept as a flag ("hard V4", docs/spec/grades.md).
  */
 public enum GradeModifier {
     /** No unlisted modifier. */

@@ -8,7 +8,7 @@ import java.util.regex.Pattern;
  * How each scale is written: reads one grade (no slash) of one scale and places it on the axis.
  *
  * <p>Every scale has an ordinal, a whole number that grows by one per grade step, so that grades above the
- * table can extend the axis by one level per step (grades.md, "Grades beyond the table").
+ * table can extend the axis by one level per step (docs/spec/grades.md, "Grades beyond the table").
  */
 final class GradeNotation {
 

@@ -7,7 +7,7 @@ import java.util.Set;
 import java.util.stream.Collectors;
 
 /**
- * Reads grades as setters write them (grades.md, "Reading a grade").
+ * Reads grades as setters write them (docs/spec/grades.md, "Reading a grade").
  *
  * <p>The scale is taken, in this order, from the explicit scale (a file's {@code grade_scale} cell or the
  * command line), from the scales the gym writes for the discipline, or inferred from the text among the

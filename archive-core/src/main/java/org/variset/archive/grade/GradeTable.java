@@ -17,7 +17,7 @@ import java.util.Map;
  * The IRCRA comparison table: which grade of each scale sits on which level of the axis.
  *
  * <p>Loaded once from {@code ircra-table.csv}. A grade that appears on several rows spans those levels; its
- * value on the axis is the midpoint of the first and last of them (grades.md: "V2 spans 15 and 16: 15.5").
+ * value on the axis is the midpoint of the first and last of them (docs/spec/grades.md: "V2 spans 15 and 16: 15.5").
  *
  * <p>Reference: Draper N. et al. (2015), Sports Technology 8(3-4):88-94, DOI 10.1080/19346182.2015.1107081.
  * The V, Font and UIAA columns are a secondary transcription and are treated as ranges.

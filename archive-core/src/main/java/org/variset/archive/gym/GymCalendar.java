@@ -6,7 +6,7 @@ import java.util.Objects;
 
 /**
  * The gym's own "today": the calendar date in the gym's time zone, from an injected clock so that tests can
- * fix it (interchange.md: "Today is the gym's local date").
+ * fix it (docs/spec/interchange.md: "Today is the gym's local date").
  */
 public final class GymCalendar {
     private final Clock clock;

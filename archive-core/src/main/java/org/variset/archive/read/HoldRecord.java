@@ -26,7 +26,7 @@ public record HoldRecord(Integer seq, HoldRole role, String type, HoldSize size,
         extraFields = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(extraFields));
     }
 
-    /** True for hand, start and finish (the hand roles of interchange.md). */
+    /** True for hand, start and finish (the hand roles of docs/spec/interchange.md). */
     public boolean isHand() {
         return role.isHand();
     }

@@ -8,7 +8,7 @@ import java.util.regex.Pattern;
 /**
  * Reads the direction a hold's usable surface faces, in degrees clockwise from straight up in the wall plane
  * (0 faces up, a classic down-pull; 90 right; 180 down, an undercling; 270 left), from any of the notations of
- * interchange.md: degrees ({@code 90}), a clock position ({@code 4:30}, which is 30 x (H mod 12) + 0.5 x MM
+ * docs/spec/interchange.md: degrees ({@code 90}), a clock position ({@code 4:30}, which is 30 x (H mod 12) + 0.5 x MM
  * degrees) or a word ({@code up-right}). 360 reads as 0; negative values are refused.
  */
 public final class GripDirection {
@@ -98,7 +98,7 @@ public final class GripDirection {
         "left", "up-left"};
 
     /**
-     * The sector of a direction: k = floor((θ + 22.5) / 45) mod 8, computed on the degree value (metrics.md section 1),
+     * The sector of a direction: k = floor((θ + 22.5) / 45) mod 8, computed on the degree value (docs/spec/metrics.md section 1),
      * so 22.5 is in sector 1 and 337.5 in sector 0.
      */
     public static int sector(double degrees) {

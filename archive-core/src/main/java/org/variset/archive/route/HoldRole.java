@@ -2,7 +2,7 @@ package org.variset.archive.route;
 
 import java.util.Locale;
 
-/** What a hold is used for on its route. Hand roles are hand, start and finish (interchange.md). */
+/** What a hold is used for on its route. Hand roles are hand, start and finish (docs/spec/interchange.md). */
 public enum HoldRole {
     /** A hand hold along the route. */
     HAND,
@@ -25,7 +25,7 @@ public enum HoldRole {
 
     /**
      * The default role for a hold type when the file gives none: {@code foot} for foot chips and jibs,
-     * {@code hand} otherwise (interchange.md).
+     * {@code hand} otherwise (docs/spec/interchange.md).
      */
     public static HoldRole defaultFor(String holdType) {
         return "foot-chip".equals(holdType) || "jib".equals(holdType) ? FOOT : HAND;

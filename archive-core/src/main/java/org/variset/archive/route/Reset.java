@@ -17,7 +17,7 @@ import org.variset.archive.gym.Wall;
 
 /**
  * One reset of one wall: the routes set together. Its label is unique within the gym; its date is the earliest
- * set_on of its routes, since a reset may span two days (interchange.md). Its setters are those of its routes.
+ * set_on of its routes, since a reset may span two days (docs/spec/interchange.md). Its setters are those of its routes.
  */
 @Entity
 @Table(name = "reset")
@@ -56,7 +56,7 @@ public class Reset {
         this.resetOn = Objects.requireNonNull(resetOn, "resetOn");
     }
 
-    /** The default label of a reset: {@code <wall> <set_on>} (interchange.md). */
+    /** The default label of a reset: {@code <wall> <set_on>} (docs/spec/interchange.md). */
     public static String defaultLabel(String wallName, LocalDate setOn) {
         return wallName + " " + setOn;
     }

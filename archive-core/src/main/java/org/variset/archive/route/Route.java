@@ -36,7 +36,7 @@ import org.variset.archive.mapping.StringListConverter;
 
 /**
  * A route or boulder problem. It is identified by (gym, wall, label, set_on): the same label may come back in
- * a later reset or on another wall (interchange.md). It is standing on date d when set_on &lt;= d and it has not
+ * a later reset or on another wall (docs/spec/interchange.md). It is standing on date d when set_on &lt;= d and it has not
  * been stripped on or before d.
  */
 @Entity
@@ -188,7 +188,7 @@ public class Route {
         return strippedOn;
     }
 
-    /** True when the route is up on the date: set_on &lt;= d &lt; stripped_on (metrics.md). */
+    /** True when the route is up on the date: set_on &lt;= d &lt; stripped_on (docs/spec/metrics.md). */
     public boolean standingOn(LocalDate d) {
         return !setOn.isAfter(d) && (strippedOn == null || d.isBefore(strippedOn));
     }

@@ -26,7 +26,7 @@ import org.variset.archive.vocabulary.VocabularyField;
 /**
  * Turns a query's syntax tree into a Lucene query. Terms go through the vocabulary ({@link TermKeys}); bare words
  * that together spell a vocabulary term ({@code toe catch}) search that term's field as well as the text. A grade
- * matches routes within the levels its table cell covers, ± half a level on the IRCRA axis (grades.md); a grade that
+ * matches routes within the levels its table cell covers, ± half a level on the IRCRA axis (docs/spec/grades.md); a grade that
  * reads in both disciplines ({@code 6a}: Font 6A for boulders, French 6a for rope) searches each discipline with its
  * own reading.
  */

@@ -13,16 +13,16 @@ import org.variset.archive.vocabulary.Vocabulary;
 
 /**
  * The settings in effect for one gym on one day: the values the gym gave, else the defaults. Defaults are those of
- * the specs (metrics.md, grades.md) or common practice, named beside each constant.
+ * the specs (docs/spec/metrics.md, docs/spec/grades.md) or common practice, named beside each constant.
  */
 public final class GymSettings {
-    /** metrics.md section 5: the default near-repeat threshold. */
+    /** docs/spec/metrics.md section 5: the default near-repeat threshold. */
     public static final BigDecimal DEFAULT_THRESHOLD = new BigDecimal("0.6");
-    /** metrics.md section 5: the default look-back window. */
+    /** docs/spec/metrics.md section 5: the default look-back window. */
     public static final int DEFAULT_LOOKBACK_DAYS = 365;
-    /** metrics.md section 6: the default climber height. */
+    /** docs/spec/metrics.md section 6: the default climber height. */
     public static final double DEFAULT_REACH_HEIGHT_M = 1.60;
-    /** metrics.md section 6: the default span factor. */
+    /** docs/spec/metrics.md section 6: the default span factor. */
     public static final double DEFAULT_REACH_FACTOR = 1.0;
     /**
      * Common practice (Outdoor Insider, Fall 2015, p. 15): boulders due at 4 weeks and overdue at 6, rope routes due
@@ -78,7 +78,7 @@ public final class GymSettings {
     /**
      * The target weights per band of a discipline (any positive scale; figures normalise them), or null when there
      * is none: boulders default to the common-practice pyramid ({@link TargetPyramid#weights()}); rope routes have no
-     * default (metrics.md section 3).
+     * default (docs/spec/metrics.md section 3).
      */
     public Map<String, Double> target(Discipline d) {
         return given(SettingKey.TARGET, scopeOf(d)).map(v -> SettingKey.weightMap(v.value()))
@@ -90,7 +90,7 @@ public final class GymSettings {
         return given(SettingKey.TARGET, scopeOf(d)).isEmpty();
     }
 
-    /** The grade bands of a discipline (grades.md defaults). */
+    /** The grade bands of a discipline (docs/spec/grades.md defaults). */
     public synchronized BandSet bands(Discipline d) {
         return bandSets.computeIfAbsent(d, x -> given(SettingKey.BANDS, scopeOf(x)).map(v -> SettingKey.bandSet(
                 v.value())).orElse(BandSet.defaults(x)));
@@ -117,7 +117,7 @@ public final class GymSettings {
         return given(SettingKey.REACH_FACTOR, "").map(v -> v.value().asDouble()).orElse(DEFAULT_REACH_FACTOR);
     }
 
-    /** The score weights: metrics.md section 7's defaults, with the parts the gym set replaced. */
+    /** The score weights: docs/spec/metrics.md section 7's defaults, with the parts the gym set replaced. */
     public Map<String, Double> scoreWeights() {
         Map<String, Double> w = new LinkedHashMap<>();
         double[] defaults = {0.25, 0.20, 0.20, 0.15, 0.20};

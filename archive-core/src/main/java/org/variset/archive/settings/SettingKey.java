@@ -44,7 +44,7 @@ public enum SettingKey {
     VOCABULARY("vocabulary", SettingScope.GYM, "terms in the vocabulary file form: a '[moves]' line, then lines "
             + "like 'heel hook: hooky heel' (sections: hold-types, moves, styles)");
 
-    /** The score's parts, in the order of metrics.md section 7. */
+    /** The score's parts, in the order of docs/spec/metrics.md section 7. */
     public static final List<String> SCORE_PARTS = List.of("grip", "holds", "moves", "grades", "novelty");
 
     private static final ObjectMapper MAPPER = new ObjectMapper();

@@ -36,14 +36,14 @@ public final class SettingsListing {
             StringBuilder b = new StringBuilder();
             s.bands(d).bands().forEach(x -> b.append(b.length() == 0 ? "" : " ").append(x.label())
                     .append(x.lo() == null ? "" : "@" + plain(x.lo())));
-            rows.add(row(s, SettingKey.BANDS, d.word(), b.toString(), "default (grades.md)"));
+            rows.add(row(s, SettingKey.BANDS, d.word(), b.toString(), "default (docs/spec/grades.md)"));
         }
         rows.add(row(s, SettingKey.NEAR_REPEAT_THRESHOLD, "", s.nearRepeatThreshold().toPlainString(),
-                "default (metrics.md)"));
-        rows.add(row(s, SettingKey.LOOKBACK_DAYS, "", String.valueOf(s.lookbackDays()), "default (metrics.md)"));
-        rows.add(row(s, SettingKey.REACH_HEIGHT_M, "", plain(s.reachHeightM()), "default (metrics.md)"));
-        rows.add(row(s, SettingKey.REACH_FACTOR, "", plain(s.reachFactor()), "default (metrics.md)"));
-        rows.add(row(s, SettingKey.SCORE_WEIGHTS, "", weights(s.scoreWeights()), "default (metrics.md)"));
+                "default (docs/spec/metrics.md)"));
+        rows.add(row(s, SettingKey.LOOKBACK_DAYS, "", String.valueOf(s.lookbackDays()), "default (docs/spec/metrics.md)"));
+        rows.add(row(s, SettingKey.REACH_HEIGHT_M, "", plain(s.reachHeightM()), "default (docs/spec/metrics.md)"));
+        rows.add(row(s, SettingKey.REACH_FACTOR, "", plain(s.reachFactor()), "default (docs/spec/metrics.md)"));
+        rows.add(row(s, SettingKey.SCORE_WEIGHTS, "", weights(s.scoreWeights()), "default (docs/spec/metrics.md)"));
         for (Discipline d : Discipline.values()) {
             WallRecord none = new WallRecord(-1, -1, "", null, null, null, null, null);
             rows.add(row(s, SettingKey.CYCLE_DAYS, d.word(), String.valueOf(s.cycleDays(none, d)),
@@ -62,7 +62,7 @@ public final class SettingsListing {
         rows.add(row(s, SettingKey.OVERDUE_AFTER_DAYS, "", String.valueOf(s.overdueAfterDays()),
                 "default (common practice: overdue two weeks after due)"));
         rows.add(row(s, SettingKey.VOCABULARY, "", s.given(SettingKey.VOCABULARY, "").isPresent()
-                ? "the gym's own terms added" : "the default vocabulary", "default (vocabulary.md)"));
+                ? "the gym's own terms added" : "the default vocabulary", "default (docs/spec/vocabulary.md)"));
         return rows;
     }
 

@@ -33,7 +33,7 @@ public final class Vocabulary {
         this.terms = terms;
     }
 
-    /** The default vocabulary shipped with Variset (vocabulary.md). */
+    /** The default vocabulary shipped with Variset (docs/spec/vocabulary.md). */
     public static Vocabulary defaults() {
         return DEFAULT;
     }

@@ -12,7 +12,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 class BandSetTest {
     private final GradeReader reader = GradeReader.standard();
 
-    /** grades.md, "Default bands": the examples it gives, values on edges going up. */
+    /** docs/spec/grades.md, "Default bands": the examples it gives, values on edges going up. */
     @ParameterizedTest(name = "Font {0} falls in {1}")
     @CsvSource({"6A, V2", "6B, V3", "6C, V5", "6C+, V6", "7B+, V9", "V0-, V0", "V0+, V0", "V17, V16"})
     void placesBoulderGradesInTheBandsOfTheSpec(String grade, String band) {
@@ -20,7 +20,7 @@ class BandSetTest {
         assertThat(BandSet.defaults(Discipline.BOULDER).bandOf(v)).get().extracting(Band::label).isEqualTo(band);
     }
 
-    /** grades.md: "A UIAA 7 (levels 13 and 14, value 13.5) falls in 6b+"; 6a is [10.5, 11.5). */
+    /** docs/spec/grades.md: "A UIAA 7 (levels 13 and 14, value 13.5) falls in 6b+"; 6a is [10.5, 11.5). */
     @Test
     void placesRopeGradesInFrenchBands() {
         BandSet rope = BandSet.defaults(Discipline.ROPE);

@@ -46,7 +46,7 @@ class GradeReaderTest {
         }
     }
 
-    /** IRCRA table, secondary transcription (grades.md): V, Font and UIAA cells are ranges. */
+    /** IRCRA table, secondary transcription (docs/spec/grades.md): V, Font and UIAA cells are ranges. */
     @ParameterizedTest(name = "{0} {1} spans {2}..{3}")
     @CsvFileSource(resources = "secondary-ranges.csv", useHeadersInDisplayName = true)
     void readsSecondaryColumnsAsRanges(String scale, String grade, int low, int high, double value) {
@@ -118,15 +118,15 @@ class GradeReaderTest {
     class SpecialForms {
         @ParameterizedTest(name = "{0} reads as {1}")
         @CsvSource({
-            // grades.md: slash grades are the mean of the two grades' values.
+            // docs/spec/grades.md: slash grades are the mean of the two grades' values.
             "V3/4, 17.25",
             "6b/6b+, 13.5",
             "5.10a/b, 10.5",
-            // grades.md: 5.10- means 5.10a/b, 5.10+ 5.10c/d, bare 5.10 the mean of a-d.
+            // docs/spec/grades.md: 5.10- means 5.10a/b, 5.10+ 5.10c/d, bare 5.10 the mean of a-d.
             "5.10-, 10.5",
             "5.10+, 12.5",
             "5.10, 11.5",
-            // grades.md: older French letters (common practice, from memory): 4c reads as 4+, 5b as 5.
+            // docs/spec/grades.md: older French letters (common practice, from memory): 4c reads as 4+, 5b as 5.
             "4c, 8",
             "5b, 9",
         })

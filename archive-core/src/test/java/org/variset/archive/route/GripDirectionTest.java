@@ -9,7 +9,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 
 class GripDirectionTest {
 
-    /** interchange.md, holds.csv "grip": degrees, clock positions (30 x (H mod 12) + 0.5 x MM) and words. */
+    /** docs/spec/interchange.md, holds.csv "grip": degrees, clock positions (30 x (H mod 12) + 0.5 x MM) and words. */
     @ParameterizedTest(name = "{0} reads as {1} degrees")
     @CsvSource({"0, 0", "90, 90", "360, 0", "37.5, 37.5", "12:00, 0", "4:30, 135", "1:30, 45", "9:00, 270",
         "up, 0", "Up-Right, 45", "down, 180", "left, 270", "up-left, 315"})

@@ -76,7 +76,7 @@ class SearchIndexTest {
             assertThat(find(query)).containsExactlyInAnyOrder("B:C1", "B:C3", "Q:Q1");
         }
 
-        /** vocabulary.md: toe catch is a spelling of toe hook, lunge of dyno, chip of foot-chip. */
+        /** docs/spec/vocabulary.md: toe catch is a spelling of toe hook, lunge of dyno, chip of foot-chip. */
         @Test
         void followTheVocabularysSynonyms() {
             assertThat(find("move:\"toe catch\"")).containsExactly("B:C2");
@@ -107,7 +107,7 @@ class SearchIndexTest {
     @Nested
     class Grades {
         /**
-         * A grade matches within half a level of the levels its cell of the IRCRA table covers (grades.md, Draper et
+         * A grade matches within half a level of the levels its cell of the IRCRA table covers (docs/spec/grades.md, Draper et
          * al. 2015): V3 covers levels 16 and 17, V5 level 19, so V3..V5 is [15.5, 19.5); Font 6A (levels 15 and 16,
          * value 15.5) overlaps V3 at level 16 and is in.
          */
@@ -121,7 +121,7 @@ class SearchIndexTest {
 
         /**
          * Font 6A spans levels 15 and 16 (value 15.5), Font 6B+ 18 and 19. French 6a is 11 and YDS 5.11b 15
-         * (grades.md, from Draper et al. 2015). {@code 6a..6b+} reads as Font for boulders and French for rope.
+         * (docs/spec/grades.md, from Draper et al. 2015). {@code 6a..6b+} reads as Font for boulders and French for rope.
          */
         @Test
         void compareMixedScalesOnTheIrcraAxis() {

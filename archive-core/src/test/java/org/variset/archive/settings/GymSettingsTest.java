@@ -69,7 +69,7 @@ class GymSettingsTest {
     class Defaults {
         private final GymSettings d = GymSettings.defaults();
 
-        /** metrics.md sections 3, 5 and 6; grades.md default bands. */
+        /** docs/spec/metrics.md sections 3, 5 and 6; docs/spec/grades.md default bands. */
         @Test
         void areThoseOfTheSpecs() {
             assertThat(d.nearRepeatThreshold()).isEqualTo(new BigDecimal("0.6"));

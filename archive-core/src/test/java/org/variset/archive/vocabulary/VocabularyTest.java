@@ -10,7 +10,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 class VocabularyTest {
     private final Vocabulary v = Vocabulary.defaults();
 
-    /** vocabulary.md: the spellings listed for each term. */
+    /** docs/spec/vocabulary.md: the spellings listed for each term. */
     @ParameterizedTest(name = "{0} {1} is {2}")
     @CsvSource({"HOLD_TYPES, Bucket, jug", "HOLD_TYPES, rail, edge", "HOLD_TYPES, foot  chip, foot-chip",
         "MOVES, heelhook, heel hook", "MOVES, Heel-Hook, heel hook", "MOVES, lunge, dyno", "MOVES, undercut, undercling",
@@ -25,7 +25,7 @@ class VocabularyTest {
         assertThat(v.canonical(VocabularyField.STYLES, "squeeze")).isEmpty();
     }
 
-    /** vocabulary.md lists 10 hold types, 23 move descriptors and 12 style tags. */
+    /** docs/spec/vocabulary.md lists 10 hold types, 23 move descriptors and 12 style tags. */
     @Test
     void holdsTheDefaultTermsOfTheSpec() {
         assertThat(v.terms(VocabularyField.HOLD_TYPES)).hasSize(10).startsWith("jug", "crimp");

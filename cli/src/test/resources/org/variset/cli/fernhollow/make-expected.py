@@ -1,5 +1,5 @@
 # Expected audit, plan and trend figures for the Fernhollow test gym, computed from the CSV files with Python and
-# SciPy straight from ../shared/spec/metrics.md, without Variset's code.
+# SciPy straight from docs/spec/metrics.md, without Variset's code.
 # Run: python3 make-expected.py > expected.json   (Python 3.11, SciPy 1.17.1, NumPy as installed with it)
 import csv, json, math, itertools, statistics
 from datetime import date, timedelta
@@ -40,7 +40,7 @@ def standing(d):
     return [r for r in routes if r["set_on"] <= d and (r["stripped"] is None or d < r["stripped"])]
 
 HAND = {"hand", "start", "finish"}
-VOCAB = {"holds": 10, "moves": 23, "styles": 12, "sizes": 5}     # vocabulary.md term counts; sizes xs..xl
+VOCAB = {"holds": 10, "moves": 23, "styles": 12, "sizes": 5}     # docs/spec/vocabulary.md term counts; sizes xs..xl
 PYRAMID = dict(zip(["VB", "V0", "V1", "V2", "V3", "V4", "V5", "V6", "V7", "V8", "V9"], [1, 2, 3, 4, 5, 6, 5, 4, 3, 1, 1]))
 
 def sector(t):

@@ -11,7 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 
-/** Writes the JSON document: the gym, its walls, and each route with its holds nested (interchange.md). */
+/** Writes the JSON document: the gym, its walls, and each route with its holds nested (docs/spec/interchange.md). */
 final class JsonExport {
     private static final ObjectMapper MAPPER = new ObjectMapper();
 

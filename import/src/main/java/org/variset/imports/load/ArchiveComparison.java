@@ -72,7 +72,7 @@ final class ArchiveComparison {
         checkResets();
     }
 
-    /** A reset label belongs to one wall of its gym (interchange.md), in the files and in the archive. */
+    /** A reset label belongs to one wall of its gym (docs/spec/interchange.md), in the files and in the archive. */
     private void checkResets() {
         Map<List<String>, Map.Entry<RouteKey, ImportPlan.PlannedRoute>> first = new HashMap<>();
         Map<String, Map<String, String>> archivedResets = new HashMap<>();

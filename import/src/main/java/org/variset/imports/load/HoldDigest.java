@@ -7,7 +7,7 @@ import java.util.Arrays;
 import org.variset.archive.route.HoldPlacement;
 
 /**
- * A compact fingerprint of a route's whole hold list, ordered by seq then file order (interchange.md: a route's
+ * A compact fingerprint of a route's whole hold list, ordered by seq then file order (docs/spec/interchange.md: a route's
  * holds are one unit). Keeps 16 bytes per hold instead of the holds themselves, so hold files can be compared
  * with the archive without holding them in memory.
  */

@@ -5,7 +5,7 @@ import java.util.Objects;
 
 /**
  * What identifies a route: (gym, wall, label, set_on), compared after trimming and NFC normalisation; labels are
- * case-sensitive (interchange.md).
+ * case-sensitive (docs/spec/interchange.md).
  *
  * @param gym the gym's name
  * @param wall the wall's name

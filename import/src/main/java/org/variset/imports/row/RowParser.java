@@ -24,7 +24,7 @@ import org.variset.imports.table.TableKind;
 import org.variset.imports.table.TableRow;
 
 /**
- * Turns table rows into validated routes, holds and walls (interchange.md). Each bad cell becomes one located
+ * Turns table rows into validated routes, holds and walls (docs/spec/interchange.md). Each bad cell becomes one located
  * problem; a row with any problem gives null. Move and style spellings of the vocabulary become their terms;
  * terms it does not know are kept (lower case, single spaces) and listed in {@link #unknownTerms()}.
  */

@@ -14,7 +14,7 @@ public final class Columns {
     }
 
     /**
-     * The known name within two edits of a name, if any (interchange.md: such a column is an error with the
+     * The known name within two edits of a name, if any (docs/spec/interchange.md: such a column is an error with the
      * suggestion). Short names allow fewer edits, one per three letters of the known name, so that {@code bolt}
      * is not taken for a misspelt {@code role}; a swap of two neighbouring letters counts as one edit.
      */

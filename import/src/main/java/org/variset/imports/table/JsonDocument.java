@@ -15,7 +15,7 @@ import java.util.Map;
 import org.variset.imports.Problem;
 
 /**
- * A JSON document ({@code {"gym": ..., "walls": [...], "routes": [{..., "holds": [...]}]}}, interchange.md; the
+ * A JSON document ({@code {"gym": ..., "walls": [...], "routes": [{..., "holds": [...]}]}}, docs/spec/interchange.md; the
  * {@code walls} list is ours, so that JSON round-trips walls too). Each route object keeps the line it starts on;
  * a problem in a nested hold names its path ({@code routes[3].holds[2].grip}). Jackson's default limits on
  * nesting depth and string length stay on.

@@ -8,7 +8,7 @@ import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.stream.Stream;
 
-/** The three tables of the interchange formats, with their columns (interchange.md). */
+/** The three tables of the interchange formats, with their columns (docs/spec/interchange.md). */
 public enum TableKind {
     /** routes.csv: one row per route or boulder problem. */
     ROUTES("routes", List.of("gym", "wall", "route", "set_on", "discipline", "grade"),

@@ -11,7 +11,7 @@ import org.variset.reports.figures.FiguresJson;
 import org.variset.reports.scoring.repetition.RepetitionFigures;
 
 /**
- * An audit as one JSON document: every key of metrics.md for the audited set, the same blocks for the previous reset
+ * An audit as one JSON document: every key of docs/spec/metrics.md for the audited set, the same blocks for the previous reset
  * and the reference set, the side-by-side headline figures with their changes, and the findings. Values are
  * unrounded; a figure that is undefined is null and its reason is under {@code undefined}.
  */

@@ -24,7 +24,7 @@ import org.variset.reports.scoring.repetition.RepetitionFigures;
 
 /**
  * Reads what an audit needs from the archive and hands it to the pure figures: for a reset, its routes, the gym's
- * routes set in the look-back window before it (metrics.md section 5), the wall's previous three resets (hold
+ * routes set in the look-back window before it (docs/spec/metrics.md section 5), the wall's previous three resets (hold
  * reuse), the gym's routes up on its day (grades part of the score, and context), and the wall's previous reset
  * audited the same way for comparison.
  */
@@ -109,7 +109,7 @@ public final class Auditor {
                 settings);
     }
 
-    /** The gym's routes set in [day − look-back, day), not of the reset (metrics.md section 5). */
+    /** The gym's routes set in [day − look-back, day), not of the reset (docs/spec/metrics.md section 5). */
     private List<RouteRecord> window(GymRecord gym, ResetRecord reset, GymSettings settings) {
         LocalDate day = reset.resetOn();
         return reader.read(RouteFilter.gym(gym.id()).withoutReset(reset.id())

@@ -12,7 +12,7 @@ import org.variset.reports.scoring.grades.GradeFigures;
 
 /**
  * Sentences on grades against the target, read on the gym's routes up that day: a single wall is not meant to
- * cover the whole target (metrics.md section 7), so a reset or wall audit looks at the gym's standing set.
+ * cover the whole target (docs/spec/metrics.md section 7), so a reset or wall audit looks at the gym's standing set.
  */
 final class GradeFindings {
     /** A distance to target of at least this many bands is worth a sentence (a heuristic of ours). */

@@ -68,7 +68,7 @@ public final class SetResults {
     }
 
     /**
-     * The composite score (metrics.md section 7). Coverage can exceed 1 when a set uses terms outside the
+     * The composite score (docs/spec/metrics.md section 7). Coverage can exceed 1 when a set uses terms outside the
      * vocabulary (its richness is then above K); the part is capped at 1.
      */
     static CompositeScore score(SetFigures f, SetFigures gradesFrom, Discipline main, Double novelty,

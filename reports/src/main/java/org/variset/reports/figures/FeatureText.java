@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
-/** Feature sets (metrics.md section 5) in words: "same crimp@0 and pinch@90 holds, same heel hook > dyno". */
+/** Feature sets (docs/spec/metrics.md section 5) in words: "same crimp@0 and pinch@90 holds, same heel hook > dyno". */
 public final class FeatureText {
     private FeatureText() {
     }

@@ -10,7 +10,7 @@ import org.variset.reports.scoring.profile.ProfileClass;
 import org.variset.reports.scoring.variety.VarietyFigures;
 
 /**
- * Writes {@link SetFigures} under the JSON keys of metrics.md ({@code grip}, {@code holds}, {@code hold_shapes},
+ * Writes {@link SetFigures} under the JSON keys of docs/spec/metrics.md ({@code grip}, {@code holds}, {@code hold_shapes},
  * {@code sizes}, {@code moves}, {@code styles}, {@code angles}, {@code grades}, {@code profiles}, {@code line}),
  * unrounded; the reason for each null figure goes under {@code undefined} as {@code block.key}.
  */

@@ -6,7 +6,7 @@ import java.util.Objects;
 import org.variset.archive.read.RouteRecord;
 
 /**
- * Route lines of a set, summarised (metrics.md section 6; JSON key {@code line}).
+ * Route lines of a set, summarised (docs/spec/metrics.md section 6; JSON key {@code line}).
  *
  * @param routes each route's line, in the set's order
  * @param withGie routes with a geometric index of entropy

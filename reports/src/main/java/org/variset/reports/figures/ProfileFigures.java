@@ -7,7 +7,7 @@ import org.variset.reports.scoring.profile.DifficultyProfile;
 import org.variset.reports.scoring.profile.ProfileClass;
 
 /**
- * Difficulty profiles of a set (metrics.md section 4; JSON key {@code profiles}).
+ * Difficulty profiles of a set (docs/spec/metrics.md section 4; JSON key {@code profiles}).
  *
  * @param counts routes per class, every class present, in the spec's order
  * @param splitEntropy entropy of the four class shares over ln 4, or null when no route is classified

@@ -13,7 +13,7 @@ import org.variset.reports.scoring.repetition.RouteFeatures;
 import org.variset.reports.scoring.variety.AngleBand;
 
 /**
- * Turns archive routes into the inputs of the repetition figures (metrics.md section 5): feature sets compared
+ * Turns archive routes into the inputs of the repetition figures (docs/spec/metrics.md section 5): feature sets compared
  * within a discipline, and the (hold_ref, sector) keys of hold reuse.
  */
 public final class RouteFeatureMapper {

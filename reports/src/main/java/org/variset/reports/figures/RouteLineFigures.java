@@ -8,7 +8,7 @@ import org.variset.reports.scoring.line.Point;
 import org.variset.reports.scoring.line.RouteLine;
 
 /**
- * The line of one route through its hand holds (metrics.md section 6).
+ * The line of one route through its hand holds (docs/spec/metrics.md section 6).
  *
  * @param route the route's name
  * @param handHolds its hand-role placements

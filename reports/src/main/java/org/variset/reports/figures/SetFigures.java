@@ -21,7 +21,7 @@ import org.variset.reports.scoring.variety.CategoryVariety;
 import org.variset.reports.scoring.variety.VarietyFigures;
 
 /**
- * Every per-set figure of metrics.md (sections 1, 2, 3, 4 and 6) for one set of routes: a reset, a standing set or
+ * Every per-set figure of docs/spec/metrics.md (sections 1, 2, 3, 4 and 6) for one set of routes: a reset, a standing set or
  * one setter's routes. Repetition and the score need other sets too and live with the audit.
  *
  * @param routes how many routes
@@ -57,7 +57,7 @@ public record SetFigures(int routes, GripStatistics grip, VarietyFigures holds, 
                 LineFigures.of(set, settings.reachFactor(), settings.reachHeightM()));
     }
 
-    /** Grip directions of every hand-role placement; a hold with two directions gives two (metrics.md 1). */
+    /** Grip directions of every hand-role placement; a hold with two directions gives two (docs/spec/metrics.md 1). */
     private static GripStatistics grip(List<HoldRecord> holds) {
         List<Double> degrees = new ArrayList<>();
         int undirected = 0;
@@ -87,7 +87,7 @@ public record SetFigures(int routes, GripStatistics grip, VarietyFigures holds, 
         return CategoryVariety.of(counts, missing, vocabularySize);
     }
 
-    /** One block per discipline present, boulders first (metrics.md section 3). */
+    /** One block per discipline present, boulders first (docs/spec/metrics.md section 3). */
     private static Map<Discipline, GradeFigures> grades(List<RouteRecord> set, GymSettings settings) {
         Map<Discipline, GradeFigures> out = new EnumMap<>(Discipline.class);
         for (Discipline d : Discipline.values()) {

@@ -19,7 +19,7 @@ final class Drawings {
     }
 
     /**
-     * A rose of the eight grip sectors (metrics.md section 1): each wedge 45° wide, centred on its direction (up at the
+     * A rose of the eight grip sectors (docs/spec/metrics.md section 1): each wedge 45° wide, centred on its direction (up at the
      * top, clockwise), its radius proportional to the square root of its count so that wedge areas compare as
      * counts (Fisher 1993, section 2.2), labelled with the count. The mean direction is an arrow whose length is the
      * mean resultant length R̄ on the same scale as the outer circle (R̄ = 1 reaches it).

@@ -4,7 +4,7 @@ import java.util.Arrays;
 
 /**
  * Chooses n grade slots for a reset so that the gym's standing set after it is as close as possible to the target,
- * in the Wasserstein-1 distance of metrics.md section 3.
+ * in the Wasserstein-1 distance of docs/spec/metrics.md section 3.
  *
  * <p>With bands k = 1..K, the rest of the standing set's counts c<sub>k</sub> (M routes), target shares
  * t<sub>k</sub> and slot counts x<sub>k</sub> (Σ x = n), write C, X, T for the cumulative sums. The distance after

@@ -37,7 +37,7 @@ class GradeSlotPlannerTest {
 
     /**
      * On seeded random small cases the planner's distance equals the least distance over every composition of n
-     * into the bands (brute force over the definition of metrics.md section 3), and no move of one slot from one
+     * into the bands (brute force over the definition of docs/spec/metrics.md section 3), and no move of one slot from one
      * band to another lowers it.
      */
     @ParameterizedTest(name = "seed {0}")

@@ -87,7 +87,7 @@ final class RouteMaker {
         return out;
     }
 
-    /** The difficulty of each hand move: steady, sustained, one crux or several (metrics.md section 4). */
+    /** The difficulty of each hand move: steady, sustained, one crux or several (docs/spec/metrics.md section 4). */
     List<Integer> difficulty(int handMoves, int base) {
         List<Integer> d = new ArrayList<>();
         int kind = r.nextInt(4);

@@ -9,7 +9,7 @@ import org.variset.archive.grade.Band;
 import org.variset.archive.grade.BandSet;
 
 /**
- * Grades of one discipline against the gym's target (metrics.md section 3).
+ * Grades of one discipline against the gym's target (docs/spec/metrics.md section 3).
  *
  * <p>Each IRCRA value falls in one band. The Wasserstein-1 distance between the observed and target distributions
  * over the target's bands, in band order with unit spacing, is Σ<sub>k</sub> |F<sub>obs</sub>(k) −

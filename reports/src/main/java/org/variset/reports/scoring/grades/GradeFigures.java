@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The grade figures of one discipline (metrics.md section 3; JSON keys in brackets).
+ * The grade figures of one discipline (docs/spec/metrics.md section 3; JSON keys in brackets).
  *
  * @param histogram count per band label, in band order [{@code histogram}]
  * @param target the target shares per band, or null when the gym has none [{@code target}]

@@ -7,7 +7,7 @@ import java.util.Map;
 import org.variset.archive.route.GripDirection;
 
 /**
- * Descriptive circular statistics and the Rayleigh test for grip directions (metrics.md section 1).
+ * Descriptive circular statistics and the Rayleigh test for grip directions (docs/spec/metrics.md section 1).
  *
  * <p>For directions θ<sub>i</sub> in degrees clockwise from up, i = 1..n: C = Σ cos θ, S = Σ sin θ,
  * R = sqrt(C² + S²), mean resultant length R̄ = R / n, mean direction atan2(S, C), circular variance 1 − R̄
@@ -33,7 +33,7 @@ import org.variset.archive.route.GripDirection;
  * </ul>
  */
 public final class CircularStatistics {
-    /** Below this mean resultant length the mean direction is undefined (metrics.md). */
+    /** Below this mean resultant length the mean direction is undefined (docs/spec/metrics.md). */
     static final double NO_DIRECTION = 1e-9;
     private static final int SECTORS = 8;
 
@@ -99,7 +99,7 @@ public final class CircularStatistics {
         return GripDirection.sectorWord(k);
     }
 
-    /** Sector k = floor((θ + 22.5) / 45) mod 8, on the degree value (metrics.md); see {@link GripDirection}. */
+    /** Sector k = floor((θ + 22.5) / 45) mod 8, on the degree value (docs/spec/metrics.md); see {@link GripDirection}. */
     public static int sector(double degrees) {
         return GripDirection.sector(degrees);
     }

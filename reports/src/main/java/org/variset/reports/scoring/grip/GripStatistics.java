@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The grip-direction figures of one set of routes (metrics.md section 1; JSON keys in brackets). A figure that is
+ * The grip-direction figures of one set of routes (docs/spec/metrics.md section 1; JSON keys in brackets). A figure that is
  * undefined is null, and {@link #undefined()} says why.
  *
  * @param n number of directed observations [{@code n}]

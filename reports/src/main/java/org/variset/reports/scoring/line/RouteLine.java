@@ -5,7 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 
 /**
- * The line through a route's hand holds in climbing order (metrics.md section 6). Path length L is the sum of the
+ * The line through a route's hand holds in climbing order (docs/spec/metrics.md section 6). Path length L is the sum of the
  * straight segments; c is the perimeter of the holds' convex hull (for collinear points, twice their extent); the
  * geometric index of entropy is GIE = ln(2L / c): 0 for a straight line, larger for a wandering one. A span longer
  * than k × climber height is flagged, a heuristic (arm span is close to height in most adults; common practice, no

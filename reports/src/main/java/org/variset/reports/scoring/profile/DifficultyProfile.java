@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Classifies routes by their move difficulties d<sub>1</sub>..d<sub>m</sub> (metrics.md section 4): with m ≥ 3,
+ * Classifies routes by their move difficulties d<sub>1</sub>..d<sub>m</sub> (docs/spec/metrics.md section 4): with m ≥ 3,
  * mean μ, population standard deviation σ (dividing by m), CV = σ / μ; crux moves are those with d ≥ μ + σ. The
  * class is {@code steady} when CV &lt; 0.15, else {@code sustained}, {@code single_crux} or {@code multi_crux} by
  * the number of crux moves; m &lt; 3 is {@code unclassified}. The split entropy is the Shannon entropy of the four

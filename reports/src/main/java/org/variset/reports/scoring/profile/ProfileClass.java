@@ -1,6 +1,6 @@
 package org.variset.reports.scoring.profile;
 
-/** How a route's difficulty is spread over its moves (metrics.md section 4), in the spec's order. */
+/** How a route's difficulty is spread over its moves (docs/spec/metrics.md section 4), in the spec's order. */
 public enum ProfileClass {
     /** CV below 0.15: every move about as hard as the others. */
     STEADY,

@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Set;
 
 /**
- * Near-repeats, novelty and hold reuse of a reset (metrics.md section 5). Every pair is computed exactly: one reset
+ * Near-repeats, novelty and hold reuse of a reset (docs/spec/metrics.md section 5). Every pair is computed exactly: one reset
  * against one gym's look-back window is small (tens of routes against a few thousand).
  *
  * <p>novelty = 1 − mean over the reset's comparable routes of their highest Jaccard index against the window; 1
@@ -15,7 +15,7 @@ import java.util.Set;
  * in its previous three resets, over all the reset's placements.
  */
 public final class Repetition {
-    /** The default near-repeat threshold (metrics.md). */
+    /** The default near-repeat threshold (docs/spec/metrics.md). */
     public static final BigDecimal DEFAULT_THRESHOLD = new BigDecimal("0.6");
 
     private Repetition() {

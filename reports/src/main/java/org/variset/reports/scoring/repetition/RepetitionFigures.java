@@ -3,7 +3,7 @@ package org.variset.reports.scoring.repetition;
 import java.util.List;
 
 /**
- * Repetition figures of one reset (metrics.md section 5; JSON keys in brackets).
+ * Repetition figures of one reset (docs/spec/metrics.md section 5; JSON keys in brackets).
  *
  * @param nearRepeats pairs of a reset route and an earlier route with Jaccard at or above the threshold
  *     [{@code near_repeats}]

@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Set;
 
 /**
- * The feature set of one route (metrics.md section 5): {@code hold:<type>@<sector>} for each grip of each
+ * The feature set of one route (docs/spec/metrics.md section 5): {@code hold:<type>@<sector>} for each grip of each
  * hand-role placement ({@code hold:<type>@none} without a direction), {@code move:<descriptor>} for each move,
  * {@code pair:<a>><b>} for each consecutive pair of moves, {@code angle:<band>} and {@code grade:<band>}. A sector
  * is written as the direction of its centre in degrees ({@code crimp@0}, {@code pinch@90}), the notation search
@@ -18,14 +18,14 @@ import java.util.Set;
  */
 public record RouteFeatures(String id, String group, Set<String> features, int detail) {
 
-    /** Routes with fewer hold and move features than this are not compared (metrics.md). */
+    /** Routes with fewer hold and move features than this are not compared (docs/spec/metrics.md). */
     public static final int MIN_DETAIL = 4;
 
     /**
      * One hand-role placement's part of the features.
      *
      * @param type the hold type
-     * @param sectors the grip sectors 0..7 of its directions (metrics.md section 1); empty for none
+     * @param sectors the grip sectors 0..7 of its directions (docs/spec/metrics.md section 1); empty for none
      */
     public record HandHold(String type, List<Integer> sectors) {
     }

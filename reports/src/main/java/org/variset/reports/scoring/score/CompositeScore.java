@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The composite score (metrics.md section 7): 100 × the weighted mean of the parts that are not null, the weights
+ * The composite score (docs/spec/metrics.md section 7): 100 × the weighted mean of the parts that are not null, the weights
  * rescaled over those parts; null with fewer than three parts. Default weights: grip 0.25 (sector entropy), holds
  * 0.20 (hold-type coverage), moves 0.20 (move coverage), grades 0.15 (exp(−emd_to_target) of the gym's standing
  * set), novelty 0.20. A heuristic of ours, always shown beside its parts.

@@ -1,7 +1,7 @@
 package org.variset.reports.scoring.variety;
 
 /**
- * The wall-angle band of a route (metrics.md section 2): band k = [15k, 15k + 15) degrees from vertical, with 90
+ * The wall-angle band of a route (docs/spec/metrics.md section 2): band k = [15k, 15k + 15) degrees from vertical, with 90
  * in the last band [75, 90]. Slabs (negative angles, down to -45) fall in negative bands: -10 is in band -1.
  */
 public final class AngleBand {

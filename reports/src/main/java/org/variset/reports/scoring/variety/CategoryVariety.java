@@ -4,7 +4,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
- * Diversity of counts over categories (metrics.md section 2). For counts n<sub>i</sub>, N = Σ n<sub>i</sub>,
+ * Diversity of counts over categories (docs/spec/metrics.md section 2). For counts n<sub>i</sub>, N = Σ n<sub>i</sub>,
  * p<sub>i</sub> = n<sub>i</sub> / N, natural logarithms:
  * richness S = #{i : n<sub>i</sub> &gt; 0}; Shannon H' = −Σ p<sub>i</sub> ln p<sub>i</sub>; Pielou J' = H' / ln S;
  * Gini-Simpson 1 − Σ p<sub>i</sub>² (the with-replacement form); Hill N1 = exp(H'), N2 = 1 / Σ p<sub>i</sub>², the

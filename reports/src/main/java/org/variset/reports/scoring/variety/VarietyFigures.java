@@ -3,7 +3,7 @@ package org.variset.reports.scoring.variety;
 import java.util.Map;
 
 /**
- * The variety figures of one category field (metrics.md section 2; JSON keys in brackets). Null where undefined,
+ * The variety figures of one category field (docs/spec/metrics.md section 2; JSON keys in brackets). Null where undefined,
  * with the reason in {@link #undefined()}.
  *
  * @param n observations N [{@code n}]

@@ -37,7 +37,7 @@ class CircularStatisticsTest {
 
         /**
          * Fisher (1993), Example 4.12, 50 directions: p about 0.20; 0.19911 recomputed with SciPy 1.17.1 and the
-         * formula of metrics.md (tolerance 5e-6).
+         * formula of docs/spec/metrics.md (tolerance 5e-6).
          */
         @Test
         void matchesFishersUniformLookingSample() {
@@ -106,7 +106,7 @@ class CircularStatisticsTest {
             assertThat(g.sectors()).containsExactly(4, 0, 0, 0, 0, 0, 0, 0);
         }
 
-        /** metrics.md: 22.5 belongs to sector 1 and 337.5 to sector 0. */
+        /** docs/spec/metrics.md: 22.5 belongs to sector 1 and 337.5 to sector 0. */
         @Test
         void putsSectorEdgesWhereTheSpecSays() {
             assertThat(CircularStatistics.sector(22.5)).isEqualTo(1);

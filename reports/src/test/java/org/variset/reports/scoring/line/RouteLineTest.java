@@ -15,7 +15,7 @@ class RouteLineTest {
         return out;
     }
 
-    /** metrics.md section 6 check values: straight 0, zig-zag 0.2480383, L-shape 0.1541507 (7 decimals). */
+    /** docs/spec/metrics.md section 6 check values: straight 0, zig-zag 0.2480383, L-shape 0.1541507 (7 decimals). */
     @Test
     void matchesTheSpecsCheckValues() {
         assertThat(RouteLine.gie(pts(0, 0, 0, 1, 0, 2, 0, 4))).isCloseTo(0, within(1e-12));

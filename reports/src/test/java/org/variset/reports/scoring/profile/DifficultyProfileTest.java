@@ -11,7 +11,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 
 class DifficultyProfileTest {
     /**
-     * Worked by hand from metrics.md section 4 (population sd): 5;5;5 sd 0 steady; 3;4;6;3 mean 4, sd 1.2247,
+     * Worked by hand from docs/spec/metrics.md section 4 (population sd): 5;5;5 sd 0 steady; 3;4;6;3 mean 4, sd 1.2247,
      * CV 0.31, one move at or above 5.22: single crux; 2;3;9 mean 4.67, sd 3.09, only 9 ≥ 7.76: single crux;
      * 8;2;8;2 mean 5, sd 3, moves ≥ 8: two, multi crux; 4;5;6 mean 5, sd 0.816, CV 0.163, 6 ≥ 5.816: single
      * crux; 1;5;5;5 mean 4, sd 1.732, no move ≥ 5.732: sustained; 3;5 unclassified.
