@@ -54,8 +54,19 @@ final class AuditPhase {
         List<Double> coldTimes = new ArrayList<>();
         long rss = -1;
         for (int i = 0; i < b.runs; i++) {
-            ChildRun.Result r = b.variset("audit-" + w.name(), List.of(), false, "--archive", dir.toString(), "audit",
-                    "--gym", w.firstGym(), "--wall", wall, "--on", Workload.END.toString())
+            ChildRun.Result r = b.variset(
+                            "audit-" + w.name(),
+                            List.of(),
+                            false,
+                            "--archive",
+                            dir.toString(),
+                            "audit",
+                            "--gym",
+                            w.firstGym(),
+                            "--wall",
+                            wall,
+                            "--on",
+                            Workload.END.toString())
                     .orFail("variset audit in the " + w.name() + " chain");
             coldTimes.add(r.seconds());
             rss = Math.max(rss, r.peakRssKb());
@@ -63,9 +74,16 @@ final class AuditPhase {
         warm.add(new double[] {Stats.median(times)});
         cold.add(new double[] {Stats.median(coldTimes), rss});
         names.add(w.name());
-        b.results.fact(String.format(Locale.ROOT, "audit of %s / %s (%d routes) in the %s chain: warm median %.1f "
-                + "ms, cold %.2f s, peak RSS %d MB", w.firstGym(), wall, routes, w.name(), Stats.median(times),
-                Stats.median(coldTimes), rss / 1024));
+        b.results.fact(String.format(
+                Locale.ROOT,
+                "audit of %s / %s (%d routes) in the %s chain: warm median %.1f " + "ms, cold %.2f s, peak RSS %d MB",
+                w.firstGym(),
+                wall,
+                routes,
+                w.name(),
+                Stats.median(times),
+                Stats.median(coldTimes),
+                rss / 1024));
     }
 
     /** Adds the large-over-small rows once both chains were measured. */
@@ -75,22 +93,34 @@ final class AuditPhase {
         }
         double ws = warm.get(0)[0];
         double wl = warm.get(1)[0];
-        b.results.add(new Results.Row("audit one reset, warm (" + names.get(1) + " vs " + names.get(0) + ")",
-                String.format(Locale.ROOT, "%.1f ms", wl), String.format(Locale.ROOT, "%.1f ms", ws), wl / ws, 3.0,
+        b.results.add(new Results.Row(
+                "audit one reset, warm (" + names.get(1) + " vs " + names.get(0) + ")",
+                String.format(Locale.ROOT, "%.1f ms", wl),
+                String.format(Locale.ROOT, "%.1f ms", ws),
+                wl / ws,
+                3.0,
                 "median of " + REPEATS + " audits in one JVM after " + WARM_UP + " warm-up audits; baseline = the "
                         + "same audit in the small chain"));
         double cs = cold.get(0)[0];
         double cl = cold.get(1)[0];
-        b.results.add(new Results.Row("audit one reset, cold CLI (" + names.get(1) + " vs " + names.get(0) + ")",
-                String.format(Locale.ROOT, "%.2f s", cl), String.format(Locale.ROOT, "%.2f s", cs), cl / cs, 3.0,
-                String.format(Locale.ROOT, "variset audit from a fresh JVM, median of %d runs; peak RSS %d MB "
-                        + "(small), %d MB (large)", b.runs, (long) cold.get(0)[1] / 1024,
+        b.results.add(new Results.Row(
+                "audit one reset, cold CLI (" + names.get(1) + " vs " + names.get(0) + ")",
+                String.format(Locale.ROOT, "%.2f s", cl),
+                String.format(Locale.ROOT, "%.2f s", cs),
+                cl / cs,
+                3.0,
+                String.format(
+                        Locale.ROOT,
+                        "variset audit from a fresh JVM, median of %d runs; peak RSS %d MB " + "(small), %d MB (large)",
+                        b.runs,
+                        (long) cold.get(0)[1] / 1024,
                         (long) cold.get(1)[1] / 1024)));
     }
 
     private static String firstWall(Archive a, String gym) {
-        try (PreparedStatement s = a.connection().prepareStatement("select w.name from wall w join gym g on g.id = "
-                + "w.gym_id where g.name = ? order by w.name")) {
+        try (PreparedStatement s = a.connection()
+                .prepareStatement("select w.name from wall w join gym g on g.id = "
+                        + "w.gym_id where g.name = ? order by w.name")) {
             s.setString(1, gym);
             try (ResultSet r = s.executeQuery()) {
                 if (!r.next()) {

@@ -19,6 +19,7 @@ final class Bench {
     final int runs;
     /** A quick run checks that the harness works: fewer repetitions everywhere. */
     final boolean quick;
+
     final Results results = new Results();
     private int childNo;
 
@@ -60,15 +61,22 @@ final class Bench {
         }
         List<String> cmd = new ArrayList<>(List.of(launcher().toString()));
         cmd.addAll(List.of(args));
-        Map<String, String> env = jvmExtra.isEmpty() && gcLog == null ? Map.of()
+        Map<String, String> env = jvmExtra.isEmpty() && gcLog == null
+                ? Map.of()
                 : Map.of("VARISET_JAVA_OPTS", String.join(" ", flags), "VARISET_CDS", "off");
         return ChildRun.run(cmd, env, work, logs(), label, gcLog);
     }
 
     /** Trains the launcher's class-data sharing archive in the foreground, so that none trains during a measurement. */
     void prepare() throws IOException {
-        ChildRun.run(List.of(launcher().toString(), "--version"), Map.of("VARISET_CDS", "train"), work, logs(),
-                "cds-train", null).orFail("training the launcher's class-data sharing archive");
+        ChildRun.run(
+                        List.of(launcher().toString(), "--version"),
+                        Map.of("VARISET_CDS", "train"),
+                        work,
+                        logs(),
+                        "cds-train",
+                        null)
+                .orFail("training the launcher's class-data sharing archive");
     }
 
     /** Runs a Java main class or jar of the benchmark module (the floors) with the same flags. */

@@ -19,13 +19,20 @@ import picocli.CommandLine.Option;
  * sees the same state of caches and files from one run of the harness to the next; every figure is a median over
  * repeated measurements beside a baseline measured in the same run.
  */
-@Command(name = "benchmarks", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Measure Variset against floors of plain library calls on synthetic chains and write the "
-                + "figures to a Markdown file.", "",
+@Command(
+        name = "benchmarks",
+        mixinStandardHelpOptions = true,
+        sortOptions = false,
+        description = {
+            "Measure Variset against floors of plain library calls on synthetic chains and write the "
+                    + "figures to a Markdown file.",
+            "",
             "Phases, in this order: generate the chains (kept between runs), import (variset import against a raw "
-                + "Commons CSV + JDBC + Lucene floor), search (p50/p95 against hand-built Lucene queries), audit "
-                + "(one reset in the small against the large chain), start-up (variset info against a bare picocli "
-                + "jar), PDF (a 60-route reset's PDF audit against a 10 s budget).", ""})
+                    + "Commons CSV + JDBC + Lucene floor), search (p50/p95 against hand-built Lucene queries), audit "
+                    + "(one reset in the small against the large chain), start-up (variset info against a bare picocli "
+                    + "jar), PDF (a 60-route reset's PDF audit against a 10 s budget).",
+            ""
+        })
 public final class Benchmarks implements Callable<Integer> {
     private static final String BEGIN = "<!-- measured: begin (written by benchmarks/run; edit outside) -->";
     private static final String END = "<!-- measured: end -->";
@@ -34,27 +41,46 @@ public final class Benchmarks implements Callable<Integer> {
     @Option(names = "--repo", required = true, paramLabel = "DIR", description = "The Variset checkout (built).")
     Path repo;
 
-    @Option(names = "--work", paramLabel = "DIR", description = "Where chains, archives and logs go (default: "
-            + "benchmarks/target/work in the checkout).")
+    @Option(
+            names = "--work",
+            paramLabel = "DIR",
+            description = "Where chains, archives and logs go (default: " + "benchmarks/target/work in the checkout).")
     Path work;
 
-    @Option(names = "--runs", paramLabel = "N", defaultValue = "3", description = "Runs of each child-process "
-            + "measurement (default: ${DEFAULT-VALUE}); medians are reported.")
+    @Option(
+            names = "--runs",
+            paramLabel = "N",
+            defaultValue = "3",
+            description =
+                    "Runs of each child-process " + "measurement (default: ${DEFAULT-VALUE}); medians are reported.")
     int runs;
 
-    @Option(names = "--quick", description = "Tiny chains (1 and 3 gyms over 2 years) and one run: checks that the "
-            + "harness works, in a few minutes; the figures mean little.")
+    @Option(
+            names = "--quick",
+            description = "Tiny chains (1 and 3 gyms over 2 years) and one run: checks that the "
+                    + "harness works, in a few minutes; the figures mean little.")
     boolean quick;
 
-    @Option(names = "--only", split = ",", paramLabel = "PHASE", description = "Run only these phases (import, "
-            + "search, audit, start-up, pdf); search, audit and start-up need the archives an earlier import left.")
+    @Option(
+            names = "--only",
+            split = ",",
+            paramLabel = "PHASE",
+            description =
+                    "Run only these phases (import, "
+                            + "search, audit, start-up, pdf); search, audit and start-up need the archives an earlier import left.")
     Set<String> only;
 
-    @Option(names = "--out", paramLabel = "FILE", description = "The Markdown file to write the figures into, "
-            + "between its measured markers (created if missing).")
+    @Option(
+            names = "--out",
+            paramLabel = "FILE",
+            description = "The Markdown file to write the figures into, "
+                    + "between its measured markers (created if missing).")
     Path out;
 
-    @Option(names = "--command", paramLabel = "TEXT", defaultValue = "benchmarks/run",
+    @Option(
+            names = "--command",
+            paramLabel = "TEXT",
+            defaultValue = "benchmarks/run",
             description = "The command line to name in the output (default: ${DEFAULT-VALUE}).")
     String command;
 
@@ -63,8 +89,9 @@ public final class Benchmarks implements Callable<Integer> {
         Set<String> phases = new LinkedHashSet<>(only == null ? PHASES : only);
         for (String p : phases) {
             if (!PHASES.contains(p)) {
-                throw new CommandLine.ParameterException(new CommandLine(this), "unknown phase '" + p + "' (expected"
-                        + " one of " + String.join(", ", PHASES) + ")");
+                throw new CommandLine.ParameterException(
+                        new CommandLine(this),
+                        "unknown phase '" + p + "' (expected" + " one of " + String.join(", ", PHASES) + ")");
             }
         }
         Path w = (work != null ? work : repo.resolve("benchmarks/target/work")).toAbsolutePath();
@@ -80,8 +107,33 @@ public final class Benchmarks implements Callable<Integer> {
         System.out.println("generate:");
         long[] smallCounts = small.ensure();
         long[] largeCounts = large.ensure();
-        b.results.fact(String.format(Locale.ROOT, "chains: %s (%,d routes, %,d holds); %s (%,d routes, %,d holds)",
-                small.describe(), smallCounts[0], smallCounts[1], large.describe(), largeCounts[0], largeCounts[1]));
+        b.results.fact(String.format(
+                Locale.ROOT,
+                "chains: %s (%,d routes, %,d holds); %s (%,d routes, %,d holds)",
+                small.describe(),
+                smallCounts[0],
+                smallCounts[1],
+                large.describe(),
+                largeCounts[0],
+                largeCounts[1]));
+        runPhases(b, phases, small, large, smallCounts, largeCounts);
+        double minutes = (System.nanoTime() - started) / 6e10;
+        System.out.printf(
+                Locale.ROOT,
+                "done in %.1f min; %s%n",
+                minutes,
+                b.results.allMet() ? "every target met" : "some targets MISSED");
+        if (out != null) {
+            write(b, machine, minutes, phases);
+            System.out.println("wrote " + out);
+        }
+        return 0;
+    }
+
+    /** Runs the chosen phases in their fixed order (JIT warm-up makes the order matter). */
+    private static void runPhases(
+            Bench b, Set<String> phases, Workload small, Workload large, long[] smallCounts, long[] largeCounts)
+            throws IOException {
         if (phases.contains("import")) {
             System.out.println("import:");
             ImportPhase imp = new ImportPhase(b);
@@ -107,37 +159,39 @@ public final class Benchmarks implements Callable<Integer> {
             System.out.println("pdf:");
             new PdfPhase(b).run();
         }
-        double minutes = (System.nanoTime() - started) / 6e10;
-        System.out.printf(Locale.ROOT, "done in %.1f min; %s%n", minutes, b.results.allMet() ? "every target met"
-                : "some targets MISSED");
-        if (out != null) {
-            write(b, machine, minutes, phases);
-            System.out.println("wrote " + out);
-        }
-        return 0;
     }
 
     private void write(Bench b, String machine, double minutes, Set<String> phases) throws IOException {
         StringBuilder m = new StringBuilder();
         m.append(BEGIN).append("\n\n");
-        m.append("Measured on ").append(LocalDate.now()).append(" by `").append(command).append("`")
+        m.append("Measured on ")
+                .append(LocalDate.now())
+                .append(" by `")
+                .append(command)
+                .append("`")
                 .append(phases.size() == PHASES.size() ? "" : " (phases: " + String.join(", ", phases) + ")")
                 .append(String.format(Locale.ROOT, " in %.0f minutes.%n%n", minutes));
         m.append("Machine: ").append(machine).append(".\n\n");
         m.append(b.results.markdownTable()).append('\n');
-        m.append("How each figure was taken:\n\n").append(b.results.markdownNotes()).append('\n');
+        m.append("How each figure was taken:\n\n")
+                .append(b.results.markdownNotes())
+                .append('\n');
         m.append("Other figures from the same run:\n\n");
         b.results.facts().forEach(f -> m.append("- ").append(f).append('\n'));
         m.append('\n').append(END);
-        String text = Files.exists(out) ? Files.readString(out, StandardCharsets.UTF_8) : "# Benchmarks\n\n" + BEGIN
-                + "\n" + END + "\n";
+        String text = Files.exists(out)
+                ? Files.readString(out, StandardCharsets.UTF_8)
+                : "# Benchmarks\n\n" + BEGIN + "\n" + END + "\n";
         int i = text.indexOf(BEGIN);
         int j = text.indexOf(END);
-        String next = i < 0 || j < i ? text + "\n" + m + "\n" : text.substring(0, i) + m + text.substring(j
-                + END.length());
+        String next =
+                i < 0 || j < i ? text + "\n" + m + "\n" : text.substring(0, i) + m + text.substring(j + END.length());
         Path tmp = out.resolveSibling(out.getFileName() + ".tmp");
         Files.writeString(tmp, next, StandardCharsets.UTF_8);
-        Files.move(tmp, out, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
+        Files.move(
+                tmp,
+                out,
+                java.nio.file.StandardCopyOption.REPLACE_EXISTING,
                 java.nio.file.StandardCopyOption.ATOMIC_MOVE);
     }
 

@@ -49,23 +49,25 @@ public final class ChildRun {
         }
     }
 
-    private ChildRun() {
-    }
+    private ChildRun() {}
 
     /**
      * Runs a command in a folder; its output goes to {@code logs/name.out} and {@code logs/name.err}. A GC log
      * written to {@code gcLog} (when not null) is read for the live heap.
      */
-    public static Result run(List<String> command, Map<String, String> env, Path dir, Path logs, String name,
-            Path gcLog) throws IOException {
+    public static Result run(
+            List<String> command, Map<String, String> env, Path dir, Path logs, String name, Path gcLog)
+            throws IOException {
         Files.createDirectories(logs);
         Path out = logs.resolve(name + ".out");
         Path err = logs.resolve(name + ".err");
         if (gcLog != null) {
             Files.deleteIfExists(gcLog);
         }
-        ProcessBuilder pb = new ProcessBuilder(command).directory(dir.toFile())
-                .redirectOutput(out.toFile()).redirectError(err.toFile());
+        ProcessBuilder pb = new ProcessBuilder(command)
+                .directory(dir.toFile())
+                .redirectOutput(out.toFile())
+                .redirectError(err.toFile());
         pb.environment().putAll(env);
         long start = System.nanoTime();
         Process p = pb.start();

@@ -39,8 +39,16 @@ final class ImportPhase {
             Bench.delete(dir);
             b.variset("init-" + w.name(), List.of(), false, "--archive", dir.toString(), "init")
                     .orFail("variset init");
-            ChildRun.Result r = b.variset("import-" + w.name(), HEAP_CAP, true, "--archive", dir.toString(),
-                    "import", w.walls().toString(), w.routes().toString(), w.holds().toString())
+            ChildRun.Result r = b.variset(
+                            "import-" + w.name(),
+                            HEAP_CAP,
+                            true,
+                            "--archive",
+                            dir.toString(),
+                            "import",
+                            w.walls().toString(),
+                            w.routes().toString(),
+                            w.holds().toString())
                     .orFail("variset import of the " + w.name() + " chain");
             variset.add(r.seconds());
             rss = Math.max(rss, r.peakRssKb());
@@ -51,16 +59,40 @@ final class ImportPhase {
             }
             floorRss = Math.max(floorRss, lastFloorRss);
         }
+        report(w, holds, variset, floor, rss, liveHeap, floorRss);
+    }
+
+    /** The import's rate against the floor's, and its heap, as result rows. */
+    private void report(
+            Workload w, long holds, List<Double> variset, List<Double> floor, long rss, long liveHeap, long floorRss) {
         double v = Stats.median(variset);
         double f = Stats.median(floor);
-        b.results.add(new Results.Row("import, " + w.name() + " chain (holds/s)", rate(holds / v, v),
-                rate(holds / f, f), v / f, 1.5, String.format(Locale.ROOT, "%d holds; median of %d runs each; "
-                        + "ratio = Variset time / floor time; Variset %s, floor %s", holds, b.runs, seconds(variset),
+        b.results.add(new Results.Row(
+                "import, " + w.name() + " chain (holds/s)",
+                rate(holds / v, v),
+                rate(holds / f, f),
+                v / f,
+                1.5,
+                String.format(
+                        Locale.ROOT,
+                        "%d holds; median of %d runs each; "
+                                + "ratio = Variset time / floor time; Variset %s, floor %s",
+                        holds,
+                        b.runs,
+                        seconds(variset),
                         seconds(floor))));
-        b.results.add(new Results.Row("import heap, " + w.name() + " chain (live after GC)", liveHeap + " MB",
-                "512 MB cap", liveHeap / 512.0, 1.0, String.format(Locale.ROOT, "largest heap left after a "
-                        + "collection in the GC log, run under -Xmx512m; peak RSS %d MB (floor %d MB)",
-                        rss / 1024, floorRss / 1024)));
+        b.results.add(new Results.Row(
+                "import heap, " + w.name() + " chain (live after GC)",
+                liveHeap + " MB",
+                "512 MB cap",
+                liveHeap / 512.0,
+                1.0,
+                String.format(
+                        Locale.ROOT,
+                        "largest heap left after a "
+                                + "collection in the GC log, run under -Xmx512m; peak RSS %d MB (floor %d MB)",
+                        rss / 1024,
+                        floorRss / 1024)));
     }
 
     private double floor(Workload w, int i) throws IOException {
@@ -68,9 +100,19 @@ final class ImportPhase {
         Bench.delete(dir);
         b.variset("init-floor-" + w.name(), List.of(), false, "--archive", dir.toString(), "init")
                 .orFail("variset init");
-        ChildRun.Result r = b.java("floor-" + w.name(), HEAP_CAP, true, List.of("-cp", b.benchJar().toString(),
-                "org.variset.bench.floor.RawFloor", dir.toString(), w.walls().toString(), w.routes().toString(),
-                w.holds().toString())).orFail("the import floor");
+        ChildRun.Result r = b.java(
+                        "floor-" + w.name(),
+                        HEAP_CAP,
+                        true,
+                        List.of(
+                                "-cp",
+                                b.benchJar().toString(),
+                                "org.variset.bench.floor.RawFloor",
+                                dir.toString(),
+                                w.walls().toString(),
+                                w.routes().toString(),
+                                w.holds().toString()))
+                .orFail("the import floor");
         lastFloorRss = r.peakRssKb();
         System.out.printf(Locale.ROOT, "    run %d: floor %.1f s%n", i + 1, r.seconds());
         return r.seconds();

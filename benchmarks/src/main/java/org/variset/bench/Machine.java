@@ -8,14 +8,17 @@ import java.util.Locale;
 
 /** A line describing the machine the figures were measured on. */
 final class Machine {
-    private Machine() {
-    }
+    private Machine() {}
 
     static String describe() {
         String cpu = firstValue(Path.of("/proc/cpuinfo"), "model name");
         String mem = firstValue(Path.of("/proc/meminfo"), "MemTotal");
-        String memory = mem == null ? "unknown memory" : String.format(Locale.ROOT, "%.1f GiB RAM",
-                Long.parseLong(mem.replace("kB", "").strip()) / 1024.0 / 1024.0);
+        String memory = mem == null
+                ? "unknown memory"
+                : String.format(
+                        Locale.ROOT,
+                        "%.1f GiB RAM",
+                        Long.parseLong(mem.replace("kB", "").strip()) / 1024.0 / 1024.0);
         return Runtime.getRuntime().availableProcessors() + " cores" + (cpu == null ? "" : " (" + cpu + ")") + ", "
                 + memory + ", " + System.getProperty("os.name") + " " + System.getProperty("os.version") + ", "
                 + System.getProperty("java.vm.name") + " " + System.getProperty("java.version");

@@ -35,8 +35,14 @@ final class Results {
 
     void add(Row r) {
         rows.add(r);
-        System.out.printf(Locale.ROOT, "  %-44s variset %-14s baseline %-14s ratio %5.2fx  %s%n", r.what(),
-                r.variset(), r.baseline(), r.ratio(), r.verdict());
+        System.out.printf(
+                Locale.ROOT,
+                "  %-44s variset %-14s baseline %-14s ratio %5.2fx  %s%n",
+                r.what(),
+                r.variset(),
+                r.baseline(),
+                r.ratio(),
+                r.verdict());
     }
 
     /** A figure that has no baseline (memory, sizes). */
@@ -57,8 +63,15 @@ final class Results {
         StringBuilder b = new StringBuilder();
         b.append("| measure | Variset | baseline | ratio | target | |\n|---|---|---|---|---|---|\n");
         for (Row r : rows) {
-            b.append(String.format(Locale.ROOT, "| %s | %s | %s | %.2fx | %s | %s |%n", r.what(), r.variset(),
-                    r.baseline(), r.ratio(), r.targetText(), r.verdict()));
+            b.append(String.format(
+                    Locale.ROOT,
+                    "| %s | %s | %s | %.2fx | %s | %s |%n",
+                    r.what(),
+                    r.variset(),
+                    r.baseline(),
+                    r.ratio(),
+                    r.targetText(),
+                    r.verdict()));
         }
         return b.toString();
     }

@@ -45,12 +45,11 @@ final class SearchPhase {
     private static final int LIMIT = 20;
     private static final int WARM_UP_ROUNDS = 20;
     private static final int ROUNDS = 60;
-    private static final Sort RELEVANCE = new Sort(SortField.FIELD_SCORE, new SortField("set", SortField.Type.LONG,
-            true));
+    private static final Sort RELEVANCE =
+            new Sort(SortField.FIELD_SCORE, new SortField("set", SortField.Type.LONG, true));
 
     /** A query in Variset's language and the same query built by hand. */
-    private record Case(String query, String gym, Supplier<Query> raw) {
-    }
+    private record Case(String query, String gym, Supplier<Query> raw) {}
 
     private final Bench b;
 
@@ -77,8 +76,8 @@ final class SearchPhase {
                     throw new IllegalStateException("the hand-built query for '" + c.query() + "' does not match "
                             + "Variset's: " + v.total() + " hits " + ids + " against " + total + " hits " + raw);
                 }
-                b.results.fact(String.format(Locale.ROOT, "search '%s'%s: %,d hits", c.query(),
-                        c.gym() == null ? "" : " (--gym)", total));
+                b.results.fact(String.format(
+                        Locale.ROOT, "search '%s'%s: %,d hits", c.query(), c.gym() == null ? "" : " (--gym)", total));
             }
             List<Double> vt = new ArrayList<>();
             List<Double> rt = new ArrayList<>();
@@ -97,14 +96,21 @@ final class SearchPhase {
                     }
                 }
             }
-            String note = String.format(Locale.ROOT, "%d queries x %d rounds after %d warm-up rounds, top %d by "
-                    + "relevance with exact totals, on the %s chain's index (%,d routes)", cases.size(), rounds,
-                    WARM_UP_ROUNDS, LIMIT, w.name(), reader.numDocs());
+            String note = String.format(
+                    Locale.ROOT,
+                    "%d queries x %d rounds after %d warm-up rounds, top %d by "
+                            + "relevance with exact totals, on the %s chain's index (%,d routes)",
+                    cases.size(),
+                    rounds,
+                    WARM_UP_ROUNDS,
+                    LIMIT,
+                    w.name(),
+                    reader.numDocs());
             for (int p : new int[] {50, 95}) {
                 double v = Stats.percentile(vt, p);
                 double r = Stats.percentile(rt, p);
-                b.results.add(new Results.Row("search p" + p + ", " + w.name() + " chain", ms(v), ms(r), v / r, 1.3,
-                        note));
+                b.results.add(
+                        new Results.Row("search p" + p + ", " + w.name() + " chain", ms(v), ms(r), v / r, 1.3, note));
             }
         }
     }
@@ -135,8 +141,8 @@ final class SearchPhase {
         if (c.gym() != null) {
             q.add(new TermQuery(new Term("gym", c.gym().toLowerCase(Locale.ROOT))), Occur.FILTER);
         }
-        TopDocs top = s.search(q.build(), new TopFieldCollectorManager(RELEVANCE, LIMIT, null, Integer.MAX_VALUE,
-                false));
+        TopDocs top =
+                s.search(q.build(), new TopFieldCollectorManager(RELEVANCE, LIMIT, null, Integer.MAX_VALUE, false));
         StoredFields stored = s.storedFields();
         for (ScoreDoc d : top.scoreDocs) {
             ids.add(Long.parseLong(stored.document(d.doc).get("id")));
@@ -147,30 +153,61 @@ final class SearchPhase {
     private static List<Case> cases(String gym) {
         GradeReader grades = GradeReader.standard();
         double v4 = grades.read("V4", Discipline.BOULDER, null, Set.of()).lowLevel() - 0.5;
-        double v6 = Math.nextDown(grades.read("V6", Discipline.BOULDER, null, Set.of()).highLevel() + 0.5);
+        double v6 = Math.nextDown(
+                grades.read("V6", Discipline.BOULDER, null, Set.of()).highLevel() + 0.5);
         LocalDate day = LocalDate.of(2024, 6, 15);
         return List.of(
                 new Case("hold:crimp@90", null, () -> term("hold", "crimp@90")),
                 new Case("move:heel-hook", gym, () -> term("move", "heelhook")),
-                new Case("hold:sloper grade:V4..V6", null, () -> and(term("hold", "sloper"),
-                        new BooleanQuery.Builder().add(new BooleanQuery.Builder()
-                                .add(term("discipline", "boulder"), Occur.FILTER)
-                                .add(DoublePoint.newRangeQuery("ircra", v4, v6), Occur.MUST).build(), Occur.SHOULD)
-                                .build())),
+                new Case(
+                        "hold:sloper grade:V4..V6",
+                        null,
+                        () -> and(
+                                term("hold", "sloper"),
+                                new BooleanQuery.Builder()
+                                        .add(
+                                                new BooleanQuery.Builder()
+                                                        .add(term("discipline", "boulder"), Occur.FILTER)
+                                                        .add(DoublePoint.newRangeQuery("ircra", v4, v6), Occur.MUST)
+                                                        .build(),
+                                                Occur.SHOULD)
+                                        .build())),
                 new Case("move:dyno hold:jug@0", null, () -> and(term("move", "dyno"), term("hold", "jug@0"))),
-                new Case("grip:180 standing:2024-06-15", null, () -> and(term("grip", "180"),
-                        new BooleanQuery.Builder()
-                                .add(LongPoint.newRangeQuery("set", Long.MIN_VALUE, day.toEpochDay()), Occur.FILTER)
-                                .add(LongPoint.newRangeQuery("stripped", day.toEpochDay() + 1, Long.MAX_VALUE),
-                                        Occur.FILTER).build())),
-                new Case("hold:pinch -move:dyno", gym, () -> new BooleanQuery.Builder()
-                        .add(term("hold", "pinch"), Occur.MUST).add(term("move", "dyno"), Occur.MUST_NOT).build()),
-                new Case("hold:crimp@90 OR hold:crimp@270", null, () -> new BooleanQuery.Builder()
-                        .add(term("hold", "crimp@90"), Occur.SHOULD).add(term("hold", "crimp@270"), Occur.SHOULD)
-                        .build()),
-                new Case("heel hook", null, () -> and(new BooleanQuery.Builder()
-                        .add(term("move", "heelhook"), Occur.SHOULD)
-                        .add(new PhraseQuery("text", "heel", "hook"), Occur.SHOULD).build())));
+                new Case(
+                        "grip:180 standing:2024-06-15",
+                        null,
+                        () -> and(
+                                term("grip", "180"),
+                                new BooleanQuery.Builder()
+                                        .add(
+                                                LongPoint.newRangeQuery("set", Long.MIN_VALUE, day.toEpochDay()),
+                                                Occur.FILTER)
+                                        .add(
+                                                LongPoint.newRangeQuery(
+                                                        "stripped", day.toEpochDay() + 1, Long.MAX_VALUE),
+                                                Occur.FILTER)
+                                        .build())),
+                new Case(
+                        "hold:pinch -move:dyno",
+                        gym,
+                        () -> new BooleanQuery.Builder()
+                                .add(term("hold", "pinch"), Occur.MUST)
+                                .add(term("move", "dyno"), Occur.MUST_NOT)
+                                .build()),
+                new Case(
+                        "hold:crimp@90 OR hold:crimp@270",
+                        null,
+                        () -> new BooleanQuery.Builder()
+                                .add(term("hold", "crimp@90"), Occur.SHOULD)
+                                .add(term("hold", "crimp@270"), Occur.SHOULD)
+                                .build()),
+                new Case(
+                        "heel hook",
+                        null,
+                        () -> and(new BooleanQuery.Builder()
+                                .add(term("move", "heelhook"), Occur.SHOULD)
+                                .add(new PhraseQuery("text", "heel", "hook"), Occur.SHOULD)
+                                .build())));
     }
 
     private static Query term(String field, String value) {

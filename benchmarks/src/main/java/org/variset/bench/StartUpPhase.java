@@ -35,10 +35,21 @@ final class StartUpPhase {
             boolean keep = i > 0;
             ChildRun.Result r = b.variset("info", List.of(), false, "--archive", dir.toString(), "info")
                     .orFail("variset info");
-            ChildRun.Result n = ChildRun.run(List.of(b.launcher().toString(), "--archive", dir.toString(), "info"),
-                    Map.of("VARISET_CDS", "off"), b.work, b.logs(), "info-no-cds", null).orFail("variset info");
-            ChildRun.Result v = b.variset("version", List.of(), false, "--version").orFail("variset --version");
-            ChildRun.Result x = b.java("bare", List.of(), false, List.of("-jar", b.bareJar().toString(), "--version"))
+            ChildRun.Result n = ChildRun.run(
+                            List.of(b.launcher().toString(), "--archive", dir.toString(), "info"),
+                            Map.of("VARISET_CDS", "off"),
+                            b.work,
+                            b.logs(),
+                            "info-no-cds",
+                            null)
+                    .orFail("variset info");
+            ChildRun.Result v =
+                    b.variset("version", List.of(), false, "--version").orFail("variset --version");
+            ChildRun.Result x = b.java(
+                            "bare",
+                            List.of(),
+                            false,
+                            List.of("-jar", b.bareJar().toString(), "--version"))
                     .orFail("the bare picocli jar");
             if (keep) {
                 info.add(r.seconds());
@@ -50,10 +61,20 @@ final class StartUpPhase {
         }
         double vi = Stats.median(info);
         double ba = Stats.median(bare);
-        b.results.add(new Results.Row("cold start: variset info vs bare picocli --version", secs(vi), secs(ba),
-                vi / ba, 3.0, String.format(Locale.ROOT, "median of %d runs each after one unmeasured run; "
-                        + "launcher with its sharing archive; without it info took %s, variset --version %s; info "
-                        + "peak RSS %d MB", runs, secs(Stats.median(infoWithout)), secs(Stats.median(version)),
+        b.results.add(new Results.Row(
+                "cold start: variset info vs bare picocli --version",
+                secs(vi),
+                secs(ba),
+                vi / ba,
+                3.0,
+                String.format(
+                        Locale.ROOT,
+                        "median of %d runs each after one unmeasured run; "
+                                + "launcher with its sharing archive; without it info took %s, variset --version %s; info "
+                                + "peak RSS %d MB",
+                        runs,
+                        secs(Stats.median(infoWithout)),
+                        secs(Stats.median(version)),
                         rss / 1024)));
     }
 

@@ -5,8 +5,7 @@ import java.util.List;
 
 /** Order statistics of repeated measurements. */
 public final class Stats {
-    private Stats() {
-    }
+    private Stats() {}
 
     /** The median (the mean of the two middle values for an even count). */
     public static double median(List<Double> xs) {

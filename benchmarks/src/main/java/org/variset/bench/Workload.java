@@ -55,10 +55,15 @@ record Workload(String name, int gyms, int years, Path dir) {
         }
         Files.deleteIfExists(marker);
         long start = System.nanoTime();
-        SampleGenerator.Summary s = SampleGenerator.write(new SampleGenerator.Options(gyms, years, SEED, END, false),
-                dir);
-        System.out.printf(Locale.ROOT, "  generated %s: %d routes, %d holds in %.1f s%n", describe(), s.routes(),
-                s.holds(), (System.nanoTime() - start) / 1e9);
+        SampleGenerator.Summary s =
+                SampleGenerator.write(new SampleGenerator.Options(gyms, years, SEED, END, false), dir);
+        System.out.printf(
+                Locale.ROOT,
+                "  generated %s: %d routes, %d holds in %.1f s%n",
+                describe(),
+                s.routes(),
+                s.holds(),
+                (System.nanoTime() - start) / 1e9);
         Files.writeString(marker, stamp + "\n" + s.routes() + " " + s.holds(), StandardCharsets.UTF_8);
         return new long[] {s.routes(), s.holds()};
     }

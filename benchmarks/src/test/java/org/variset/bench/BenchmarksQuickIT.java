@@ -20,17 +20,34 @@ class BenchmarksQuickIT {
 
     @Test
     void everyPhaseRunsAndWritesItsRow() throws Exception {
-        Path repo = Path.of(System.getProperty("variset.repo", "..")).toAbsolutePath().normalize();
+        Path repo = Path.of(System.getProperty("variset.repo", ".."))
+                .toAbsolutePath()
+                .normalize();
         Path out = dir.resolve("BENCHMARKS.md");
         Files.writeString(out, "# Benchmarks\n\nHand-written text above.\n", StandardCharsets.UTF_8);
-        int status = new CommandLine(new Benchmarks()).execute("--repo", repo.toString(), "--work",
-                dir.resolve("work").toString(), "--quick", "--out", out.toString(), "--command", "quick test");
+        int status = new CommandLine(new Benchmarks())
+                .execute(
+                        "--repo",
+                        repo.toString(),
+                        "--work",
+                        dir.resolve("work").toString(),
+                        "--quick",
+                        "--out",
+                        out.toString(),
+                        "--command",
+                        "quick test");
         assertThat(status).isZero();
         String md = Files.readString(out, StandardCharsets.UTF_8);
-        assertThat(md).startsWith("# Benchmarks\n\nHand-written text above.\n")
-                .contains("by `quick test`", "| import, small chain (holds/s) |", "| import, large chain (holds/s) |",
-                        "| import heap, large chain (live after GC) |", "| search p50, large chain |",
-                        "| search p95, large chain |", "| audit one reset, warm (large vs small) |",
+        assertThat(md)
+                .startsWith("# Benchmarks\n\nHand-written text above.\n")
+                .contains(
+                        "by `quick test`",
+                        "| import, small chain (holds/s) |",
+                        "| import, large chain (holds/s) |",
+                        "| import heap, large chain (live after GC) |",
+                        "| search p50, large chain |",
+                        "| search p95, large chain |",
+                        "| audit one reset, warm (large vs small) |",
                         "| cold start: variset info vs bare picocli --version |",
                         "| PDF audit of a 60-route reset, two-year archive |");
         assertThat(Files.size(dir.resolve("work/annex-audit.pdf"))).isPositive();

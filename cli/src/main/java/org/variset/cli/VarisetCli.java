@@ -22,8 +22,8 @@ import picocli.CommandLine;
  * @param home the user's home folder
  * @param clock the clock that decides "today"
  */
-public record VarisetCli(BufferedReader in, PrintWriter out, PrintWriter err, Map<String, String> env, Path home,
-        Clock clock) {
+public record VarisetCli(
+        BufferedReader in, PrintWriter out, PrintWriter err, Map<String, String> env, Path home, Clock clock) {
 
     static {
         // Hibernate logs through JBoss Logging; send it to java.util.logging, which RootCommand keeps quiet.
@@ -44,10 +44,13 @@ public record VarisetCli(BufferedReader in, PrintWriter out, PrintWriter err, Ma
 
     /** The real console, environment, home folder and clock. */
     public static VarisetCli system() {
-        return new VarisetCli(new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8)),
+        return new VarisetCli(
+                new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8)),
                 new PrintWriter(System.out, true, StandardCharsets.UTF_8),
-                new PrintWriter(System.err, true, StandardCharsets.UTF_8), System.getenv(),
-                Path.of(System.getProperty("user.home")), Clock.systemUTC());
+                new PrintWriter(System.err, true, StandardCharsets.UTF_8),
+                System.getenv(),
+                Path.of(System.getProperty("user.home")),
+                Clock.systemUTC());
     }
 
     /**

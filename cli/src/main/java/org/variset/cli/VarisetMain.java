@@ -2,8 +2,7 @@ package org.variset.cli;
 
 /** The program's entry point: the only place that exits the JVM. */
 public final class VarisetMain {
-    private VarisetMain() {
-    }
+    private VarisetMain() {}
 
     /**
      * Runs one command and exits with its status.

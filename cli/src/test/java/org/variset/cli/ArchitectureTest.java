@@ -12,20 +12,34 @@ import com.tngtech.archunit.lang.ArchRule;
 class ArchitectureTest {
 
     @ArchTest
-    static final ArchRule onlyTheCliUsesPicocli = noClasses().that().resideOutsideOfPackage("org.variset.cli..")
-            .should().dependOnClassesThat().resideInAPackage("picocli..");
+    static final ArchRule onlyTheCliUsesPicocli = noClasses()
+            .that()
+            .resideOutsideOfPackage("org.variset.cli..")
+            .should()
+            .dependOnClassesThat()
+            .resideInAPackage("picocli..");
 
     @ArchTest
-    static final ArchRule coreDependsOnNoOtherModule = noClasses().that().resideInAPackage("org.variset.archive..")
-            .should().dependOnClassesThat().resideInAnyPackage("org.variset.imports..", "org.variset.reports..",
-                    "org.variset.sample..", "org.variset.cli..");
+    static final ArchRule coreDependsOnNoOtherModule = noClasses()
+            .that()
+            .resideInAPackage("org.variset.archive..")
+            .should()
+            .dependOnClassesThat()
+            .resideInAnyPackage(
+                    "org.variset.imports..", "org.variset.reports..", "org.variset.sample..", "org.variset.cli..");
 
     @ArchTest
-    static final ArchRule gradesStayPure = noClasses().that().resideInAPackage("org.variset.archive.grade..")
-            .should().dependOnClassesThat().resideInAnyPackage("jakarta.persistence..", "org.hibernate..",
-                    "org.variset.archive.store..");
+    static final ArchRule gradesStayPure = noClasses()
+            .that()
+            .resideInAPackage("org.variset.archive.grade..")
+            .should()
+            .dependOnClassesThat()
+            .resideInAnyPackage("jakarta.persistence..", "org.hibernate..", "org.variset.archive.store..");
 
     @ArchTest
-    static final ArchRule onlyTheCliExits = noClasses().that().doNotHaveFullyQualifiedName(
-            "org.variset.cli.VarisetMain").should().callMethod(System.class, "exit", int.class);
+    static final ArchRule onlyTheCliExits = noClasses()
+            .that()
+            .doNotHaveFullyQualifiedName("org.variset.cli.VarisetMain")
+            .should()
+            .callMethod(System.class, "exit", int.class);
 }

@@ -19,7 +19,8 @@ class ArchiveCommandsTest {
         String dir = home.resolve("a").toString();
         CliRun init = CliRun.run(home, "--archive", dir, "init").exits(ExitCode.OK);
         assertThat(init.out()).contains("Created an empty archive at " + dir);
-        CliRun info = CliRun.run(home, "--archive", dir, "info", "--format", "json").exits(ExitCode.OK);
+        CliRun info =
+                CliRun.run(home, "--archive", dir, "info", "--format", "json").exits(ExitCode.OK);
         JsonNode j = new ObjectMapper().readTree(info.out());
         assertThat(j.get("schema_version").asInt()).isEqualTo(org.variset.archive.store.SchemaVersion.LATEST);
         for (String key : new String[] {"gyms", "walls", "resets", "routes", "holds", "setters"}) {
@@ -38,7 +39,8 @@ class ArchiveCommandsTest {
 
     @Test
     void saysHowToCreateAMissingArchive() {
-        CliRun r = CliRun.run(home, "--archive", home.resolve("none").toString(), "info").exits(ExitCode.ARCHIVE);
+        CliRun r = CliRun.run(home, "--archive", home.resolve("none").toString(), "info")
+                .exits(ExitCode.ARCHIVE);
         assertThat(r.err()).contains("No archive at").contains("init");
         assertThat(r.err()).doesNotContain("\tat ");
     }
@@ -56,8 +58,11 @@ class ArchiveCommandsTest {
     class WhereTheArchiveLives {
         @Test
         void takesTheOptionFirst() {
-            Map<String, String> env = Map.of("VARISET_ARCHIVE", home.resolve("env").toString(),
-                    "XDG_DATA_HOME", home.resolve("xdg").toString());
+            Map<String, String> env = Map.of(
+                    "VARISET_ARCHIVE",
+                    home.resolve("env").toString(),
+                    "XDG_DATA_HOME",
+                    home.resolve("xdg").toString());
             CliRun r = CliRun.run(env, home, "--archive", home.resolve("opt").toString(), "init")
                     .exits(ExitCode.OK);
             assertThat(r.out()).contains(home.resolve("opt").toString()).contains("from --archive");
@@ -65,15 +70,19 @@ class ArchiveCommandsTest {
 
         @Test
         void takesTheEnvironmentVariableNext() {
-            Map<String, String> env = Map.of("VARISET_ARCHIVE", home.resolve("env").toString(),
-                    "XDG_DATA_HOME", home.resolve("xdg").toString());
+            Map<String, String> env = Map.of(
+                    "VARISET_ARCHIVE",
+                    home.resolve("env").toString(),
+                    "XDG_DATA_HOME",
+                    home.resolve("xdg").toString());
             assertThat(CliRun.run(env, home, "init").exits(ExitCode.OK).out())
                     .contains(home.resolve("env").toString());
         }
 
         @Test
         void takesXdgDataHomeThen() {
-            Map<String, String> env = Map.of("XDG_DATA_HOME", home.resolve("xdg").toString());
+            Map<String, String> env =
+                    Map.of("XDG_DATA_HOME", home.resolve("xdg").toString());
             assertThat(CliRun.run(env, home, "init").exits(ExitCode.OK).out())
                     .contains(home.resolve("xdg/variset").toString());
         }
@@ -86,7 +95,8 @@ class ArchiveCommandsTest {
 
         @Test
         void letsTheOptionFollowTheSubcommand() {
-            CliRun.run(home, "init", "--archive", home.resolve("late").toString()).exits(ExitCode.OK);
+            CliRun.run(home, "init", "--archive", home.resolve("late").toString())
+                    .exits(ExitCode.OK);
             assertThat(home.resolve("late/archive.mv.db")).exists();
         }
     }

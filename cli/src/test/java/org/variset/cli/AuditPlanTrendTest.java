@@ -29,6 +29,7 @@ class AuditPlanTrendTest {
 
     @TempDir
     static Path home;
+
     private TestArchive archive;
     private JsonNode expected;
 
@@ -36,8 +37,12 @@ class AuditPlanTrendTest {
     void importTheGym() throws IOException {
         archive = TestArchive.fresh(home, "archive");
         run("init").exits(ExitCode.OK);
-        run("import", FILES.resolve("walls.csv").toString(), FILES.resolve("routes.csv").toString(),
-                FILES.resolve("holds.csv").toString()).exits(ExitCode.OK);
+        run(
+                        "import",
+                        FILES.resolve("walls.csv").toString(),
+                        FILES.resolve("routes.csv").toString(),
+                        FILES.resolve("holds.csv").toString())
+                .exits(ExitCode.OK);
         expected = JSON.readTree(FILES.resolve("expected.json").toFile());
     }
 
@@ -60,8 +65,8 @@ class AuditPlanTrendTest {
         List<String> out = new ArrayList<>();
         a.forEach(p -> {
             boolean array = p.isArray();
-            out.add((array ? p.get(0) : p.get("route")).asText() + " | " + (array ? p.get(1) : p.get("other"))
-                    .asText() + " | " + String.format("%.12f", (array ? p.get(2) : p.get("jaccard")).asDouble()));
+            out.add((array ? p.get(0) : p.get("route")).asText() + " | " + (array ? p.get(1) : p.get("other")).asText()
+                    + " | " + String.format("%.12f", (array ? p.get(2) : p.get("jaccard")).asDouble()));
         });
         return out;
     }
@@ -80,16 +85,34 @@ class AuditPlanTrendTest {
 
         @Test
         void measuresGripsAsScipyDoes() {
-            close(a.get("grip"), e.at("/figures/grip"), "n", "resultant_length", "mean_direction_deg",
-                    "circular_variance", "circular_sd_deg", "rayleigh_p", "sector_entropy", "horizontal_edge_share");
-            assertThat(a.at("/grip/sectors").toString()).isEqualTo(e.at("/figures/grip/sectors").toString());
+            close(
+                    a.get("grip"),
+                    e.at("/figures/grip"),
+                    "n",
+                    "resultant_length",
+                    "mean_direction_deg",
+                    "circular_variance",
+                    "circular_sd_deg",
+                    "rayleigh_p",
+                    "sector_entropy",
+                    "horizontal_edge_share");
+            assertThat(a.at("/grip/sectors").toString())
+                    .isEqualTo(e.at("/figures/grip/sectors").toString());
         }
 
         @Test
         void measuresVarietyAsScipyDoes() {
             for (String block : List.of("holds", "moves", "styles", "sizes")) {
-                close(a.get(block), e.at("/figures/" + block), "n", "richness", "shannon", "gini_simpson", "hill_n1",
-                        "hill_n2", "coverage");
+                close(
+                        a.get(block),
+                        e.at("/figures/" + block),
+                        "n",
+                        "richness",
+                        "shannon",
+                        "gini_simpson",
+                        "hill_n1",
+                        "hill_n2",
+                        "coverage");
             }
         }
 
@@ -99,8 +122,10 @@ class AuditPlanTrendTest {
                     .containsExactlyInAnyOrderElementsOf(pairs(e.get("near_repeats")));
             assertThat(pairs(a.at("/repetition/internal_repeats")))
                     .containsExactlyInAnyOrderElementsOf(pairs(e.get("internal_repeats")));
-            assertThat(a.at("/repetition/novelty").asDouble()).isCloseTo(e.get("novelty").asDouble(), within(TOL));
-            assertThat(a.at("/repetition/window_routes").asInt()).isEqualTo(e.get("window_routes").asInt());
+            assertThat(a.at("/repetition/novelty").asDouble())
+                    .isCloseTo(e.get("novelty").asDouble(), within(TOL));
+            assertThat(a.at("/repetition/window_routes").asInt())
+                    .isEqualTo(e.get("window_routes").asInt());
             assertThat(a.at("/repetition/hold_reuse_rate").asDouble())
                     .isCloseTo(e.get("hold_reuse_rate").asDouble(), within(TOL));
         }
@@ -116,7 +141,9 @@ class AuditPlanTrendTest {
         @Test
         void classifiesProfilesAndMeasuresLines() {
             for (String c : List.of("steady", "sustained", "single_crux", "multi_crux", "unclassified")) {
-                assertThat(a.at("/profiles/" + c).asInt()).as(c).isEqualTo(e.at("/figures/profiles/" + c).asInt());
+                assertThat(a.at("/profiles/" + c).asInt())
+                        .as(c)
+                        .isEqualTo(e.at("/figures/profiles/" + c).asInt());
             }
             close(a.get("profiles"), e.at("/figures/profiles"), "split_entropy");
             close(a.get("line"), e, "gie_mean", "gie_min", "gie_max");
@@ -132,8 +159,11 @@ class AuditPlanTrendTest {
 
         @Test
         void saysWhatStandsOutInPlainWords() {
-            String text = run("audit", "--reset", "Arch 2026-02-02", "--findings", "20").exits(ExitCode.OK).out();
-            assertThat(text).contains("Score 49 of 100")
+            String text = run("audit", "--reset", "Arch 2026-02-02", "--findings", "20")
+                    .exits(ExitCode.OK)
+                    .out();
+            assertThat(text)
+                    .contains("Score 49 of 100")
                     .contains("A2 (Arch, 2026-02-02) repeats A1 (Arch, 2026-01-05): same crimp@0, jug@0, "
                             + "pinch@90, pinch@270 and 1 more holds, same heel hook > dyno > match "
                             + "(Jaccard 0.846).")
@@ -150,7 +180,8 @@ class AuditPlanTrendTest {
         assertThat(a.get("routes").asInt()).isEqualTo(e.get("routes").asInt());
         close(a.get("grip"), e.at("/figures/grip"), "resultant_length", "sector_entropy");
         close(a.at("/grades/boulder"), e.get("grades"), "emd_to_target", "chi_square", "chi_square_p");
-        assertThat(a.at("/grades/boulder/gaps").toString()).isEqualTo(e.at("/grades/gaps").toString());
+        assertThat(a.at("/grades/boulder/gaps").toString())
+                .isEqualTo(e.at("/grades/gaps").toString());
         assertThat(a.at("/score/score").asDouble()).isCloseTo(e.get("score").asDouble(), within(TOL));
         assertThat(a.at("/score/dropped/0").asText()).isEqualTo("novelty");
         assertThat(a.at("/undefined/repetition.novelty").asText()).contains("not one reset");
@@ -158,8 +189,7 @@ class AuditPlanTrendTest {
 
     @Test
     void auditsOneSettersRoutesAgainstTheOthers() throws IOException {
-        JsonNode a = json("audit", "--setter", "Bo Renner", "--from", "2025-12", "--to", "2026-02", "--format",
-                "json");
+        JsonNode a = json("audit", "--setter", "Bo Renner", "--from", "2025-12", "--to", "2026-02", "--format", "json");
         JsonNode e = expected.get("setter_audit");
         assertThat(a.get("routes").asInt()).isEqualTo(e.get("routes").asInt());
         assertThat(a.at("/reference/routes").asInt()).isEqualTo(e.get("others").asInt());
@@ -178,7 +208,8 @@ class AuditPlanTrendTest {
             rest.add(b.get("up_elsewhere").asInt());
         });
         assertThat(rest.toString().replace(" ", "")).isEqualTo(e.get("rest").toString());
-        assertThat(e.get("optimal_slots").toString().replace(" ", "")).contains(slots.toString().replace(" ", ""));
+        assertThat(e.get("optimal_slots").toString().replace(" ", ""))
+                .contains(slots.toString().replace(" ", ""));
         assertThat(p.at("/grade_slots/emd_to_target_after").asDouble())
                 .isCloseTo(e.get("least_distance").asDouble(), within(TOL));
         assertThat(p.at("/shapes_to_rest").has("J1")).isTrue();
@@ -191,13 +222,20 @@ class AuditPlanTrendTest {
         close(t.get("lifetime"), e.get("lifetime"), "stripped", "median_days", "still_up");
         t.get("walls").forEach(w -> {
             JsonNode x = e.at("/walls/" + w.get("wall").asText());
-            assertThat(w.get("days_since_reset").asInt()).isEqualTo(x.get("days_since_reset").asInt());
-            assertThat(w.get("cycle_days").asInt()).isEqualTo(x.get("cycle_days").asInt());
-            assertThat(w.get("status").asText()).as(w.get("wall").asText()).isEqualTo(x.get("status").asText());
+            assertThat(w.get("days_since_reset").asInt())
+                    .isEqualTo(x.get("days_since_reset").asInt());
+            assertThat(w.get("cycle_days").asInt())
+                    .isEqualTo(x.get("cycle_days").asInt());
+            assertThat(w.get("status").asText())
+                    .as(w.get("wall").asText())
+                    .isEqualTo(x.get("status").asText());
         });
-        t.get("setters").forEach(s -> assertThat(s.get("routes").asInt())
-                .isEqualTo(e.at("/setter_routes/" + s.get("setter").asText()).asInt()));
-        String csv = run("trend", "--from", "2025-12-01", "--to", "2026-03-10", "--format", "csv").exits(ExitCode.OK)
+        t.get("setters")
+                .forEach(s -> assertThat(s.get("routes").asInt())
+                        .isEqualTo(e.at("/setter_routes/" + s.get("setter").asText())
+                                .asInt()));
+        String csv = run("trend", "--from", "2025-12-01", "--to", "2026-03-10", "--format", "csv")
+                .exits(ExitCode.OK)
                 .out();
         assertThat(csv.lines().findFirst().orElseThrow()).startsWith("day,scope,routes,score.score");
         assertThat(csv.lines().count()).isEqualTo(1 + 4 * 4); // four month-ends, gym and three walls
@@ -210,59 +248,90 @@ class AuditPlanTrendTest {
             JsonNode a = json("audit", "--reset", "Arch 2025-12-08", "--format", "json");
             assertThat(a.at("/repetition/novelty").asDouble()).isEqualTo(1.0);
             assertThat(a.at("/repetition/window_routes").asInt()).isZero();
-            assertThat(a.at("/undefined/repetition.hold_reuse_rate").asText()).isEqualTo("the wall has no earlier "
-                    + "reset");
+            assertThat(a.at("/undefined/repetition.hold_reuse_rate").asText())
+                    .isEqualTo("the wall has no earlier " + "reset");
             assertThat(a.has("previous")).isFalse();
         }
 
         @Test
         void auditsAndPlansAWallWithOneReset() {
-            assertThat(run("audit", "--wall", "Bay", "--on", "2026-02-01").exits(ExitCode.OK).out())
-                    .contains("Reset Bay 2026-01-19").doesNotContain("previous reset");
-            assertThat(run("plan", "--wall", "Bay", "--on", "2026-02-01", "--routes", "3").exits(ExitCode.OK).out())
+            assertThat(run("audit", "--wall", "Bay", "--on", "2026-02-01")
+                            .exits(ExitCode.OK)
+                            .out())
+                    .contains("Reset Bay 2026-01-19")
+                    .doesNotContain("previous reset");
+            assertThat(run("plan", "--wall", "Bay", "--on", "2026-02-01", "--routes", "3")
+                            .exits(ExitCode.OK)
+                            .out())
                     .contains("Grade slots:");
         }
 
         @Test
         void saysSoWhenNoRouteIsUp() {
-            assertThat(run("audit", "--standing-on", "2020-01-01").exits(ExitCode.OK).out())
+            assertThat(run("audit", "--standing-on", "2020-01-01")
+                            .exits(ExitCode.OK)
+                            .out())
                     .contains("No route in this set: there is nothing to audit.");
             assertThat(run("trend", "--year", "2020").exits(ExitCode.OK).out()).contains("Notable repeats: none");
         }
 
         @Test
         void plansARopeWallWithoutATarget() {
-            assertThat(run("plan", "--wall", "Spire", "--on", "2026-03-02", "--routes", "2").exits(ExitCode.OK).out())
+            assertThat(run("plan", "--wall", "Spire", "--on", "2026-03-02", "--routes", "2")
+                            .exits(ExitCode.OK)
+                            .out())
                     .contains("Grade slots: none proposed: the gym has no grade target for rope routes");
         }
 
         @Test
         void auditsRoutesWithoutHolds() throws IOException {
-            Path routes = Files.writeString(home.resolve("loft.csv"), "gym,wall,route,set_on,discipline,grade\n"
-                    + "Upstairs Gym,Loft,L1,2026-02-10,boulder,V2\nUpstairs Gym,Loft,L2,2026-02-10,boulder,V3\n");
+            Path routes = Files.writeString(
+                    home.resolve("loft.csv"),
+                    "gym,wall,route,set_on,discipline,grade\n"
+                            + "Upstairs Gym,Loft,L1,2026-02-10,boulder,V2\nUpstairs Gym,Loft,L2,2026-02-10,boulder,V3\n");
             String other = home.resolve("other").toString();
             CliRun.run(home, "--archive", other, "init").exits(ExitCode.OK);
             CliRun.run(home, "--archive", other, "import", routes.toString()).exits(ExitCode.OK);
             String text = CliRun.run(home, "--archive", other, "audit", "--wall", "Loft", "--on", "2026-02-10")
-                    .exits(ExitCode.OK).out();
+                    .exits(ExitCode.OK)
+                    .out();
             assertThat(text).contains("No hold placements are recorded for these routes");
-            JsonNode a = JSON.readTree(CliRun.run(home, "--archive", other, "audit", "--wall", "Loft", "--on",
-                    "2026-02-10", "--format", "json").exits(ExitCode.OK).out());
+            JsonNode a = JSON.readTree(CliRun.run(
+                            home,
+                            "--archive",
+                            other,
+                            "audit",
+                            "--wall",
+                            "Loft",
+                            "--on",
+                            "2026-02-10",
+                            "--format",
+                            "json")
+                    .exits(ExitCode.OK)
+                    .out());
             assertThat(a.at("/grip/resultant_length").isNull()).isTrue();
-            assertThat(a.at("/undefined/grip.resultant_length").asText()).isEqualTo("no hand hold with a grip "
-                    + "direction");
+            assertThat(a.at("/undefined/grip.resultant_length").asText())
+                    .isEqualTo("no hand hold with a grip " + "direction");
             assertThat(a.at("/undefined/repetition.novelty").asText()).contains("enough detail");
         }
 
         @Test
         void namesWhatThereIsForAWrongTarget() {
-            assertThat(run("audit", "--reset", "Arch 1999-01-01").exits(ExitCode.BAD_INPUT).err())
-                    .contains("no reset labelled 'Arch 1999-01-01'").contains("latest:");
-            assertThat(run("audit", "--wall", "Arch", "--on", "2025-01-01").exits(ExitCode.BAD_INPUT).err())
+            assertThat(run("audit", "--reset", "Arch 1999-01-01")
+                            .exits(ExitCode.BAD_INPUT)
+                            .err())
+                    .contains("no reset labelled 'Arch 1999-01-01'")
+                    .contains("latest:");
+            assertThat(run("audit", "--wall", "Arch", "--on", "2025-01-01")
+                            .exits(ExitCode.BAD_INPUT)
+                            .err())
                     .contains("its first is Arch 2025-12-08");
             assertThat(run("audit").exits(ExitCode.USAGE).err()).contains("say what to audit");
-            assertThat(run("audit", "--setter", "Nobody", "--from", "2026").exits(ExitCode.BAD_INPUT).err())
-                    .contains("no setter named 'Nobody'").contains("Bo Renner");
+            assertThat(run("audit", "--setter", "Nobody", "--from", "2026")
+                            .exits(ExitCode.BAD_INPUT)
+                            .err())
+                    .contains("no setter named 'Nobody'")
+                    .contains("Bo Renner");
         }
     }
 }

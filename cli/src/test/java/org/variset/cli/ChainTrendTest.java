@@ -29,6 +29,7 @@ class ChainTrendTest {
 
     @TempDir
     static Path home;
+
     private Path files;
 
     private TestArchive archive;
@@ -53,15 +54,23 @@ class ChainTrendTest {
         files = home.resolve("files");
         SampleGenerator.write(new SampleGenerator.Options(2, 1, 8, LocalDate.of(2026, 6, 30), false), files);
         run("init").exits(ExitCode.OK);
-        run("import", files.resolve("walls.csv").toString(), files.resolve("routes.csv").toString(),
-                files.resolve("holds.csv").toString()).exits(ExitCode.OK);
+        run(
+                        "import",
+                        files.resolve("walls.csv").toString(),
+                        files.resolve("routes.csv").toString(),
+                        files.resolve("holds.csv").toString())
+                .exits(ExitCode.OK);
     }
 
     /** Routes of a gym set in the period, counted from the routes file itself (gym, wall, route, set_on, ...). */
     private long routesSetInFile(String gym) throws IOException {
-        return Files.readAllLines(files.resolve("routes.csv")).stream().skip(1).map(l -> l.split(","))
-                .filter(f -> f[0].equals(gym)).map(f -> LocalDate.parse(f[3]))
-                .filter(d -> !d.isBefore(LocalDate.of(2026, 1, 1)) && !d.isAfter(LocalDate.of(2026, 5, 31))).count();
+        return Files.readAllLines(files.resolve("routes.csv")).stream()
+                .skip(1)
+                .map(l -> l.split(","))
+                .filter(f -> f[0].equals(gym))
+                .map(f -> LocalDate.parse(f[3]))
+                .filter(d -> !d.isBefore(LocalDate.of(2026, 1, 1)) && !d.isAfter(LocalDate.of(2026, 5, 31)))
+                .count();
     }
 
     @Test
@@ -74,7 +83,9 @@ class ChainTrendTest {
             JsonNode row = rows.get(i);
             String gym = String.format("Synthetic Gym %03d", i + 1);
             assertThat(row.get("gym").asText()).isEqualTo(gym);
-            assertThat(row.get("routes_set").asLong()).isEqualTo(routesSetInFile(gym)).isPositive();
+            assertThat(row.get("routes_set").asLong())
+                    .isEqualTo(routesSetInFile(gym))
+                    .isPositive();
             JsonNode own = json(with(with(new String[] {"trend", "--gym", gym}, PERIOD), "--format", "json"));
             JsonNode lastGymPoint = null;
             for (JsonNode p : own.get("months")) {
@@ -84,9 +95,15 @@ class ChainTrendTest {
             }
             assertThat(lastGymPoint).isNotNull();
             assertThat(row.get("routes_up")).isEqualTo(lastGymPoint.get("routes"));
-            for (String k : List.of("score.score", "grip.sector_entropy", "grip.up_share", "holds.hill_n1",
-                    "moves.coverage", "grades.emd_to_target")) {
-                assertThat(row.at("/figures/" + k.replace(".", "/"))).as(gym + " " + k)
+            for (String k : List.of(
+                    "score.score",
+                    "grip.sector_entropy",
+                    "grip.up_share",
+                    "holds.hill_n1",
+                    "moves.coverage",
+                    "grades.emd_to_target")) {
+                assertThat(row.at("/figures/" + k.replace(".", "/")))
+                        .as(gym + " " + k)
                         .isEqualTo(lastGymPoint.at("/figures/" + k.replace(".", "/")));
             }
             int resets = 0;
@@ -94,26 +111,36 @@ class ChainTrendTest {
                 resets += w.get("resets").size();
             }
             assertThat(row.get("resets").asInt()).isEqualTo(resets);
-            assertThat(row.get("near_repeats").asInt()).isEqualTo(own.get("near_repeats").size());
+            assertThat(row.get("near_repeats").asInt())
+                    .isEqualTo(own.get("near_repeats").size());
             assertThat(chain.get("gyms").get(i)).isEqualTo(own);
         }
     }
 
     @Test
     void writesTextCsvAndAPdfForSeveralGyms() throws IOException {
-        String text = run(with(new String[] {"trend", "--gym", "Synthetic Gym 002", "--gym", "Synthetic Gym 001"},
-                PERIOD)).exits(ExitCode.OK).out();
-        assertThat(text).startsWith("Gyms compared, 2026-01-01 to 2026-05-31 (2 gyms)")
-                .contains("Trends of Synthetic Gym 001").contains("Trends of Synthetic Gym 002");
+        String text = run(with(
+                        new String[] {"trend", "--gym", "Synthetic Gym 002", "--gym", "Synthetic Gym 001"}, PERIOD))
+                .exits(ExitCode.OK)
+                .out();
+        assertThat(text)
+                .startsWith("Gyms compared, 2026-01-01 to 2026-05-31 (2 gyms)")
+                .contains("Trends of Synthetic Gym 001")
+                .contains("Trends of Synthetic Gym 002");
         String csv = run(with(with(new String[] {"trend", "--all-gyms"}, PERIOD), "--format", "csv"))
-                .exits(ExitCode.OK).out();
+                .exits(ExitCode.OK)
+                .out();
         assertThat(csv.split("\r\n")).hasSize(3);
         assertThat(csv).startsWith("gym,from,to,routes_set,");
         Path pdf = home.resolve("chain.pdf");
-        run(with(with(new String[] {"trend", "--all-gyms"}, PERIOD), "--pdf", pdf.toString())).exits(ExitCode.OK);
+        run(with(with(new String[] {"trend", "--all-gyms"}, PERIOD), "--pdf", pdf.toString()))
+                .exits(ExitCode.OK);
         try (PDDocument d = Loader.loadPDF(pdf.toFile())) {
             String pages = new PDFTextStripper().getText(d);
-            assertThat(pages).contains("Gyms side by side").contains("Synthetic Gym 001").contains("EN 12572");
+            assertThat(pages)
+                    .contains("Gyms side by side")
+                    .contains("Synthetic Gym 001")
+                    .contains("EN 12572");
             assertThat(d.getNumberOfPages()).isGreaterThan(4);
         }
     }

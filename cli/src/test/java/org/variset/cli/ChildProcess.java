@@ -13,8 +13,7 @@ final class ChildProcess {
     /** The jar the package phase built (integration tests run after it). */
     static final Path JAR = Path.of("target", "variset.jar");
 
-    private ChildProcess() {
-    }
+    private ChildProcess() {}
 
     /** Starts {@code variset ARGS} with extra environment, its output going to a log file. */
     static Process start(Path log, Map<String, String> env, String... args) throws IOException {
@@ -22,8 +21,12 @@ final class ChildProcess {
             throw new IllegalStateException(JAR.toAbsolutePath() + " is missing: run the integration tests through "
                     + "Maven's verify phase (the shaded jar is built in package)");
         }
-        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-XX:+UseSerialGC", "-XX:TieredStopAtLevel=1", "-jar", JAR.toString()));
+        List<String> cmd = new ArrayList<>(List.of(
+                Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-XX:+UseSerialGC",
+                "-XX:TieredStopAtLevel=1",
+                "-jar",
+                JAR.toString()));
         cmd.addAll(List.of(args));
         ProcessBuilder b = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile());
         b.environment().putAll(env);

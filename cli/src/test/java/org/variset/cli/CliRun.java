@@ -35,8 +35,14 @@ public record CliRun(String[] args, int exit, String out, String err) {
     public static CliRun withInput(String input, Map<String, String> env, Path home, String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int exit = new VarisetCli(new BufferedReader(new StringReader(input)), new PrintWriter(out, true),
-                new PrintWriter(err, true), env, home, CLOCK).run(args);
+        int exit = new VarisetCli(
+                        new BufferedReader(new StringReader(input)),
+                        new PrintWriter(out, true),
+                        new PrintWriter(err, true),
+                        env,
+                        home,
+                        CLOCK)
+                .run(args);
         return new CliRun(args, exit, out.toString(), err.toString());
     }
 
@@ -53,7 +59,6 @@ public record CliRun(String[] args, int exit, String out, String err) {
 
     /** Everything the run did, for failure messages. */
     public String describe() {
-        return "variset " + String.join(" ", args) + "\nexit " + exit + "\n--- stdout\n" + out + "--- stderr\n"
-                + err;
+        return "variset " + String.join(" ", args) + "\nexit " + exit + "\n--- stdout\n" + out + "--- stderr\n" + err;
     }
 }

@@ -14,6 +14,7 @@ import org.junit.jupiter.api.io.TempDir;
 class DayToDayCommandsTest {
     @TempDir
     Path home;
+
     private String archive;
 
     private static Path example(String name) {
@@ -32,14 +33,18 @@ class DayToDayCommandsTest {
     void importExamples() {
         archive = home.resolve("a").toString();
         run("init").exits(ExitCode.OK);
-        CliRun r = run("import", example("routes.csv").toString(), example("holds.csv").toString())
+        CliRun r = run(
+                        "import",
+                        example("routes.csv").toString(),
+                        example("holds.csv").toString())
                 .exits(ExitCode.OK);
         assertThat(r.out()).contains("3 routes new").contains("10 holds written");
     }
 
     @Test
     void reportsAnUnchangedSecondImportAndJsonCounts() throws Exception {
-        CliRun r = run("import", example("routes.csv").toString(), "--format", "json").exits(ExitCode.OK);
+        CliRun r = run("import", example("routes.csv").toString(), "--format", "json")
+                .exits(ExitCode.OK);
         var j = new ObjectMapper().readTree(r.out());
         assertThat(j.at("/routes/unchanged").asInt()).isEqualTo(3);
         assertThat(j.at("/routes/new").asInt()).isZero();
@@ -49,20 +54,30 @@ class DayToDayCommandsTest {
     void namesHowLongEachPhaseOfAnImportTookWhenVerbose() {
         Path routes = example("routes.csv");
         Path holds = example("holds.csv");
-        CliRun quiet = run("import", routes.toString(), holds.toString(), "--update").exits(ExitCode.OK);
+        CliRun quiet =
+                run("import", routes.toString(), holds.toString(), "--update").exits(ExitCode.OK);
         assertThat(quiet.err()).doesNotContain(" took ");
-        CliRun r = run("--verbose", "import", routes.toString(), holds.toString(), "--update").exits(ExitCode.OK);
-        for (String phase : new String[] {"reading routes", "checking holds", "comparing with the archive",
-            "writing routes", "writing holds", "recording the change log", "committing",
-            "updating the search index"}) {
+        CliRun r = run("--verbose", "import", routes.toString(), holds.toString(), "--update")
+                .exits(ExitCode.OK);
+        for (String phase : new String[] {
+            "reading routes",
+            "checking holds",
+            "comparing with the archive",
+            "writing routes",
+            "writing holds",
+            "recording the change log",
+            "committing",
+            "updating the search index"
+        }) {
             assertThat(r.err()).containsPattern("variset: " + phase + " took \\d+\\.\\d s");
         }
     }
 
     @Test
     void listsLocatedProblemsForABadFileAndWritesNothing() throws Exception {
-        Path bad = Files.writeString(home.resolve("routes.csv"), "gym,wall,route,set_on,discipline,grade\n"
-                + "Example Gym,North Arch,N9,2026-02-30,boulder,V2\n");
+        Path bad = Files.writeString(
+                home.resolve("routes.csv"),
+                "gym,wall,route,set_on,discipline,grade\n" + "Example Gym,North Arch,N9,2026-02-30,boulder,V2\n");
         CliRun r = run("import", bad.toString()).exits(ExitCode.BAD_INPUT);
         assertThat(r.err()).contains(bad + ":2: set_on: no such date '2026-02-30'");
         assertThat(r.err()).doesNotContain("\tat ");
@@ -73,14 +88,15 @@ class DayToDayCommandsTest {
     void stripsAWallsOldRoutesOnResetDay() {
         CliRun r = run("strip", "--wall", "South Lead", "--on", "2026-04-01").exits(ExitCode.OK);
         assertThat(r.out()).contains("Stripped 1 routes").contains("0 set that day");
-        CliRun again = run("strip", "--wall", "North Arch", "--on", "2026-03-02").exits(ExitCode.OK);
+        CliRun again =
+                run("strip", "--wall", "North Arch", "--on", "2026-03-02").exits(ExitCode.OK);
         assertThat(again.out()).contains("Stripped 0 routes").contains("2 set that day stay up");
     }
 
     @Test
     void correctsOneRouteAndMergesSetters() {
-        run("amend", "N1", "--wall", "North Arch", "--set-on", "2026-03-02", "--grade", "V3", "--setters",
-                "K. Ames").exits(ExitCode.OK);
+        run("amend", "N1", "--wall", "North Arch", "--set-on", "2026-03-02", "--grade", "V3", "--setters", "K. Ames")
+                .exits(ExitCode.OK);
         CliRun merge = run("setter", "merge", "K. Ames", "Kit Ames").exits(ExitCode.OK);
         assertThat(merge.out()).contains("1 routes now name 'Kit Ames'");
         CliRun rename = run("setter", "rename", "Rui Sol", "Kit Ames").exits(ExitCode.BAD_INPUT);
@@ -89,24 +105,29 @@ class DayToDayCommandsTest {
 
     @Test
     void asksBeforeRemovingAResetAndRemovesWithYes() {
-        CliRun no = CliRun.withInput("n\n", Map.of(), home, "--archive", archive, "remove", "--reset",
-                "N-2026-03-02").exits(ExitCode.OK);
+        CliRun no = CliRun.withInput("n\n", Map.of(), home, "--archive", archive, "remove", "--reset", "N-2026-03-02")
+                .exits(ExitCode.OK);
         assertThat(no.out()).contains("This removes 2 routes and 8 holds").contains("Nothing removed");
         CliRun yes = run("remove", "--reset", "N-2026-03-02", "--yes").exits(ExitCode.OK);
         assertThat(yes.out()).contains("Removed 2 routes and 8 holds");
-        assertThat(run("info", "--format", "json").out()).contains("\"routes\" : 1").contains("\"resets\" : 1");
+        assertThat(run("info", "--format", "json").out())
+                .contains("\"routes\" : 1")
+                .contains("\"resets\" : 1");
     }
 
     @Test
     void removesTheRoutesAFileBrought() {
         run("remove", "--file", example("routes.csv").toString(), "--yes").exits(ExitCode.OK);
-        assertThat(run("info", "--format", "json").out()).contains("\"routes\" : 0").contains("\"holds\" : 0");
+        assertThat(run("info", "--format", "json").out())
+                .contains("\"routes\" : 0")
+                .contains("\"holds\" : 0");
     }
 
     @Test
     void exportsAndRefusesToOverwrite() {
         Path out = home.resolve("export");
-        run("export", "--gym", "Example Gym", "--format", "csv", "--out", out.toString()).exits(ExitCode.OK);
+        run("export", "--gym", "Example Gym", "--format", "csv", "--out", out.toString())
+                .exits(ExitCode.OK);
         assertThat(out.resolve("holds.csv")).exists();
         CliRun again = run("export", "--gym", "Example Gym", "--format", "csv", "--out", out.toString())
                 .exits(ExitCode.BAD_INPUT);
@@ -117,8 +138,12 @@ class DayToDayCommandsTest {
     void writesTemplatesThatImportCleanly() {
         Path t = home.resolve("t");
         CliRun.run(home, "template", "--format", "csv", "--out", t.toString()).exits(ExitCode.OK);
-        CliRun r = run("import", t.resolve("walls.csv").toString(), t.resolve("routes.csv").toString(),
-                t.resolve("holds.csv").toString()).exits(ExitCode.OK);
+        CliRun r = run(
+                        "import",
+                        t.resolve("walls.csv").toString(),
+                        t.resolve("routes.csv").toString(),
+                        t.resolve("holds.csv").toString())
+                .exits(ExitCode.OK);
         assertThat(r.out()).contains("1 routes new").contains("1 holds written");
         CliRun.run(home, "template", "--format", "xlsx", "--out", t.toString()).exits(ExitCode.OK);
         assertThat(t.resolve("variset-template.xlsx")).exists();

@@ -21,6 +21,7 @@ class DemoCommandTest {
 
     @TempDir
     static Path home;
+
     private Path demo;
     private CliRun first;
 
@@ -36,17 +37,22 @@ class DemoCommandTest {
 
     private static List<String> findings(JsonNode audit) {
         List<String> out = new ArrayList<>();
-        audit.get("findings").forEach(f -> out.add(f.get("kind").asText() + ": " + f.get("text").asText()));
+        audit.get("findings")
+                .forEach(f ->
+                        out.add(f.get("kind").asText() + ": " + f.get("text").asText()));
         return out;
     }
 
     @Test
     void saysWhatItLoadedAndWhereTheReportsAre() throws IOException {
-        assertThat(first.out()).contains("The sample gym Lantern Rock (invented): 1444 routes, 19605 holds, 7 walls")
+        assertThat(first.out())
+                .contains("The sample gym Lantern Rock (invented): 1444 routes, 19605 holds, 7 walls")
                 .contains("Reports (PDF, with JSON beside them) in " + demo.resolve("reports"));
-        for (String pdf : List.of("audit-cave.pdf", "audit-prow.pdf", "audit-slab.pdf", "gym-standing.pdf",
-                "annual-report-2026.pdf")) {
-            assertThat(Files.readAllBytes(demo.resolve("reports").resolve(pdf))).as(pdf).startsWith("%PDF".getBytes());
+        for (String pdf : List.of(
+                "audit-cave.pdf", "audit-prow.pdf", "audit-slab.pdf", "gym-standing.pdf", "annual-report-2026.pdf")) {
+            assertThat(Files.readAllBytes(demo.resolve("reports").resolve(pdf)))
+                    .as(pdf)
+                    .startsWith("%PDF".getBytes());
         }
         assertThat(home.resolve(".local")).doesNotExist();
     }
@@ -54,10 +60,11 @@ class DemoCommandTest {
     /** Story: Rafe Kalder reaches for up-facing crimps far too often. */
     @Test
     void findsTheSetterWhoReachesForUpFacingCrimps() throws IOException {
-        assertThat(findings(report("setter-rafe-kalder.json"))).anyMatch(f -> f.startsWith("setter_habit: ")
-                && f.contains("Rafe Kalder's hand grips are crimps facing up (crimp@0)"));
-        assertThat(findings(report("setter-mira-holt.json"))).noneMatch(f -> f.startsWith("setter_habit: ")
-                && f.contains("crimp@0"));
+        assertThat(findings(report("setter-rafe-kalder.json")))
+                .anyMatch(f -> f.startsWith("setter_habit: ")
+                        && f.contains("Rafe Kalder's hand grips are crimps facing up (crimp@0)"));
+        assertThat(findings(report("setter-mira-holt.json")))
+                .noneMatch(f -> f.startsWith("setter_habit: ") && f.contains("crimp@0"));
         assertThat(first.out()).contains("of Rafe Kalder's hand grips are crimps facing up");
     }
 
@@ -67,7 +74,8 @@ class DemoCommandTest {
         JsonNode prow = report("audit-prow.json");
         assertThat(prow.at("/repetition/hold_reuse_rate").asDouble()).isGreaterThan(0.5);
         assertThat(findings(prow).get(0)).startsWith("hold_reuse: ");
-        assertThat(report("audit-wave.json").at("/repetition/hold_reuse_rate").asDouble()).isLessThan(0.3);
+        assertThat(report("audit-wave.json").at("/repetition/hold_reuse_rate").asDouble())
+                .isLessThan(0.3);
     }
 
     /** Story: a grade gap opens one summer (no V5 or V6 up in July and August). */
@@ -76,7 +84,8 @@ class DemoCommandTest {
         JsonNode annual = report("annual-report-2026.json");
         List<String> summer = new ArrayList<>();
         annual.get("months").forEach(m -> {
-            if (m.get("scope").asText().equals("gym") && m.at("/grade_gaps/boulder").toString().contains("V5")) {
+            if (m.get("scope").asText().equals("gym")
+                    && m.at("/grade_gaps/boulder").toString().contains("V5")) {
                 summer.add(m.get("day").asText());
             }
         });
@@ -87,7 +96,8 @@ class DemoCommandTest {
     @Test
     void findsTheNearRepeatOfAnEarlierProblem() throws IOException {
         JsonNode cave = report("audit-cave.json");
-        assertThat(cave.at("/repetition/near_repeats").findValuesAsText("other")).contains("Red 1 (Cave, 2026-06-01)");
+        assertThat(cave.at("/repetition/near_repeats").findValuesAsText("other"))
+                .contains("Red 1 (Cave, 2026-06-01)");
         assertThat(findings(cave).get(0)).startsWith("near_repeat: ").contains("repeats Red 1 (Cave, 2026-06-01)");
     }
 
@@ -95,8 +105,10 @@ class DemoCommandTest {
     @Test
     void findsTheOverdueWall() throws IOException {
         List<String> overdue = new ArrayList<>();
-        report("annual-report-2026.json").get("walls").forEach(w -> overdue.add(w.get("wall").asText() + " "
-                + w.get("status").asText()));
+        report("annual-report-2026.json")
+                .get("walls")
+                .forEach(w -> overdue.add(
+                        w.get("wall").asText() + " " + w.get("status").asText()));
         assertThat(overdue).contains("Slab overdue").doesNotContain("Cave overdue", "Prow overdue");
         assertThat(first.out()).contains("Slab is overdue");
     }
@@ -104,13 +116,23 @@ class DemoCommandTest {
     /** The README's audit example, on the demo archive. */
     @Test
     void printsTheReadmesCaveAudit() {
-        String out = CliRun.run(home, "--archive", demo.resolve("archive").toString(), "audit", "--wall", "Cave",
-                "--on", "2026-11-30").exits(ExitCode.OK).out();
-        assertThat(out).startsWith("Reset Cave 2026-11-24 (Cave, 2026-11-24) · Lantern Rock · 13 routes\n"
-                + "Score 66 of 100 (a heuristic: weighted mean of grip 0.71, holds 0.72, moves 0.60, grades 0.72, "
-                + "novelty 0.55)\n\nWhat stands out\n  - Green 1 (Cave, 2026-11-24) repeats Red 1 (Cave, 2026-06-01): "
-                + "same jug@0, jug@180, pinch@90, pinch@270 and 3 more holds, same lock-off (Jaccard 1.000).\n"
-                + "  - 53 of 104 hand grips face up.\n");
+        String out = CliRun.run(
+                        home,
+                        "--archive",
+                        demo.resolve("archive").toString(),
+                        "audit",
+                        "--wall",
+                        "Cave",
+                        "--on",
+                        "2026-11-30")
+                .exits(ExitCode.OK)
+                .out();
+        assertThat(out)
+                .startsWith("Reset Cave 2026-11-24 (Cave, 2026-11-24) · Lantern Rock · 13 routes\n"
+                        + "Score 66 of 100 (a heuristic: weighted mean of grip 0.71, holds 0.72, moves 0.60, grades 0.72, "
+                        + "novelty 0.55)\n\nWhat stands out\n  - Green 1 (Cave, 2026-11-24) repeats Red 1 (Cave, 2026-06-01): "
+                        + "same jug@0, jug@180, pinch@90, pinch@270 and 3 more holds, same lock-off (Jaccard 1.000).\n"
+                        + "  - 53 of 104 hand grips face up.\n");
     }
 
     @Test

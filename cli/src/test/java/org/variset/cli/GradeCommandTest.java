@@ -28,14 +28,18 @@ class GradeCommandTest {
     @Test
     void namesBothReadingsOfAnAmbiguousGradeAndHowToChoose() {
         CliRun r = CliRun.run(home, "grade", "5+", "--discipline", "rope").exits(ExitCode.BAD_INPUT);
-        assertThat(r.err()).contains("French 5+").contains("UIAA 5+").contains("--scale french")
+        assertThat(r.err())
+                .contains("French 5+")
+                .contains("UIAA 5+")
+                .contains("--scale french")
                 .contains("--scale uiaa");
         assertThat(r.out()).isEmpty();
     }
 
     @Test
     void settlesTheAmbiguityWithTheScaleOption() {
-        CliRun r = CliRun.run(home, "grade", "5+", "--discipline", "rope", "--scale", "uiaa").exits(ExitCode.OK);
+        CliRun r = CliRun.run(home, "grade", "5+", "--discipline", "rope", "--scale", "uiaa")
+                .exits(ExitCode.OK);
         assertThat(r.out()).startsWith("5+: UIAA 5+, IRCRA 8");
     }
 

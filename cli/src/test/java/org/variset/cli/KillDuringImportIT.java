@@ -40,11 +40,18 @@ class KillDuringImportIT {
         Path sample = dir.resolve("sample");
         SampleGenerator.write(SampleGenerator.sample(), sample);
         Path more = dir.resolve("more");
-        SampleGenerator.Summary extra = SampleGenerator.write(new SampleGenerator.Options(1, 1, 11,
-                LocalDate.of(2026, 6, 30), false), more);
+        SampleGenerator.Summary extra =
+                SampleGenerator.write(new SampleGenerator.Options(1, 1, 11, LocalDate.of(2026, 6, 30), false), more);
         CliRun.run(dir, "--archive", base.toString(), "init").exits(ExitCode.OK);
-        CliRun.run(dir, "--archive", base.toString(), "import", sample.resolve("walls.csv").toString(),
-                sample.resolve("routes.csv").toString(), sample.resolve("holds.csv").toString()).exits(ExitCode.OK);
+        CliRun.run(
+                        dir,
+                        "--archive",
+                        base.toString(),
+                        "import",
+                        sample.resolve("walls.csv").toString(),
+                        sample.resolve("routes.csv").toString(),
+                        sample.resolve("holds.csv").toString())
+                .exits(ExitCode.OK);
         ArchiveStats before = stats(base);
         Random r = new Random(20261202);
         int nothing = 0;
@@ -52,43 +59,78 @@ class KillDuringImportIT {
         int between = 0;
         for (int i = 0; i < KILLS; i++) {
             Path a = dir.resolve("run-" + i);
-            copyTree(base, a);
-            Path log = dir.resolve("run-" + i + ".log");
             boolean atTheSeam = i % 4 == 3;
-            Process p = ChildProcess.start(log, atTheSeam ? Map.of(IndexUpkeep.PAUSE_HOOK, "60000") : Map.of(),
-                    "--archive", a.toString(), "import", more.resolve("walls.csv").toString(),
-                    more.resolve("routes.csv").toString(), more.resolve("holds.csv").toString());
-            if (atTheSeam) {
-                assertThat(ChildProcess.awaitLine(log, "database committed", p, 120_000)).as(Files.readString(log))
-                        .isTrue();
-            } else {
-                Thread.sleep(300 + r.nextInt(14_000));
-            }
-            p.destroyForcibly();
-            assertThat(p.waitFor(30, TimeUnit.SECONDS)).isTrue();
-            ArchiveStats after = stats(a);
-            boolean imported = after.routes() == before.routes() + extra.routes();
-            assertThat(after.routes()).as("run %d: all or none of the routes", i).isIn(before.routes(),
-                    before.routes() + extra.routes());
-            assertThat(after.holds()).as("run %d: all or none of the holds", i)
-                    .isEqualTo(imported ? before.holds() + extra.holds() : before.holds());
-            CliRun search = CliRun.run(dir, "--archive", a.toString(), "search", "gym:\"Synthetic Gym 001\"",
-                    "--limit", "1", "--format", "json").exits(ExitCode.OK);
-            assertThat(JSON.readTree(search.out()).get("total").asLong()).as("run %d: search agrees", i)
-                    .isEqualTo(imported ? extra.routes() : 0);
-            if (atTheSeam) {
-                assertThat(search.err()).contains("The search index was behind the archive");
-            }
-            CliRun.run(dir, "--archive", a.toString(), "check").exits(ExitCode.OK);
+            boolean imported = killOne(i, atTheSeam, a, base, more, before, extra, r);
             nothing += imported ? 0 : 1;
             all += imported && !atTheSeam ? 1 : 0;
             between += atTheSeam ? 1 : 0;
             deleteTree(a);
         }
-        System.out.printf("KillDuringImportIT: %d kills survived: %d before the commit (nothing imported), %d after it"
-                + " (everything), %d between the database commit and the index commit%n", KILLS, nothing, all,
-                between);
+        System.out.printf(
+                "KillDuringImportIT: %d kills survived: %d before the commit (nothing imported), %d after it"
+                        + " (everything), %d between the database commit and the index commit%n",
+                KILLS, nothing, all, between);
         assertThat(between).isPositive();
+    }
+
+    /** Kills one import of {@code more} into a copy of the base archive; true when the import had committed. */
+    private boolean killOne(
+            int i,
+            boolean atTheSeam,
+            Path a,
+            Path base,
+            Path more,
+            ArchiveStats before,
+            SampleGenerator.Summary extra,
+            Random r)
+            throws Exception {
+        copyTree(base, a);
+        Path log = dir.resolve("run-" + i + ".log");
+        Process p = ChildProcess.start(
+                log,
+                atTheSeam ? Map.of(IndexUpkeep.PAUSE_HOOK, "60000") : Map.of(),
+                "--archive",
+                a.toString(),
+                "import",
+                more.resolve("walls.csv").toString(),
+                more.resolve("routes.csv").toString(),
+                more.resolve("holds.csv").toString());
+        if (atTheSeam) {
+            assertThat(ChildProcess.awaitLine(log, "database committed", p, 120_000))
+                    .as(Files.readString(log))
+                    .isTrue();
+        } else {
+            Thread.sleep(300 + r.nextInt(14_000));
+        }
+        p.destroyForcibly();
+        assertThat(p.waitFor(30, TimeUnit.SECONDS)).isTrue();
+        ArchiveStats after = stats(a);
+        boolean imported = after.routes() == before.routes() + extra.routes();
+        assertThat(after.routes())
+                .as("run %d: all or none of the routes", i)
+                .isIn(before.routes(), before.routes() + extra.routes());
+        assertThat(after.holds())
+                .as("run %d: all or none of the holds", i)
+                .isEqualTo(imported ? before.holds() + extra.holds() : before.holds());
+        CliRun search = CliRun.run(
+                        dir,
+                        "--archive",
+                        a.toString(),
+                        "search",
+                        "gym:\"Synthetic Gym 001\"",
+                        "--limit",
+                        "1",
+                        "--format",
+                        "json")
+                .exits(ExitCode.OK);
+        assertThat(JSON.readTree(search.out()).get("total").asLong())
+                .as("run %d: search agrees", i)
+                .isEqualTo(imported ? extra.routes() : 0);
+        if (atTheSeam) {
+            assertThat(search.err()).contains("The search index was behind the archive");
+        }
+        CliRun.run(dir, "--archive", a.toString(), "check").exits(ExitCode.OK);
+        return imported;
     }
 
     private static ArchiveStats stats(Path a) {

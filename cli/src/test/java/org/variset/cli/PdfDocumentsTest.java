@@ -37,6 +37,7 @@ class PdfDocumentsTest {
 
     @TempDir
     static Path home;
+
     private String archive;
 
     private CliRun run(String... args) {
@@ -51,8 +52,12 @@ class PdfDocumentsTest {
     void importTheGym() {
         archive = home.resolve("a").toString();
         run("init").exits(ExitCode.OK);
-        run("import", FILES.resolve("walls.csv").toString(), FILES.resolve("routes.csv").toString(),
-                FILES.resolve("holds.csv").toString()).exits(ExitCode.OK);
+        run(
+                        "import",
+                        FILES.resolve("walls.csv").toString(),
+                        FILES.resolve("routes.csv").toString(),
+                        FILES.resolve("holds.csv").toString())
+                .exits(ExitCode.OK);
     }
 
     /** The text in the order it was written (sorting by position splits words at OpenPDF's line ends). */
@@ -71,9 +76,12 @@ class PdfDocumentsTest {
         @BeforeAll
         void write() throws IOException {
             pdf = home.resolve("arch.pdf");
-            CliRun r = run("audit", "--reset", "Arch 2026-02-02", "--pdf", pdf.toString()).exits(ExitCode.OK);
+            CliRun r = run("audit", "--reset", "Arch 2026-02-02", "--pdf", pdf.toString())
+                    .exits(ExitCode.OK);
             assertThat(r.err()).contains("Wrote " + pdf);
-            json = new ObjectMapper().readTree(run("audit", "--reset", "Arch 2026-02-02", "--format", "json").out());
+            json = new ObjectMapper()
+                    .readTree(run("audit", "--reset", "Arch 2026-02-02", "--format", "json")
+                            .out());
             try (PDDocument d = Loader.loadPDF(pdf.toFile())) {
                 text = text(d);
                 pages = d.getNumberOfPages();
@@ -82,8 +90,9 @@ class PdfDocumentsTest {
 
         @Test
         void printsTheScoreAndTheFirstTenFindingsOfTheJson() {
-            assertThat(text).contains("Score " + FigureFormat.of("score", json.at("/score/score").asDouble())
-                    + " of 100");
+            assertThat(text)
+                    .contains("Score "
+                            + FigureFormat.of("score", json.at("/score/score").asDouble()) + " of 100");
             for (int i = 0; i < Math.min(10, json.get("findings").size()); i++) {
                 String start = json.get("findings").get(i).get("text").asText().substring(0, 40);
                 assertThat(text.replace("\n", " ")).as(start).contains(start);
@@ -105,31 +114,53 @@ class PdfDocumentsTest {
 
         @Test
         void printsTheGripFigures() {
-            assertThat(text.replace("\n", " ")).contains("Resultant length " + FigureFormat.of("resultant_length",
-                    json.at("/grip/resultant_length").asDouble())).contains("circular standard deviation "
-                            + FigureFormat.of("circular_sd_deg", json.at("/grip/circular_sd_deg").asDouble()) + "°")
+            assertThat(text.replace("\n", " "))
+                    .contains("Resultant length "
+                            + FigureFormat.of(
+                                    "resultant_length",
+                                    json.at("/grip/resultant_length").asDouble()))
+                    .contains("circular standard deviation "
+                            + FigureFormat.of(
+                                    "circular_sd_deg",
+                                    json.at("/grip/circular_sd_deg").asDouble()) + "°")
                     .contains("Rayleigh test p < 0.001");
             assertThat(text).contains("up " + json.at("/grip/sectors/0").asInt());
         }
 
         @Test
         void hasEverySectionAndTheCautions() {
-            for (String section : List.of("What stands out", "Since the previous reset Arch 2026-01-05",
-                    "Figures side by side", "Grip directions", "Holds", "Grades against the target", "Moves and styles",
-                    "Difficulty profiles", "Repetition", "Near-repeats of earlier routes", "Route lines and reach",
-                    "Next reset of Arch: 4 boulder routes", "Settings used", "Safety.")) {
+            for (String section : List.of(
+                    "What stands out",
+                    "Since the previous reset Arch 2026-01-05",
+                    "Figures side by side",
+                    "Grip directions",
+                    "Holds",
+                    "Grades against the target",
+                    "Moves and styles",
+                    "Difficulty profiles",
+                    "Repetition",
+                    "Near-repeats of earlier routes",
+                    "Route lines and reach",
+                    "Next reset of Arch: 4 boulder routes",
+                    "Settings used",
+                    "Safety.")) {
                 assertThat(text).as(section).contains(section);
             }
             String flat = text.replace("\n", " ");
-            assertThat(flat).contains("EN 12572").contains("does not judge whether a route or wall is safe")
-                    .contains("The score is a heuristic").contains("a heuristic (arm span is close to height")
+            assertThat(flat)
+                    .contains("EN 12572")
+                    .contains("does not judge whether a route or wall is safe")
+                    .contains("The score is a heuristic")
+                    .contains("a heuristic (arm span is close to height")
                     .contains("The target is an example pyramid");
         }
 
         @Test
         void numbersItsPagesAndNamesItsMaker() {
             assertThat(pages).isEqualTo(6);
-            assertThat(text).contains("page 1 of 6").contains("page 6 of 6")
+            assertThat(text)
+                    .contains("page 1 of 6")
+                    .contains("page 6 of 6")
                     .contains("Generated 2026-12-02 by Variset");
         }
 
@@ -165,19 +196,30 @@ class PdfDocumentsTest {
     @Test
     void writesTheTrendReportWithTheJsonsWallStatus() throws IOException {
         Path pdf = home.resolve("trend.pdf");
-        run("trend", "--from", "2025-12-01", "--to", "2026-03-10", "--pdf", pdf.toString()).exits(ExitCode.OK);
-        JsonNode json = new ObjectMapper().readTree(run("trend", "--from", "2025-12-01", "--to", "2026-03-10",
-                "--format", "json").out());
+        run("trend", "--from", "2025-12-01", "--to", "2026-03-10", "--pdf", pdf.toString())
+                .exits(ExitCode.OK);
+        JsonNode json = new ObjectMapper()
+                .readTree(run("trend", "--from", "2025-12-01", "--to", "2026-03-10", "--format", "json")
+                        .out());
         try (PDDocument d = Loader.loadPDF(pdf.toFile())) {
             String text = text(d);
-            assertThat(text).contains("Trend report").contains("Walls (status on 2026-03-10)")
-                    .contains("Month-end figures of the gym's routes up").contains("Grades of the routes set in the "
-                            + "period").contains("Setters").contains("Notable repeats").contains("Safety.");
+            assertThat(text)
+                    .contains("Trend report")
+                    .contains("Walls (status on 2026-03-10)")
+                    .contains("Month-end figures of the gym's routes up")
+                    .contains("Grades of the routes set in the " + "period")
+                    .contains("Setters")
+                    .contains("Notable repeats")
+                    .contains("Safety.");
             for (JsonNode w : json.get("walls")) {
-                assertThat(text).contains(w.get("wall").asText() + " " + w.get("resets").size() + " "
-                        + FigureFormat.of("score", w.get("mean_score").asDouble()) + " " + w.get("last_reset").asText()
-                        + " " + w.get("days_since_reset").asInt() + " " + w.get("cycle_days").asInt() + " "
-                        + w.get("status").asText() + " " + w.get("days_past_due").asInt());
+                assertThat(text)
+                        .contains(w.get("wall").asText() + " " + w.get("resets").size() + " "
+                                + FigureFormat.of("score", w.get("mean_score").asDouble()) + " "
+                                + w.get("last_reset").asText()
+                                + " " + w.get("days_since_reset").asInt() + " "
+                                + w.get("cycle_days").asInt() + " "
+                                + w.get("status").asText() + " "
+                                + w.get("days_past_due").asInt());
             }
         }
     }
@@ -185,12 +227,16 @@ class PdfDocumentsTest {
     @Test
     void writesAStudySheetOnLetterPaper() throws IOException {
         Path pdf = home.resolve("study.pdf");
-        run("search", "heel", "hook", "--pdf", pdf.toString(), "--paper", "letter").exits(ExitCode.OK);
+        run("search", "heel", "hook", "--pdf", pdf.toString(), "--paper", "letter")
+                .exits(ExitCode.OK);
         try (PDDocument d = Loader.loadPDF(pdf.toFile())) {
             assertThat(d.getPage(0).getMediaBox().getWidth()).isEqualTo(612f);
             assertThat(d.getPage(0).getMediaBox().getHeight()).isEqualTo(792f);
             String text = text(d);
-            assertThat(text).contains("Study sheet").contains("search: heel hook").contains("4 routes match.")
+            assertThat(text)
+                    .contains("Study sheet")
+                    .contains("search: heel hook")
+                    .contains("4 routes match.")
                     .contains("holds: 2 jug (up 2), 1 crimp (up), 1 pinch (right, left), 1 sloper (down)");
         }
     }
@@ -198,13 +244,23 @@ class PdfDocumentsTest {
     @Test
     void refusesToReplaceAFileUnlessForced() throws IOException {
         Path pdf = Files.writeString(home.resolve("kept.pdf"), "mine");
-        assertThat(run("audit", "--reset", "Arch 2026-02-02", "--pdf", pdf.toString()).exits(ExitCode.BAD_INPUT)
-                .err()).contains("exists already; give --force to replace it");
+        assertThat(run("audit", "--reset", "Arch 2026-02-02", "--pdf", pdf.toString())
+                        .exits(ExitCode.BAD_INPUT)
+                        .err())
+                .contains("exists already; give --force to replace it");
         assertThat(Files.readString(pdf)).isEqualTo("mine");
-        run("audit", "--reset", "Arch 2026-02-02", "--pdf", pdf.toString(), "--force").exits(ExitCode.OK);
+        run("audit", "--reset", "Arch 2026-02-02", "--pdf", pdf.toString(), "--force")
+                .exits(ExitCode.OK);
         assertThat(Files.readAllBytes(pdf)).startsWith("%PDF".getBytes());
-        assertThat(run("audit", "--reset", "Arch 2026-02-02", "--pdf", home.resolve("no/such/dir/x.pdf")
-                .toString()).exits(ExitCode.BAD_INPUT).err()).contains("does not exist");
+        assertThat(run(
+                                "audit",
+                                "--reset",
+                                "Arch 2026-02-02",
+                                "--pdf",
+                                home.resolve("no/such/dir/x.pdf").toString())
+                        .exits(ExitCode.BAD_INPUT)
+                        .err())
+                .contains("does not exist");
         try (var leftovers = Files.list(home)) {
             assertThat(leftovers.map(p -> p.getFileName().toString())).noneMatch(n -> n.endsWith(".part"));
         }

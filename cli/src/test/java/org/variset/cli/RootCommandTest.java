@@ -13,7 +13,11 @@ class RootCommandTest {
     @Test
     void listsTheCommandsWithOneLineEach() {
         CliRun r = CliRun.run(home, "--help").exits(ExitCode.OK);
-        assertThat(r.out()).contains("init ").contains("info ").contains("grade ").contains("Exit status:");
+        assertThat(r.out())
+                .contains("init ")
+                .contains("info ")
+                .contains("grade ")
+                .contains("Exit status:");
     }
 
     @Test
@@ -26,9 +30,31 @@ class RootCommandTest {
     void listsEveryCommandInTheHelpAlthoughARunBuildsOnlyTheOneItNames() {
         String help = CliRun.run(home, "--help").exits(ExitCode.OK).out();
         String helpCommand = CliRun.run(home, "help").exits(ExitCode.OK).out();
-        for (String name : new String[] {"demo", "init", "info", "import", "export", "audit", "plan", "trend", "search",
-            "similar", "reindex", "generate", "check", "backup", "restore", "settings", "strip", "remove", "amend",
-            "setter", "template", "grade", "help"}) {
+        for (String name : new String[] {
+            "demo",
+            "init",
+            "info",
+            "import",
+            "export",
+            "audit",
+            "plan",
+            "trend",
+            "search",
+            "similar",
+            "reindex",
+            "generate",
+            "check",
+            "backup",
+            "restore",
+            "settings",
+            "strip",
+            "remove",
+            "amend",
+            "setter",
+            "template",
+            "grade",
+            "help"
+        }) {
             assertThat(help).as(name).containsPattern("(?m)^  " + name + " ");
             assertThat(helpCommand).as(name).containsPattern("(?m)^  " + name + " ");
         }

@@ -20,6 +20,7 @@ class SearchCommandTest {
 
     @TempDir
     Path home;
+
     private Path archive;
 
     private CliRun run(String... args) {
@@ -34,14 +35,19 @@ class SearchCommandTest {
     void importTheGym() {
         archive = home.resolve("a");
         run("init").exits(ExitCode.OK);
-        run("import", FILES.resolve("walls.csv").toString(), FILES.resolve("routes.csv").toString(),
-                FILES.resolve("holds.csv").toString()).exits(ExitCode.OK);
+        run(
+                        "import",
+                        FILES.resolve("walls.csv").toString(),
+                        FILES.resolve("routes.csv").toString(),
+                        FILES.resolve("holds.csv").toString())
+                .exits(ExitCode.OK);
     }
 
     @Test
     void listsHitsWithTheirMovesAndHolds() {
         CliRun r = run("search", "heel", "hook", "standing:2026-02-15").exits(ExitCode.OK);
-        assertThat(r.out()).startsWith("2 routes match, by relevance:")
+        assertThat(r.out())
+                .startsWith("2 routes match, by relevance:")
                 .contains("A2 · V2 · Arch, Fernhollow Climbing · set 2026-02-02, up · Bo Renner")
                 .contains("   moves: heel hook > dyno > match; styles: power")
                 .contains("   holds: 2 jug (up 2), 1 crimp (up), 1 pinch (right, left), 1 sloper (down)");
@@ -51,7 +57,8 @@ class SearchCommandTest {
     @Test
     void writesJsonWithFacets() throws IOException {
         JsonNode j = JSON.readTree(run("search", "wall:Bay", "--facets", "--sort", "grade", "--format", "json")
-                .exits(ExitCode.OK).out());
+                .exits(ExitCode.OK)
+                .out());
         assertThat(j.get("total").asInt()).isEqualTo(3);
         assertThat(j.at("/hits/0/route").asText()).isEqualTo("B1");
         assertThat(j.at("/hits/2/holds/0/type").asText()).isEqualTo("volume");
@@ -62,17 +69,21 @@ class SearchCommandTest {
     @Test
     void pointsAtTheProblemInABadQuery() {
         CliRun r = run("search", "move:dyno", "grade:").exits(ExitCode.BAD_INPUT);
-        assertThat(r.err()).contains("variset search: cannot read the query at position 17: expected a value after "
-                + "'grade:', such as grade:V4 or grade:6a..6b+").contains("  move:dyno grade:\n" + " ".repeat(18)
-                        + "^").doesNotContain("\tat ");
+        assertThat(r.err())
+                .contains("variset search: cannot read the query at position 17: expected a value after "
+                        + "'grade:', such as grade:V4 or grade:6a..6b+")
+                .contains("  move:dyno grade:\n" + " ".repeat(18) + "^")
+                .doesNotContain("\tat ");
     }
 
     @Test
     void catchesUpAStaleIndexWithANotice() throws IOException {
         Path copy = home.resolve("old-index");
         copyTree(archive.resolve("index"), copy);
-        Path more = Files.writeString(home.resolve("more.csv"), "gym,wall,route,set_on,discipline,grade,moves\n"
-                + "Fernhollow Climbing,Bay,B9,2026-03-01,boulder,V2,bicycle;heel hook\n");
+        Path more = Files.writeString(
+                home.resolve("more.csv"),
+                "gym,wall,route,set_on,discipline,grade,moves\n"
+                        + "Fernhollow Climbing,Bay,B9,2026-03-01,boulder,V2,bicycle;heel hook\n");
         run("import", more.toString()).exits(ExitCode.OK);
         deleteTree(archive.resolve("index"));
         copyTree(copy, archive.resolve("index"));
@@ -86,10 +97,13 @@ class SearchCommandTest {
     void keepsTheImportWhenTheIndexCannotBeWritten() throws IOException {
         deleteTree(archive.resolve("index"));
         Files.writeString(archive.resolve("index"), "not a folder");
-        Path more = Files.writeString(home.resolve("more.csv"), "gym,wall,route,set_on,discipline,grade,moves\n"
-                + "Fernhollow Climbing,Bay,B9,2026-03-01,boulder,V2,bicycle\n");
+        Path more = Files.writeString(
+                home.resolve("more.csv"),
+                "gym,wall,route,set_on,discipline,grade,moves\n"
+                        + "Fernhollow Climbing,Bay,B9,2026-03-01,boulder,V2,bicycle\n");
         CliRun imported = run("import", more.toString()).exits(ExitCode.OK);
-        assertThat(imported.err()).contains("warning: the search index could not be updated")
+        assertThat(imported.err())
+                .contains("warning: the search index could not be updated")
                 .contains("the archive itself is complete");
         Files.delete(archive.resolve("index"));
         CliRun r = run("search", "bicycle").exits(ExitCode.OK);
@@ -109,15 +123,19 @@ class SearchCommandTest {
     @Test
     void listsSimilarRoutesWithExactScores() throws IOException {
         JsonNode j = JSON.readTree(run("similar", "A2", "--set-on", "2026-02-02", "--limit", "3", "--format", "json")
-                .exits(ExitCode.OK).out());
+                .exits(ExitCode.OK)
+                .out());
         assertThat(j.at("/similar/0/route").asText()).isEqualTo("A1 (Arch, 2026-01-05)");
         assertThat(j.at("/similar/0/jaccard").asDouble()).isEqualTo(11 / 13.0);
         assertThat(j.at("/similar/1/jaccard").asDouble()).isEqualTo(10 / 13.0);
         assertThat(j.at("/similar/2/route").asText()).isEqualTo("A1 (Arch, 2025-12-08)");
         assertThat(j.at("/similar/2/jaccard").asDouble()).isEqualTo(8 / 12.0);
-        assertThat(run("similar", "A1").exits(ExitCode.BAD_INPUT).err()).contains("'A1' names 3 routes")
+        assertThat(run("similar", "A1").exits(ExitCode.BAD_INPUT).err())
+                .contains("'A1' names 3 routes")
                 .contains("--wall and --set-on");
-        assertThat(run("similar", "Fernhollow Climbing/A3/2026-01-05").exits(ExitCode.OK).out())
+        assertThat(run("similar", "Fernhollow Climbing/A3/2026-01-05")
+                        .exits(ExitCode.OK)
+                        .out())
                 .contains("too little detail");
     }
 

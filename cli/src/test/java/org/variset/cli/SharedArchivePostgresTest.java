@@ -34,8 +34,11 @@ class SharedArchivePostgresTest {
     Path home;
 
     private static String[] files(Path dir) {
-        return new String[] {dir.resolve("walls.csv").toString(), dir.resolve("routes.csv").toString(),
-            dir.resolve("holds.csv").toString()};
+        return new String[] {
+            dir.resolve("walls.csv").toString(),
+            dir.resolve("routes.csv").toString(),
+            dir.resolve("holds.csv").toString()
+        };
     }
 
     private static String[] concat(String[] a, String... b) {
@@ -45,12 +48,15 @@ class SharedArchivePostgresTest {
     }
 
     private CliRun onServer(String url, String client, String... args) {
-        return CliRun.run(Map.of("XDG_CACHE_HOME", home.resolve("cache-" + client).toString()), home,
+        return CliRun.run(
+                Map.of("XDG_CACHE_HOME", home.resolve("cache-" + client).toString()),
+                home,
                 concat(new String[] {"--db", url}, args));
     }
 
     private CliRun embedded(String... args) {
-        return CliRun.run(home, concat(new String[] {"--archive", home.resolve("embedded").toString()}, args));
+        return CliRun.run(
+                home, concat(new String[] {"--archive", home.resolve("embedded").toString()}, args));
     }
 
     private static JsonNode json(CliRun r) throws IOException {
@@ -72,26 +78,30 @@ class SharedArchivePostgresTest {
         String[] trend = {"trend", "--year", "2026", "--format", "json"};
         assertThat(json(onServer(url, "a", trend))).isEqualTo(json(embedded(trend)));
         String[] search = {"search", "heel", "hook", "--format", "json"};
-        assertThat(labels(json(onServer(url, "a", search)))).isEqualTo(labels(json(embedded(search))))
+        assertThat(labels(json(onServer(url, "a", search))))
+                .isEqualTo(labels(json(embedded(search))))
                 .isNotEmpty();
         JsonNode info = json(onServer(url, "a", "info", "--format", "json"));
         assertThat(info.get("shared").asBoolean()).isTrue();
-        assertThat(info.get("routes").asLong()).isEqualTo(json(embedded("info", "--format", "json")).get("routes")
-                .asLong());
+        assertThat(info.get("routes").asLong())
+                .isEqualTo(
+                        json(embedded("info", "--format", "json")).get("routes").asLong());
         onServer(url, "a", "check").exits(ExitCode.OK);
     }
 
     private static List<String> labels(JsonNode search) {
         List<String> out = new java.util.ArrayList<>();
-        search.get("hits").forEach(h -> out.add(h.get("gym").asText() + "/" + h.get("route").asText()));
+        search.get("hits")
+                .forEach(h ->
+                        out.add(h.get("gym").asText() + "/" + h.get("route").asText()));
         return out;
     }
 
     @Test
     void twoClientsImportingDifferentGymsAtOnceBothEndInStepWithTheDatabase() throws Exception {
         Path all = home.resolve("all");
-        SampleGenerator.Summary s = SampleGenerator.write(new SampleGenerator.Options(2, 1, 5,
-                LocalDate.of(2026, 6, 30), false), all);
+        SampleGenerator.Summary s =
+                SampleGenerator.write(new SampleGenerator.Options(2, 1, 5, LocalDate.of(2026, 6, 30), false), all);
         Path north = splitByGym(all, "Synthetic Gym 001", home.resolve("north"));
         Path south = splitByGym(all, "Synthetic Gym 002", home.resolve("south"));
         String url = TestArchives.url(TestArchives.newSchema());
@@ -151,14 +161,16 @@ class SharedArchivePostgresTest {
         assertThat(copied.get("verified").asBoolean()).isTrue();
         JsonNode before = json(embedded("info", "--format", "json"));
         Map<String, Long> rows = new java.util.HashMap<>();
-        copied.get("tables").forEach(t -> rows.put(t.get("table").asText(), t.get("rows").asLong()));
-        assertThat(rows).containsEntry("route", before.get("routes").asLong())
+        copied.get("tables")
+                .forEach(t -> rows.put(t.get("table").asText(), t.get("rows").asLong()));
+        assertThat(rows)
+                .containsEntry("route", before.get("routes").asLong())
                 .containsEntry("hold_placement", before.get("holds").asLong())
                 .containsEntry("reset", before.get("resets").asLong());
 
         JsonNode after = json(onServer(url, "c", "info", "--format", "json"));
-        for (String k : List.of("gyms", "walls", "resets", "routes", "holds", "setters", "first_set_on",
-                "last_set_on")) {
+        for (String k :
+                List.of("gyms", "walls", "resets", "routes", "holds", "setters", "first_set_on", "last_set_on")) {
             assertThat(after.get(k)).as(k).isEqualTo(before.get(k));
         }
         String[] audit = {"audit", "--reset", "Arch 2026-02-02", "--format", "json"};
@@ -169,8 +181,8 @@ class SharedArchivePostgresTest {
         CliRun again = embedded("migrate-to", url);
         again.exits(ExitCode.ARCHIVE);
         assertThat(again.err()).contains("is not empty").contains("copies into an empty archive only");
-        assertThat(json(onServer(url, "c", "info", "--format", "json")).get("routes")).isEqualTo(before.get(
-                "routes"));
+        assertThat(json(onServer(url, "c", "info", "--format", "json")).get("routes"))
+                .isEqualTo(before.get("routes"));
 
         CliRun fromServer = onServer(url, "c", "migrate-to", url);
         fromServer.exits(ExitCode.BAD_INPUT);
@@ -180,16 +192,19 @@ class SharedArchivePostgresTest {
     @Test
     void neverTakesNorShowsAPassword() {
         String url = TestArchives.url(TestArchives.newSchema());
-        String withPassword = url.replace("postgresql://" + TestArchives.server().user() + "@", "postgresql://"
-                + TestArchives.server().user() + ":hunter2@");
+        String withPassword = url.replace(
+                "postgresql://" + TestArchives.server().user() + "@",
+                "postgresql://" + TestArchives.server().user() + ":hunter2@");
         CliRun refused = onServer(withPassword, "p", "init");
         refused.exits(ExitCode.BAD_INPUT);
         assertThat(refused.err()).contains("PGPASSWORD").doesNotContain("hunter2");
 
         // The test server trusts local connections, so any password is accepted and none may be printed.
-        Map<String, String> env = Map.of("XDG_CACHE_HOME", home.resolve("cache-p").toString(), "PGPASSWORD",
-                "hunter2");
-        for (String[] args : List.of(new String[] {"--db", url, "init"}, new String[] {"--db", url, "info"},
+        Map<String, String> env =
+                Map.of("XDG_CACHE_HOME", home.resolve("cache-p").toString(), "PGPASSWORD", "hunter2");
+        for (String[] args : List.of(
+                new String[] {"--db", url, "init"},
+                new String[] {"--db", url, "info"},
                 new String[] {"--db", url, "--verbose", "info", "--format", "json"},
                 new String[] {"--db", url.replace(":5432/", ":1/"), "info"})) {
             CliRun r = CliRun.run(env, home, args);

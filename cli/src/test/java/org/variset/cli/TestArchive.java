@@ -17,8 +17,11 @@ record TestArchive(String[] where, Map<String, String> env) {
     /** A new archive (none made yet on disk; a server schema is made, empty). */
     static TestArchive fresh(Path home, String name) {
         if (TestArchives.onPostgres()) {
-            return new TestArchive(new String[] {"--db", TestArchives.url(TestArchives.newSchema())},
-                    Map.of("XDG_CACHE_HOME", home.resolve("cache-" + name).toAbsolutePath().toString()));
+            return new TestArchive(
+                    new String[] {"--db", TestArchives.url(TestArchives.newSchema())},
+                    Map.of(
+                            "XDG_CACHE_HOME",
+                            home.resolve("cache-" + name).toAbsolutePath().toString()));
         }
         return new TestArchive(new String[] {"--archive", home.resolve(name).toString()}, Map.of());
     }

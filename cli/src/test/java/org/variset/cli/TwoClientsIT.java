@@ -33,49 +33,63 @@ class TwoClientsIT {
     }
 
     private static String[] importOf(String url, Path files) {
-        return new String[] {"--db", url, "import", files.resolve("walls.csv").toString(),
-            files.resolve("routes.csv").toString(), files.resolve("holds.csv").toString()};
+        return new String[] {
+            "--db",
+            url,
+            "import",
+            files.resolve("walls.csv").toString(),
+            files.resolve("routes.csv").toString(),
+            files.resolve("holds.csv").toString()
+        };
     }
 
     @Test
     void bothIndexesEndInStepWithTheDatabase() throws Exception {
         Path all = dir.resolve("all");
-        SampleGenerator.Summary s = SampleGenerator.write(new SampleGenerator.Options(3, 1, 12,
-                LocalDate.of(2026, 6, 30), false), all);
+        SampleGenerator.Summary s =
+                SampleGenerator.write(new SampleGenerator.Options(3, 1, 12, LocalDate.of(2026, 6, 30), false), all);
         List<Path> gyms = new ArrayList<>();
         for (int g = 1; g <= 3; g++) {
-            gyms.add(SharedArchivePostgresTest.splitByGym(all, String.format("Synthetic Gym %03d", g), dir.resolve("gym-" + g)));
+            gyms.add(SharedArchivePostgresTest.splitByGym(
+                    all, String.format("Synthetic Gym %03d", g), dir.resolve("gym-" + g)));
         }
         String url = TestArchives.url(TestArchives.newSchema());
-        assertThat(ChildProcess.run(dir.resolve("init.log"), client("a"), "--db", url, "init")).isZero();
+        assertThat(ChildProcess.run(dir.resolve("init.log"), client("a"), "--db", url, "init"))
+                .isZero();
 
         Process a = ChildProcess.start(dir.resolve("a.log"), client("a"), importOf(url, gyms.get(0)));
         Process b = ChildProcess.start(dir.resolve("b.log"), client("b"), importOf(url, gyms.get(1)));
         // A third client searches while they import: it must never fail, whatever it finds.
         for (int i = 0; i < 3 && (a.isAlive() || b.isAlive()); i++) {
             assertThat(ChildProcess.run(dir.resolve("c-" + i + ".log"), client("c"), "--db", url, "search", "crimp"))
-                    .as(Files.readString(dir.resolve("c-" + i + ".log"))).isZero();
+                    .as(Files.readString(dir.resolve("c-" + i + ".log")))
+                    .isZero();
         }
         assertThat(a.waitFor(5, TimeUnit.MINUTES)).isTrue();
         assertThat(b.waitFor(5, TimeUnit.MINUTES)).isTrue();
         assertThat(a.exitValue()).as(Files.readString(dir.resolve("a.log"))).isZero();
         assertThat(b.exitValue()).as(Files.readString(dir.resolve("b.log"))).isZero();
-        assertThat(ChildProcess.run(dir.resolve("a2.log"), client("a"), importOf(url, gyms.get(2)))).as(
-                Files.readString(dir.resolve("a2.log"))).isZero();
+        assertThat(ChildProcess.run(dir.resolve("a2.log"), client("a"), importOf(url, gyms.get(2))))
+                .as(Files.readString(dir.resolve("a2.log")))
+                .isZero();
 
         long total = -1;
         for (String c : List.of("a", "b", "c")) {
             Path search = dir.resolve("search-" + c + ".json");
             assertThat(ChildProcess.run(search, client(c), "--db", url, "search", "crimp", "--format", "json"))
                     .isZero();
-            long found = JSON.readTree(jsonPart(Files.readString(search))).get("total").asLong();
+            long found = JSON.readTree(jsonPart(Files.readString(search)))
+                    .get("total")
+                    .asLong();
             assertThat(found).isPositive();
             if (total >= 0) {
                 assertThat(found).as("client " + c).isEqualTo(total);
             }
             total = found;
             Path check = dir.resolve("check-" + c + ".log");
-            assertThat(ChildProcess.run(check, client(c), "--db", url, "check")).as(Files.readString(check)).isZero();
+            assertThat(ChildProcess.run(check, client(c), "--db", url, "check"))
+                    .as(Files.readString(check))
+                    .isZero();
             assertThat(Files.readString(check)).contains(s.routes() + " documents, " + s.routes() + " routes");
         }
     }

@@ -1,6 +1,5 @@
 package org.variset.imports;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.catchThrowable;
 
@@ -18,6 +17,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.variset.archive.store.Archive;
+import org.variset.archive.testing.TestArchives;
 import org.variset.imports.export.ExportFormat;
 import org.variset.imports.export.TemplateWriter;
 import org.variset.imports.load.ArchiveImporter;
@@ -28,6 +28,7 @@ import org.variset.imports.load.ImportProgress;
 class HostileFilesTest {
     @TempDir
     Path dir;
+
     private Archive archive;
 
     @BeforeEach
@@ -41,8 +42,8 @@ class HostileFilesTest {
     }
 
     private String refused(Path file) {
-        Throwable t = catchThrowable(() -> new ArchiveImporter(archive).run(List.of(file), ImportOptions.defaults(),
-                ImportProgress.NONE));
+        Throwable t = catchThrowable(
+                () -> new ArchiveImporter(archive).run(List.of(file), ImportOptions.defaults(), ImportProgress.NONE));
         assertThat(t).as("refused as bad input").isInstanceOf(ImportException.class);
         assertThat(archive.stats().routes()).as("nothing written").isZero();
         return t.getMessage() + " " + ((ImportException) t).problems();
@@ -51,7 +52,8 @@ class HostileFilesTest {
     /** An XLSX whose sheet inflates from about 200 KB to 200 MB: POI's zip-bomb guard refuses it. */
     @Test
     void refusesAZipBombWorkbook() throws IOException {
-        Path template = TemplateWriter.write(ExportFormat.XLSX, dir.resolve("t"), false).get(0);
+        Path template =
+                TemplateWriter.write(ExportFormat.XLSX, dir.resolve("t"), false).get(0);
         Path bomb = dir.resolve("bomb.xlsx");
         try (ZipInputStream in = new ZipInputStream(Files.newInputStream(template));
                 ZipOutputStream out = new ZipOutputStream(Files.newOutputStream(bomb))) {
@@ -85,35 +87,45 @@ class HostileFilesTest {
             w.write("n".repeat(10_000_000));
             w.write("\n");
         }
-        assertThat(refused(big)).contains("routes.csv:2: notes: 10,000,000 characters, more than the 100,000 the "
-                + "archive keeps here");
+        assertThat(refused(big))
+                .contains("routes.csv:2: notes: 10,000,000 characters, more than the 100,000 the "
+                        + "archive keeps here");
     }
 
     @Test
     void refusesAHugeNameAndAHugeList() throws IOException {
-        Path f = ImportFiles.write(dir, "routes.csv", "gym,wall,route,set_on,discipline,grade,moves\n"
-                + "Harbour Hall,Slab," + "R".repeat(300) + ",2026-03-02,boulder,V2,"
-                + "dyno;".repeat(3_000) + "\n");
-        assertThat(refused(f)).contains("route: 300 characters, more than the 255").contains("moves: ");
+        Path f = ImportFiles.write(
+                dir,
+                "routes.csv",
+                "gym,wall,route,set_on,discipline,grade,moves\n"
+                        + "Harbour Hall,Slab," + "R".repeat(300) + ",2026-03-02,boulder,V2,"
+                        + "dyno;".repeat(3_000) + "\n");
+        assertThat(refused(f))
+                .contains("route: 300 characters, more than the 255")
+                .contains("moves: ");
     }
 
     @Test
     void refusesADeeplyNestedJsonDocument() throws IOException {
         Path nested = dir.resolve("reset.json");
-        Files.writeString(nested, "{\"gym\": \"Harbour Hall\", \"routes\": [{\"notes\": " + "{\"a\": ".repeat(100_000)
-                + "1" + "}".repeat(100_000) + "}]}");
-        assertThat(refused(nested)).contains("reset.json: is not a document Variset reads: it nests deeper")
-                .contains("nesting depth (1001) exceeds the maximum allowed").doesNotContain("StreamReadConstraints");
-        Files.writeString(nested, "{\"gym\": \"Harbour Hall\", \"routes\": " + "[".repeat(100_000)
-                + "]".repeat(100_000) + "}");
+        Files.writeString(
+                nested,
+                "{\"gym\": \"Harbour Hall\", \"routes\": [{\"notes\": " + "{\"a\": ".repeat(100_000) + "1"
+                        + "}".repeat(100_000) + "}]}");
+        assertThat(refused(nested))
+                .contains("reset.json: is not a document Variset reads: it nests deeper")
+                .contains("nesting depth (1001) exceeds the maximum allowed")
+                .doesNotContain("StreamReadConstraints");
+        Files.writeString(
+                nested, "{\"gym\": \"Harbour Hall\", \"routes\": " + "[".repeat(100_000) + "]".repeat(100_000) + "}");
         assertThat(refused(nested)).contains("routes[0] is not an object");
     }
 
     @Test
     void refusesAFileThatIsNotWhatItsNameSays() throws IOException {
         Path fake = Files.write(dir.resolve("routes.xlsx"), "gym,wall\n".getBytes(StandardCharsets.UTF_8));
-        assertThat(refused(fake)).contains("routes.xlsx: is not an XLSX workbook (expected a file saved as Excel "
-                + "Workbook .xlsx)");
+        assertThat(refused(fake))
+                .contains("routes.xlsx: is not an XLSX workbook (expected a file saved as Excel " + "Workbook .xlsx)");
         try (InputStream ignored = Files.newInputStream(fake)) {
             assertThat(ignored.read()).isPositive();
         }

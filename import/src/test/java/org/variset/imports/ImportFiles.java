@@ -14,8 +14,7 @@ public final class ImportFiles {
     /** The header of the spec's holds.csv example. */
     public static final String HOLDS_HEADER = "gym,route,set_on,seq,role,type,size,grip,hold_ref,x_m,y_m";
 
-    private ImportFiles() {
-    }
+    private ImportFiles() {}
 
     /** Writes text as UTF-8. */
     public static Path write(Path dir, String name, String text) {

@@ -34,10 +34,18 @@ class StreamingImportIT {
     void importsAMillionHoldRowsUnderA512MegabyteHeap() throws Exception {
         writeFiles(dir);
         Path archiveDir = dir.resolve("archive");
-        Process p = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-Xmx512m", "-XX:+UseSerialGC", "-cp", System.getProperty("java.class.path"),
-                StreamingImportIT.class.getName(), dir.toString(), archiveDir.toString())
-                .redirectErrorStream(true).redirectOutput(dir.resolve("child.log").toFile()).start();
+        Process p = new ProcessBuilder(
+                        Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                        "-Xmx512m",
+                        "-XX:+UseSerialGC",
+                        "-cp",
+                        System.getProperty("java.class.path"),
+                        StreamingImportIT.class.getName(),
+                        dir.toString(),
+                        archiveDir.toString())
+                .redirectErrorStream(true)
+                .redirectOutput(dir.resolve("child.log").toFile())
+                .start();
         assertThat(p.waitFor(20, TimeUnit.MINUTES)).as("child finished").isTrue();
         String log = Files.readString(dir.resolve("child.log"));
         assertThat(p.exitValue()).as(log).isZero();
@@ -57,12 +65,16 @@ class StreamingImportIT {
     public static void main(String[] args) {
         long t0 = System.nanoTime();
         try (Archive a = Archive.create(Path.of(args[1]))) {
-            new ArchiveImporter(a).run(List.of(Path.of(args[0], "routes.csv"), Path.of(args[0], "holds.csv")),
-                    ImportOptions.defaults(), ImportProgress.NONE);
+            new ArchiveImporter(a)
+                    .run(
+                            List.of(Path.of(args[0], "routes.csv"), Path.of(args[0], "holds.csv")),
+                            ImportOptions.defaults(),
+                            ImportProgress.NONE);
         }
         Runtime rt = Runtime.getRuntime();
-        System.out.printf("imported %d holds in %.1f s, max heap %d MB%n", ROUTES * HOLDS_PER_ROUTE,
-                (System.nanoTime() - t0) / 1e9, rt.maxMemory() >> 20);
+        System.out.printf(
+                "imported %d holds in %.1f s, max heap %d MB%n",
+                ROUTES * HOLDS_PER_ROUTE, (System.nanoTime() - t0) / 1e9, rt.maxMemory() >> 20);
     }
 
     private static void writeFiles(Path dir) throws IOException {
@@ -72,9 +84,10 @@ class StreamingImportIT {
             h.write("gym,route,set_on,seq,role,type,size,grip,hold_ref,x_m,y_m\n");
             String[] types = {"jug", "crimp", "sloper", "pinch", "edge"};
             for (int i = 0; i < ROUTES; i++) {
-                String date = java.time.LocalDate.of(2016, 1, 1).plusDays(i / 100).toString();
-                r.write("Test Chain Gym,Wall " + (i % 8) + ",R" + i + "," + date + ",boulder,V" + (i % 8)
-                        + ",Setter " + (i % 12) + ",dyno;heel hook\n");
+                String date =
+                        java.time.LocalDate.of(2016, 1, 1).plusDays(i / 100).toString();
+                r.write("Test Chain Gym,Wall " + (i % 8) + ",R" + i + "," + date + ",boulder,V" + (i % 8) + ",Setter "
+                        + (i % 12) + ",dyno;heel hook\n");
                 for (int k = 1; k <= HOLDS_PER_ROUTE; k++) {
                     h.write("Test Chain Gym,R" + i + "," + date + "," + k + ",hand," + types[k % 5] + ",m,"
                             + (k * 45 % 360) + ",H" + k + "," + (k * 0.1) + "," + (k * 0.2) + "\n");

@@ -1,6 +1,5 @@
 package org.variset.imports;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.variset.imports.ImportFiles.write;
@@ -22,6 +21,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Route;
 import org.variset.archive.store.Archive;
+import org.variset.archive.testing.TestArchives;
 import org.variset.imports.load.ArchiveImporter;
 import org.variset.imports.load.ImportOptions;
 import org.variset.imports.load.ImportProgress;
@@ -29,6 +29,7 @@ import org.variset.imports.load.ImportProgress;
 class WorkbookAndJsonImportTest {
     @TempDir
     Path dir;
+
     private Archive archive;
 
     @BeforeEach
@@ -47,7 +48,8 @@ class WorkbookAndJsonImportTest {
 
     private Route route(String label) {
         return archive.fromTransaction(s -> {
-            Route r = s.createSelectionQuery("from Route where label = :l", Route.class).setParameter("l", label)
+            Route r = s.createSelectionQuery("from Route where label = :l", Route.class)
+                    .setParameter("l", label)
                     .getSingleResult();
             r.holds().size();
             return r;
@@ -58,7 +60,8 @@ class WorkbookAndJsonImportTest {
     @Test
     void readsDateNumberAndTimeCellsOfAWorkbook() throws Exception {
         Path f = dir.resolve("reset.xlsx");
-        try (XSSFWorkbook wb = new XSSFWorkbook(); OutputStream out = Files.newOutputStream(f)) {
+        try (XSSFWorkbook wb = new XSSFWorkbook();
+                OutputStream out = Files.newOutputStream(f)) {
             CreationHelper h = wb.getCreationHelper();
             CellStyle date = wb.createCellStyle();
             date.setDataFormat(h.createDataFormat().getFormat("dd/mm/yyyy"));
@@ -102,19 +105,28 @@ class WorkbookAndJsonImportTest {
     @Test
     void refusesAFileThatIsNoWorkbook() {
         Path f = write(dir, "reset.xlsx", "gym,wall\n");
-        assertThatThrownBy(() -> run(f)).isInstanceOf(ImportException.class)
+        assertThatThrownBy(() -> run(f))
+                .isInstanceOf(ImportException.class)
                 .hasMessageContaining("is not an XLSX workbook");
     }
 
     @Test
     void namesTheLineAndPathOfABadNestedHold() {
-        Path f = write(dir, "reset.json", "{\n  \"gym\": \"Harbour Hall\",\n  \"routes\": [\n"
-                + "    {\"wall\": \"Cave\", \"route\": \"B1\", \"set_on\": \"2026-03-02\", \"discipline\": \"boulder\","
-                + " \"grade\": \"V1\", \"holds\": [{\"type\": \"jug\"}, {\"type\": \"jug\", \"grip\": [400]}]}\n"
-                + "  ]\n}\n");
-        assertThatThrownBy(() -> run(f)).isInstanceOfSatisfying(ImportException.class, e -> assertThat(e.problems())
-                .singleElement().asString().isEqualTo(f + ":4: routes[0].holds[1].grip: grip angle '400' is outside "
-                        + "0-360 degrees"));
+        Path f = write(
+                dir,
+                "reset.json",
+                "{\n  \"gym\": \"Harbour Hall\",\n  \"routes\": [\n"
+                        + "    {\"wall\": \"Cave\", \"route\": \"B1\", \"set_on\": \"2026-03-02\", \"discipline\": \"boulder\","
+                        + " \"grade\": \"V1\", \"holds\": [{\"type\": \"jug\"}, {\"type\": \"jug\", \"grip\": [400]}]}\n"
+                        + "  ]\n}\n");
+        assertThatThrownBy(() -> run(f))
+                .isInstanceOfSatisfying(
+                        ImportException.class,
+                        e -> assertThat(e.problems())
+                                .singleElement()
+                                .asString()
+                                .isEqualTo(f + ":4: routes[0].holds[1].grip: grip angle '400' is outside "
+                                        + "0-360 degrees"));
     }
 
     @Test

@@ -8,6 +8,5 @@ public final class Safety {
             + "instructions, local codes and qualified practice. Variset measures the variety of what was set; it "
             + "does not judge whether a route or wall is safe.";
 
-    private Safety() {
-    }
+    private Safety() {}
 }

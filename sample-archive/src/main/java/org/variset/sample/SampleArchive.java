@@ -15,10 +15,10 @@ import java.util.List;
 public final class SampleArchive {
     /** The sample gym's name (invented). */
     public static final String GYM = "Lantern Rock";
+
     private static final List<String> FILES = List.of("walls.csv", "routes.csv", "holds.csv");
 
-    private SampleArchive() {
-    }
+    private SampleArchive() {}
 
     /**
      * Copies the sample files into a folder.

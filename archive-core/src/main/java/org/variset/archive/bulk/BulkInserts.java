@@ -45,8 +45,8 @@ public final class BulkInserts implements AutoCloseable {
     public BulkInserts(Connection c) throws SQLException {
         this.ids = new IdBlocks(c);
         this.setter = c.prepareStatement("INSERT INTO setter (id, name) VALUES (?, ?)");
-        this.reset = c.prepareStatement("INSERT INTO reset (id, gym_id, wall_id, label, reset_on) VALUES (?, ?, ?, ?,"
-                + " ?)");
+        this.reset = c.prepareStatement(
+                "INSERT INTO reset (id, gym_id, wall_id, label, reset_on) VALUES (?, ?, ?, ?," + " ?)");
         this.resetDate = c.prepareStatement("UPDATE reset SET reset_on = ? WHERE id = ? AND reset_on > ?");
         this.route = c.prepareStatement("INSERT INTO route (id, gym_id, wall_id, reset_id, label, set_on, stripped_on,"
                 + " discipline, grade_text, grade_scale, grade_ircra, color, angle_deg, moves, styles, "

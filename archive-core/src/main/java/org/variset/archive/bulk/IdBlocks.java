@@ -62,9 +62,10 @@ public final class IdBlocks implements AutoCloseable {
             if (!sequence.matches("[a-z_]+")) {
                 throw new IllegalArgumentException("not a sequence name: " + sequence);
             }
-            q = connection.prepareStatement(postgres
-                    ? "SELECT nextval('" + sequence + "') FROM generate_series(1, " + VALUES_PER_QUERY + ")"
-                    : "SELECT NEXT VALUE FOR " + sequence + " FROM SYSTEM_RANGE(1, " + VALUES_PER_QUERY + ")");
+            q = connection.prepareStatement(
+                    postgres
+                            ? "SELECT nextval('" + sequence + "') FROM generate_series(1, " + VALUES_PER_QUERY + ")"
+                            : "SELECT NEXT VALUE FOR " + sequence + " FROM SYSTEM_RANGE(1, " + VALUES_PER_QUERY + ")");
             queries.put(sequence, q);
         }
         return q;

@@ -29,11 +29,14 @@ public final class GymLookup {
             if (gyms.size() == 1) {
                 return gyms.get(0);
             }
-            throw new IllegalArgumentException(gyms.isEmpty() ? "the archive holds no gym yet (import a file first)"
-                    : "name the gym with --gym (the archive holds " + names(gyms) + ")");
+            throw new IllegalArgumentException(
+                    gyms.isEmpty()
+                            ? "the archive holds no gym yet (import a file first)"
+                            : "name the gym with --gym (the archive holds " + names(gyms) + ")");
         }
-        return q.gym(name).orElseThrow(() -> new IllegalArgumentException("no gym named '" + name
-                + "' (the archive holds " + (gyms.isEmpty() ? "none" : names(gyms)) + ")"));
+        return q.gym(name)
+                .orElseThrow(() -> new IllegalArgumentException("no gym named '" + name + "' (the archive holds "
+                        + (gyms.isEmpty() ? "none" : names(gyms)) + ")"));
     }
 
     /**
@@ -42,9 +45,12 @@ public final class GymLookup {
      * @throws IllegalArgumentException naming the gym's walls
      */
     public Wall wall(Gym gym, String name) {
-        return q.wall(gym, name).orElseThrow(() -> new IllegalArgumentException("no wall named '" + name + "' in "
-                + gym.name() + " (walls: " + String.join(", ", q.walls(gym).stream().map(Wall::name).toList())
-                + ")"));
+        return q.wall(gym, name)
+                .orElseThrow(() -> new IllegalArgumentException("no wall named '" + name + "' in "
+                        + gym.name() + " (walls: "
+                        + String.join(
+                                ", ", q.walls(gym).stream().map(Wall::name).toList())
+                        + ")"));
     }
 
     private static String names(List<Gym> gyms) {

@@ -28,8 +28,16 @@ import org.variset.archive.vocabulary.VocabularyField;
  * @param color the colour, or null
  * @param notes the notes, or null
  */
-public record RouteCorrection(String grade, GradeScale gradeScale, List<String> setters, List<String> moves,
-        List<String> styles, List<Integer> moveDifficulty, LocalDate strippedOn, boolean standing, String color,
+public record RouteCorrection(
+        String grade,
+        GradeScale gradeScale,
+        List<String> setters,
+        List<String> moves,
+        List<String> styles,
+        List<Integer> moveDifficulty,
+        LocalDate strippedOn,
+        boolean standing,
+        String color,
         String notes) {
 
     /**
@@ -83,7 +91,8 @@ public record RouteCorrection(String grade, GradeScale gradeScale, List<String> 
     }
 
     private static Setter setter(Session s, String name) {
-        Setter x = s.createSelectionQuery("from Setter where name = :n", Setter.class).setParameter("n", name.strip())
+        Setter x = s.createSelectionQuery("from Setter where name = :n", Setter.class)
+                .setParameter("n", name.strip())
                 .uniqueResult();
         if (x == null) {
             x = new Setter(name);

@@ -21,11 +21,9 @@ public final class RouteRemoval {
      * @param holds how many hold placements go with them
      * @param emptiedResets resets left without routes, which go too
      */
-    public record Plan(List<String> routes, long holds, List<String> emptiedResets) {
-    }
+    public record Plan(List<String> routes, long holds, List<String> emptiedResets) {}
 
-    private RouteRemoval() {
-    }
+    private RouteRemoval() {}
 
     /**
      * The routes of a reset, found by label.
@@ -34,8 +32,9 @@ public final class RouteRemoval {
      */
     public static List<Route> ofReset(Session s, Gym gym, String label) {
         ArchiveQueries q = new ArchiveQueries(s);
-        Reset reset = q.reset(gym, label).orElseThrow(() -> new IllegalArgumentException("no reset labelled '"
-                + label + "' in " + gym.name() + " (see 'variset info' and the reset column of your files)"));
+        Reset reset = q.reset(gym, label)
+                .orElseThrow(() -> new IllegalArgumentException("no reset labelled '" + label + "' in " + gym.name()
+                        + " (see 'variset info' and the reset column of your files)"));
         return q.routesOfReset(reset);
     }
 
@@ -45,14 +44,23 @@ public final class RouteRemoval {
             return new Plan(List.of(), 0, List.of());
         }
         long holds = s.createSelectionQuery("select count(h) from HoldPlacement h where h.route in :r", Long.class)
-                .setParameter("r", routes).getSingleResult();
-        List<String> emptied = routes.stream().map(Route::reset).distinct()
-                .filter(reset -> s.createSelectionQuery("select count(r) from Route r where r.reset = :reset"
-                        + " and r not in :gone", Long.class).setParameter("reset", reset).setParameter("gone", routes)
-                        .getSingleResult() == 0)
-                .map(Reset::label).toList();
-        List<String> lines = routes.stream().map(r -> r.wall().name() + " " + r.label() + " (" + r.setOn() + ", "
-                + r.gradeText() + ")").toList();
+                .setParameter("r", routes)
+                .getSingleResult();
+        List<String> emptied = routes.stream()
+                .map(Route::reset)
+                .distinct()
+                .filter(reset -> s.createSelectionQuery(
+                                        "select count(r) from Route r where r.reset = :reset" + " and r not in :gone",
+                                        Long.class)
+                                .setParameter("reset", reset)
+                                .setParameter("gone", routes)
+                                .getSingleResult()
+                        == 0)
+                .map(Reset::label)
+                .toList();
+        List<String> lines = routes.stream()
+                .map(r -> r.wall().name() + " " + r.label() + " (" + r.setOn() + ", " + r.gradeText() + ")")
+                .toList();
         return new Plan(lines, holds, emptied);
     }
 

@@ -9,8 +9,7 @@ import org.variset.archive.store.ChangeLog;
 
 /** Renaming a setter, or merging two names of one person ("K. Ames" and "Kit Ames"), across the archive. */
 public final class SetterChanges {
-    private SetterChanges() {
-    }
+    private SetterChanges() {}
 
     /**
      * Renames a setter everywhere.
@@ -39,8 +38,9 @@ public final class SetterChanges {
         if (gone.id().equals(kept.id())) {
             throw new IllegalArgumentException("'" + from + "' and '" + into + "' are the same setter");
         }
-        List<Route> routes = s.createSelectionQuery("select r from Route r join r.setters x where x = :s",
-                Route.class).setParameter("s", gone).getResultList();
+        List<Route> routes = s.createSelectionQuery("select r from Route r join r.setters x where x = :s", Route.class)
+                .setParameter("s", gone)
+                .getResultList();
         ChangeLog.routes(s, routes.stream().map(Route::id).toList());
         for (Route r : routes) {
             List<Setter> next = new ArrayList<>();
@@ -62,14 +62,15 @@ public final class SetterChanges {
         if (x == null) {
             List<String> all = s.createSelectionQuery("select name from Setter order by name", String.class)
                     .getResultList();
-            throw new IllegalArgumentException("no setter named '" + name + "' (setters: " + String.join(", ", all)
-                    + ")");
+            throw new IllegalArgumentException(
+                    "no setter named '" + name + "' (setters: " + String.join(", ", all) + ")");
         }
         return x;
     }
 
     private static Setter findOrNull(Session s, String name) {
-        return s.createSelectionQuery("from Setter where name = :n", Setter.class).setParameter("n", name.strip())
+        return s.createSelectionQuery("from Setter where name = :n", Setter.class)
+                .setParameter("n", name.strip())
                 .uniqueResult();
     }
 }

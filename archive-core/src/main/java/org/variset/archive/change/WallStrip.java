@@ -21,16 +21,16 @@ public final class WallStrip {
      * @param setThatDay routes set on the date, left up
      * @param alreadyDown routes set before the date that were already down
      */
-    public record Result(int stripped, int setThatDay, int alreadyDown) {
-    }
+    public record Result(int stripped, int setThatDay, int alreadyDown) {}
 
-    private WallStrip() {
-    }
+    private WallStrip() {}
 
     /** Strips the wall on a date, in the caller's transaction. */
     public static Result strip(Session session, Wall wall, LocalDate on) {
         List<Route> routes = session.createSelectionQuery("from Route where wall = :w and setOn <= :d", Route.class)
-                .setParameter("w", wall).setParameter("d", on).getResultList();
+                .setParameter("w", wall)
+                .setParameter("d", on)
+                .getResultList();
         int stripped = 0;
         int same = 0;
         int down = 0;

@@ -23,34 +23,53 @@ import org.variset.archive.store.SchemaVersion;
  */
 public final class ArchiveCheck {
     private static final String[][] ORPHANS = {
-        {"walls without their gym", "SELECT COUNT(*) FROM wall w LEFT JOIN gym g ON g.id = w.gym_id WHERE g.id IS NULL"},
-        {"resets without their wall", "SELECT COUNT(*) FROM reset r LEFT JOIN wall w ON w.id = r.wall_id"
-            + " WHERE w.id IS NULL"},
-        {"routes without their reset", "SELECT COUNT(*) FROM route r LEFT JOIN reset x ON x.id = r.reset_id"
-            + " WHERE x.id IS NULL"},
-        {"holds without their route", "SELECT COUNT(*) FROM hold_placement h LEFT JOIN route r ON r.id = h.route_id"
-            + " WHERE r.id IS NULL"},
-        {"setter links without a setter", "SELECT COUNT(*) FROM route_setter x LEFT JOIN setter s"
-            + " ON s.id = x.setter_id WHERE s.id IS NULL"},
-        {"routes on another wall than their reset", "SELECT COUNT(*) FROM route r JOIN reset x ON x.id = r.reset_id"
-            + " WHERE x.wall_id <> r.wall_id OR x.gym_id <> r.gym_id"},
-        {"routes set before their reset's day", "SELECT COUNT(*) FROM route r JOIN reset x ON x.id = r.reset_id"
-            + " WHERE r.set_on < x.reset_on"},
-        {"routes stripped on or before they were set", "SELECT COUNT(*) FROM route WHERE stripped_on IS NOT NULL"
-            + " AND stripped_on <= set_on"},
+        {"walls without their gym", "SELECT COUNT(*) FROM wall w LEFT JOIN gym g ON g.id = w.gym_id WHERE g.id IS NULL"
+        },
+        {
+            "resets without their wall",
+            "SELECT COUNT(*) FROM reset r LEFT JOIN wall w ON w.id = r.wall_id" + " WHERE w.id IS NULL"
+        },
+        {
+            "routes without their reset",
+            "SELECT COUNT(*) FROM route r LEFT JOIN reset x ON x.id = r.reset_id" + " WHERE x.id IS NULL"
+        },
+        {
+            "holds without their route",
+            "SELECT COUNT(*) FROM hold_placement h LEFT JOIN route r ON r.id = h.route_id" + " WHERE r.id IS NULL"
+        },
+        {
+            "setter links without a setter",
+            "SELECT COUNT(*) FROM route_setter x LEFT JOIN setter s" + " ON s.id = x.setter_id WHERE s.id IS NULL"
+        },
+        {
+            "routes on another wall than their reset",
+            "SELECT COUNT(*) FROM route r JOIN reset x ON x.id = r.reset_id"
+                    + " WHERE x.wall_id <> r.wall_id OR x.gym_id <> r.gym_id"
+        },
+        {
+            "routes set before their reset's day",
+            "SELECT COUNT(*) FROM route r JOIN reset x ON x.id = r.reset_id" + " WHERE r.set_on < x.reset_on"
+        },
+        {
+            "routes stripped on or before they were set",
+            "SELECT COUNT(*) FROM route WHERE stripped_on IS NOT NULL" + " AND stripped_on <= set_on"
+        },
     };
-    private static final String[] TABLES = {"gym", "wall", "setter", "reset", "route", "route_setter",
-        "hold_placement", "gym_setting", "route_change"};
+    private static final String[] TABLES = {
+        "gym", "wall", "setter", "reset", "route", "route_setter", "hold_placement", "gym_setting", "route_change"
+    };
 
-    private ArchiveCheck() {
-    }
+    private ArchiveCheck() {}
 
     /** Checks the database and the index. */
     public static CheckReport run(Archive archive, SearchIndex index) {
         List<CheckReport.Item> items = new ArrayList<>();
         Connection c = archive.connection();
         SchemaVersion v = archive.schemaVersion();
-        items.add(new CheckReport.Item("database", "schema version", v.version() == SchemaVersion.LATEST && !v.failed(),
+        items.add(new CheckReport.Item(
+                "database",
+                "schema version",
+                v.version() == SchemaVersion.LATEST && !v.failed(),
                 "version " + v.version() + (v.failed() ? ", a migration failed" : "") + " (this Variset: "
                         + SchemaVersion.LATEST + ")"));
         items.add(readsEveryRow(c));
@@ -69,7 +88,8 @@ public final class ArchiveCheck {
         try {
             for (String t : TABLES) {
                 long n = 0;
-                try (PreparedStatement s = c.prepareStatement("SELECT * FROM " + t); ResultSet rs = s.executeQuery()) {
+                try (PreparedStatement s = c.prepareStatement("SELECT * FROM " + t);
+                        ResultSet rs = s.executeQuery()) {
                     int columns = rs.getMetaData().getColumnCount();
                     while (rs.next()) {
                         for (int i = 1; i <= columns; i++) {
@@ -89,7 +109,7 @@ public final class ArchiveCheck {
     /** Every route with its holds through the read model: JSON columns parse, enums are known. */
     private static CheckReport.Item readsEveryRoute(Connection c, long routes) {
         try {
-            long n = new RouteReader(c).forEachChunk(RouteFilter.all(), 2_000, chunk -> { });
+            long n = new RouteReader(c).forEachChunk(RouteFilter.all(), 2_000, chunk -> {});
             return new CheckReport.Item("database", "every route reads as a route", n == routes, n + " of " + routes);
         } catch (RuntimeException e) {
             return new CheckReport.Item("database", "every route reads as a route", false, e.getMessage());
@@ -97,7 +117,8 @@ public final class ArchiveCheck {
     }
 
     static long count(Connection c, String sql) {
-        try (PreparedStatement s = c.prepareStatement(sql); ResultSet rs = s.executeQuery()) {
+        try (PreparedStatement s = c.prepareStatement(sql);
+                ResultSet rs = s.executeQuery()) {
             rs.next();
             return rs.getLong(1);
         } catch (SQLException e) {
@@ -108,7 +129,8 @@ public final class ArchiveCheck {
     /** The ids of every route, for comparing with the index. */
     static Set<Long> routeIds(Connection c) {
         Set<Long> out = new HashSet<>();
-        try (PreparedStatement s = c.prepareStatement("SELECT id FROM route"); ResultSet rs = s.executeQuery()) {
+        try (PreparedStatement s = c.prepareStatement("SELECT id FROM route");
+                ResultSet rs = s.executeQuery()) {
             while (rs.next()) {
                 out.add(rs.getLong(1));
             }

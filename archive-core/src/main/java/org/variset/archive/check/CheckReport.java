@@ -17,8 +17,7 @@ public record CheckReport(List<Item> items) {
      * @param ok whether it passed
      * @param detail what was found, in words
      */
-    public record Item(String part, String name, boolean ok, String detail) {
-    }
+    public record Item(String part, String name, boolean ok, String detail) {}
 
     /** True when every check passed. */
     public boolean healthy() {

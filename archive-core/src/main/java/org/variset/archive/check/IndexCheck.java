@@ -9,8 +9,7 @@ import org.variset.archive.store.ChangeLog;
 
 /** The index's part of a check: sound, in step with the database, one document per route. */
 final class IndexCheck {
-    private IndexCheck() {
-    }
+    private IndexCheck() {}
 
     static void add(SearchIndex index, Connection c, long routes, long dbStamp, List<CheckReport.Item> items) {
         SearchIndex.Health h = index.health();
@@ -21,14 +20,30 @@ final class IndexCheck {
         if (ChangeLog.isShared(c)) {
             // A shared archive's stamps are transaction ids (ChangeLog): the index is behind when changes made at or
             // after its stamp are visible (some may already be applied, when a transaction was running as it synced).
-            int unseen = h.stamp() < 0 ? -1 : ChangeLog.changedSince(c, h.stamp(), dbStamp).size();
-            items.add(new CheckReport.Item("index", "change stamp", unseen == 0, "index at transaction "
-                    + h.stamp() + ", oldest running " + dbStamp + (unseen == 0 ? "" : "; " + unseen
-                            + " routes changed since (behind: the next search catches up)")));
+            int unseen = h.stamp() < 0
+                    ? -1
+                    : ChangeLog.changedSince(c, h.stamp(), dbStamp).size();
+            items.add(new CheckReport.Item(
+                    "index",
+                    "change stamp",
+                    unseen == 0,
+                    "index at transaction "
+                            + h.stamp() + ", oldest running " + dbStamp
+                            + (unseen == 0
+                                    ? ""
+                                    : "; " + unseen + " routes changed since (behind: the next search catches up)")));
         } else {
-            items.add(new CheckReport.Item("index", "change stamp", h.stamp() == dbStamp, "index " + h.stamp()
-                    + ", database " + dbStamp + (h.stamp() == dbStamp ? "" : h.stamp() < dbStamp
-                            ? " (behind: the next search catches up)" : " (ahead of the database)")));
+            items.add(new CheckReport.Item(
+                    "index",
+                    "change stamp",
+                    h.stamp() == dbStamp,
+                    "index " + h.stamp()
+                            + ", database " + dbStamp
+                            + (h.stamp() == dbStamp
+                                    ? ""
+                                    : h.stamp() < dbStamp
+                                            ? " (behind: the next search catches up)"
+                                            : " (ahead of the database)")));
         }
         Set<Long> db = ArchiveCheck.routeIds(c);
         Set<Long> missing = new HashSet<>(db);
@@ -36,8 +51,15 @@ final class IndexCheck {
         Set<Long> extra = new HashSet<>(h.ids());
         extra.removeAll(db);
         boolean same = missing.isEmpty() && extra.isEmpty();
-        items.add(new CheckReport.Item("index", "one document per route", same, h.ids().size() + " documents, "
-                + routes + " routes" + (same ? "" : "; " + missing.size() + " routes missing, " + extra.size()
-                        + " documents of routes that are gone")));
+        items.add(new CheckReport.Item(
+                "index",
+                "one document per route",
+                same,
+                h.ids().size() + " documents, "
+                        + routes + " routes"
+                        + (same
+                                ? ""
+                                : "; " + missing.size() + " routes missing, " + extra.size()
+                                        + " documents of routes that are gone")));
     }
 }

@@ -62,8 +62,10 @@ public final class BandSet {
 
     /** Boulders: one band per V grade, edges midway between neighbouring grades' level ranges (docs/spec/grades.md). */
     private static BandSet boulderDefaults() {
-        String[] labels = {"VB", "V0", "V1", "V2", "V3", "V4", "V5", "V6", "V7", "V8", "V9", "V10", "V11", "V12",
-            "V13", "V14", "V15", "V16"};
+        String[] labels = {
+            "VB", "V0", "V1", "V2", "V3", "V4", "V5", "V6", "V7", "V8", "V9", "V10", "V11", "V12", "V13", "V14", "V15",
+            "V16"
+        };
         double[] edges = {10, 13.5, 14.5, 16, 17.5, 18.5, 19.5, 20.5, 21.5, 23, 24.5, 25.5, 26.5, 27.5, 29, 30, 31.5};
         List<Band> out = new ArrayList<>();
         for (int i = 0; i < labels.length; i++) {

@@ -18,8 +18,9 @@ final class GradeNotation {
     private static final Pattern ARABIC = Pattern.compile("(\\d{1,2})([+-])?");
     private static final Pattern ROMAN = Pattern.compile("([IVXivx]+)([+-])?");
     private static final Pattern NUMBER = Pattern.compile("\\d{1,3}(\\.\\d+)?");
-    private static final String[] ROMANS = {"I", "II", "III", "IV", "V", "VI", "VII", "VIII", "IX", "X", "XI", "XII",
-        "XIII", "XIV", "XV"};
+    private static final String[] ROMANS = {
+        "I", "II", "III", "IV", "V", "VI", "VII", "VIII", "IX", "X", "XI", "XII", "XIII", "XIV", "XV"
+    };
 
     /**
      * How far above the table a grade may lie and still be read (V20, 9c+/10a, UIAA 13+). Further out a text is
@@ -74,8 +75,10 @@ final class GradeNotation {
         if (letter != null && !anyCase && Character.isUpperCase(letter.charAt(0)) != (scale == GradeScale.FONT)) {
             return null;
         }
-        String base = m.group(1) + (letter == null ? "" : scale == GradeScale.FONT
-                ? letter.toUpperCase(Locale.ROOT) : letter.toLowerCase(Locale.ROOT));
+        String base = m.group(1)
+                + (letter == null
+                        ? ""
+                        : scale == GradeScale.FONT ? letter.toUpperCase(Locale.ROOT) : letter.toLowerCase(Locale.ROOT));
         String mod = m.group(3);
         if (scale == GradeScale.FRENCH && !olderFrench(base).equals(base)) {
             base = olderFrench(base);
@@ -124,7 +127,8 @@ final class GradeNotation {
 
     /** YDS 5.10- means 5.10a/b, 5.10+ means 5.10c/d, a bare 5.10 means the mean of 5.10a to 5.10d. */
     private Grade ydsWithoutLetter(String text, int minor, String mod) {
-        String[] letters = "-".equals(mod) ? new String[] {"a", "b"}
+        String[] letters = "-".equals(mod)
+                ? new String[] {"a", "b"}
                 : "+".equals(mod) ? new String[] {"c", "d"} : new String[] {"a", "b", "c", "d"};
         double sum = 0;
         int lo = Integer.MAX_VALUE;
@@ -180,8 +184,15 @@ final class GradeNotation {
         if (v < GradeTable.FIRST_LEVEL) {
             return null;
         }
-        return new Grade(text, GradeScale.IRCRA, token, v, (int) Math.floor(v), (int) Math.ceil(v),
-                GradeModifier.NONE, v > GradeTable.LAST_LEVEL);
+        return new Grade(
+                text,
+                GradeScale.IRCRA,
+                token,
+                v,
+                (int) Math.floor(v),
+                (int) Math.ceil(v),
+                GradeModifier.NONE,
+                v > GradeTable.LAST_LEVEL);
     }
 
     /**

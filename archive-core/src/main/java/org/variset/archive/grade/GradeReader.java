@@ -61,8 +61,8 @@ public final class GradeReader {
         if (scale != null) {
             Grade g = readIn(text, token, scale, true);
             if (g == null) {
-                throw new GradeException("'" + token + "' is not a " + scale.displayName() + " grade ("
-                        + EXPECTED + ")", List.of());
+                throw new GradeException(
+                        "'" + token + "' is not a " + scale.displayName() + " grade (" + EXPECTED + ")", List.of());
             }
             return g;
         }
@@ -142,8 +142,14 @@ public final class GradeReader {
         if (b == null) {
             return null;
         }
-        return new Grade(text, scale, a.canonical() + "/" + b.canonical(), (a.ircra() + b.ircra()) / 2,
-                Math.min(a.lowLevel(), b.lowLevel()), Math.max(a.highLevel(), b.highLevel()),
-                GradeModifier.NONE, a.beyondTable() || b.beyondTable());
+        return new Grade(
+                text,
+                scale,
+                a.canonical() + "/" + b.canonical(),
+                (a.ircra() + b.ircra()) / 2,
+                Math.min(a.lowLevel(), b.lowLevel()),
+                Math.max(a.highLevel(), b.highLevel()),
+                GradeModifier.NONE,
+                a.beyondTable() || b.beyondTable());
     }
 }

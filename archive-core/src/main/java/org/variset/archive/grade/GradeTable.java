@@ -114,8 +114,8 @@ public final class GradeTable {
                 for (String g : cells[c + 1].split("\\|")) {
                     if (!g.isEmpty()) {
                         here.add(g);
-                        spans.get(columns[c]).merge(g, new int[] {level, level},
-                                (old, now) -> new int[] {Math.min(old[0], level), Math.max(old[1], level)});
+                        spans.get(columns[c]).merge(g, new int[] {level, level}, (old, now) ->
+                                new int[] {Math.min(old[0], level), Math.max(old[1], level)});
                     }
                 }
                 rows.get(columns[c]).add(Collections.unmodifiableList(here));

@@ -26,8 +26,7 @@ public class Gym {
     private String timeZone;
 
     /** For Hibernate. */
-    protected Gym() {
-    }
+    protected Gym() {}
 
     /**
      * A new gym.

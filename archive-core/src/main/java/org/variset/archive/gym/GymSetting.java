@@ -44,8 +44,7 @@ public class GymSetting {
     private String valueJson;
 
     /** For Hibernate. */
-    protected GymSetting() {
-    }
+    protected GymSetting() {}
 
     /** A setting value taking effect on a date. */
     public GymSetting(Gym gym, String key, String scope, LocalDate effectiveOn, String valueJson) {

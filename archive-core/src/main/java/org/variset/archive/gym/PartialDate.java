@@ -34,8 +34,8 @@ public record PartialDate(LocalDate first, LocalDate last) {
                 return new PartialDate(LocalDate.of(y, 1, 1), LocalDate.of(y, 12, 31));
             }
         } catch (DateTimeParseException e) {
-            throw new IllegalArgumentException("'" + text + "' is not a real date (expected YYYY-MM-DD, YYYY-MM or "
-                    + "YYYY)", e);
+            throw new IllegalArgumentException(
+                    "'" + text + "' is not a real date (expected YYYY-MM-DD, YYYY-MM or " + "YYYY)", e);
         }
         throw new IllegalArgumentException("'" + text + "' is not a date (expected YYYY-MM-DD, YYYY-MM or YYYY)");
     }

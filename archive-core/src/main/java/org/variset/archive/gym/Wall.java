@@ -57,8 +57,7 @@ public class Wall {
     private Map<String, String> extraFields = new LinkedHashMap<>();
 
     /** For Hibernate. */
-    protected Wall() {
-    }
+    protected Wall() {}
 
     /** A new wall with no geometry yet. */
     public Wall(Gym gym, String name) {
@@ -116,8 +115,7 @@ public class Wall {
      *
      * @throws IllegalArgumentException for an angle outside -45..90, a size not above zero, or a cycle below 1
      */
-    public void describe(WallDiscipline discipline, Double angleDeg, Double heightM, Double widthM,
-            Integer cycleDays) {
+    public void describe(WallDiscipline discipline, Double angleDeg, Double heightM, Double widthM, Integer cycleDays) {
         if (angleDeg != null && (angleDeg < -45 || angleDeg > 90)) {
             throw new IllegalArgumentException("wall angle " + angleDeg + " is outside -45..90 degrees");
         }

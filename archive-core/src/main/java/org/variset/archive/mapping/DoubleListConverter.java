@@ -8,6 +8,6 @@ import jakarta.persistence.Converter;
 public final class DoubleListConverter extends JsonListConverter<Double> {
     /** The converter Hibernate instantiates. */
     public DoubleListConverter() {
-        super(new TypeReference<>() { });
+        super(new TypeReference<>() {});
     }
 }

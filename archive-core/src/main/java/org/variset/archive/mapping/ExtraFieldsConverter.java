@@ -11,7 +11,7 @@ import java.util.Map;
  */
 @Converter
 public final class ExtraFieldsConverter implements AttributeConverter<Map<String, String>, String> {
-    private static final TypeReference<LinkedHashMap<String, String>> TYPE = new TypeReference<>() { };
+    private static final TypeReference<LinkedHashMap<String, String>> TYPE = new TypeReference<>() {};
 
     @Override
     public String convertToDatabaseColumn(Map<String, String> value) {

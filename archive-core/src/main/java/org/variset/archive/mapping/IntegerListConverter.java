@@ -8,6 +8,6 @@ import jakarta.persistence.Converter;
 public final class IntegerListConverter extends JsonListConverter<Integer> {
     /** The converter Hibernate instantiates. */
     public IntegerListConverter() {
-        super(new TypeReference<>() { });
+        super(new TypeReference<>() {});
     }
 }

@@ -8,8 +8,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 final class JsonColumns {
     static final ObjectMapper MAPPER = new ObjectMapper();
 
-    private JsonColumns() {
-    }
+    private JsonColumns() {}
 
     static String write(Object value) {
         try {

@@ -8,6 +8,6 @@ import jakarta.persistence.Converter;
 public final class StringListConverter extends JsonListConverter<String> {
     /** The converter Hibernate instantiates. */
     public StringListConverter() {
-        super(new TypeReference<>() { });
+        super(new TypeReference<>() {});
     }
 }

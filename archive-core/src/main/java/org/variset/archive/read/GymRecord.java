@@ -9,5 +9,4 @@ import java.time.ZoneId;
  * @param name its name
  * @param zone its time zone, which decides what "today" is
  */
-public record GymRecord(long id, String name, ZoneId zone) {
-}
+public record GymRecord(long id, String name, ZoneId zone) {}

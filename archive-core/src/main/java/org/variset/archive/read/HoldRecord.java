@@ -17,8 +17,16 @@ import org.variset.archive.route.HoldSize;
  * @param yM position from the wall's bottom edge in metres, or null
  * @param extraFields the extra columns it was imported with, in file order
  */
-public record HoldRecord(Integer seq, HoldRole role, String type, HoldSize size, List<Double> grips, String holdRef,
-        Double xM, Double yM, java.util.Map<String, String> extraFields) {
+public record HoldRecord(
+        Integer seq,
+        HoldRole role,
+        String type,
+        HoldSize size,
+        List<Double> grips,
+        String holdRef,
+        Double xM,
+        Double yM,
+        java.util.Map<String, String> extraFields) {
 
     /** Copies the lists. */
     public HoldRecord {

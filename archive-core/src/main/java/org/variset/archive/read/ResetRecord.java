@@ -11,5 +11,4 @@ import java.time.LocalDate;
  * @param label its label, unique in the gym
  * @param resetOn its date (the earliest set_on of its routes)
  */
-public record ResetRecord(long id, long wallId, String wall, String label, LocalDate resetOn) {
-}
+public record ResetRecord(long id, long wallId, String wall, String label, LocalDate resetOn) {}

@@ -20,8 +20,17 @@ import org.variset.archive.grade.Discipline;
  * @param upAfter routes not stripped by this day (stripped_on empty or after it), or null
  * @param ids only these routes, or null
  */
-public record RouteFilter(Long gymId, Long wallId, Long resetId, Long excludeResetId, Long setterId,
-        Discipline discipline, LocalDate standingOn, LocalDate setFrom, LocalDate setBefore, LocalDate upAfter,
+public record RouteFilter(
+        Long gymId,
+        Long wallId,
+        Long resetId,
+        Long excludeResetId,
+        Long setterId,
+        Discipline discipline,
+        LocalDate standingOn,
+        LocalDate setFrom,
+        LocalDate setBefore,
+        LocalDate upAfter,
         List<Long> ids) {
 
     /** Copies the id list. */
@@ -46,59 +55,92 @@ public record RouteFilter(Long gymId, Long wallId, Long resetId, Long excludeRes
 
     /** Only this gym's routes. */
     public RouteFilter withGym(long id) {
-        return new RouteFilter(id, wallId, resetId, excludeResetId, setterId, discipline, standingOn, setFrom,
-                setBefore, upAfter, ids);
+        return new RouteFilter(
+                id,
+                wallId,
+                resetId,
+                excludeResetId,
+                setterId,
+                discipline,
+                standingOn,
+                setFrom,
+                setBefore,
+                upAfter,
+                ids);
     }
 
     /** Only this wall's routes. */
     public RouteFilter withWall(long id) {
-        return new RouteFilter(gymId, id, resetId, excludeResetId, setterId, discipline, standingOn, setFrom,
-                setBefore, upAfter, ids);
+        return new RouteFilter(
+                gymId, id, resetId, excludeResetId, setterId, discipline, standingOn, setFrom, setBefore, upAfter, ids);
     }
 
     /** Only this reset's routes. */
     public RouteFilter withReset(long id) {
-        return new RouteFilter(gymId, wallId, id, excludeResetId, setterId, discipline, standingOn, setFrom,
-                setBefore, upAfter, ids);
+        return new RouteFilter(
+                gymId, wallId, id, excludeResetId, setterId, discipline, standingOn, setFrom, setBefore, upAfter, ids);
     }
 
     /** Not this reset's routes. */
     public RouteFilter withoutReset(long id) {
-        return new RouteFilter(gymId, wallId, resetId, id, setterId, discipline, standingOn, setFrom, setBefore, upAfter, ids);
+        return new RouteFilter(
+                gymId, wallId, resetId, id, setterId, discipline, standingOn, setFrom, setBefore, upAfter, ids);
     }
 
     /** Only routes this setter set. */
     public RouteFilter withSetter(long id) {
-        return new RouteFilter(gymId, wallId, resetId, excludeResetId, id, discipline, standingOn, setFrom,
-                setBefore, upAfter, ids);
+        return new RouteFilter(
+                gymId, wallId, resetId, excludeResetId, id, discipline, standingOn, setFrom, setBefore, upAfter, ids);
     }
 
     /** Only routes of this discipline. */
     public RouteFilter withDiscipline(Discipline d) {
-        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, d, standingOn, setFrom, setBefore, upAfter, ids);
+        return new RouteFilter(
+                gymId, wallId, resetId, excludeResetId, setterId, d, standingOn, setFrom, setBefore, upAfter, ids);
     }
 
     /** Only routes up on the day. */
     public RouteFilter standingOn(LocalDate d) {
-        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, discipline, d, setFrom, setBefore, upAfter, ids);
+        return new RouteFilter(
+                gymId, wallId, resetId, excludeResetId, setterId, discipline, d, setFrom, setBefore, upAfter, ids);
     }
 
     /** Only routes set in [from, before). */
     public RouteFilter setBetween(LocalDate from, LocalDate before) {
-        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, discipline, standingOn, from,
-                before, upAfter, ids);
+        return new RouteFilter(
+                gymId, wallId, resetId, excludeResetId, setterId, discipline, standingOn, from, before, upAfter, ids);
     }
 
     /** Only routes up at some point in [from, to]: set on or before to, and not stripped by from. */
     public RouteFilter upBetween(LocalDate from, LocalDate to) {
-        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, discipline, standingOn, setFrom,
-                to.plusDays(1), from, ids);
+        return new RouteFilter(
+                gymId,
+                wallId,
+                resetId,
+                excludeResetId,
+                setterId,
+                discipline,
+                standingOn,
+                setFrom,
+                to.plusDays(1),
+                from,
+                ids);
     }
 
     /** Only the routes with these ids (at most a few thousand: one SQL parameter each). */
     public RouteFilter withIds(List<Long> routeIds) {
-        return new RouteFilter(gymId, wallId, resetId, excludeResetId, setterId, discipline, standingOn, setFrom,
-                setBefore, upAfter, routeIds);
+        return new RouteFilter(
+                gymId,
+                wallId,
+                resetId,
+                excludeResetId,
+                setterId,
+                discipline,
+                standingOn,
+                setFrom,
+                setBefore,
+                upAfter,
+                routeIds);
     }
 
     /** The SQL condition on the route table aliased {@code r}, with its parameters in order. */
@@ -119,8 +161,10 @@ public record RouteFilter(Long gymId, Long wallId, Long resetId, Long excludeRes
         add(c, params, setBefore, "r.set_on < ?");
         add(c, params, upAfter, "(r.stripped_on IS NULL OR r.stripped_on > ?)");
         if (ids != null) {
-            c.add(ids.isEmpty() ? "1 = 0" : "r.id IN (" + String.join(", ", java.util.Collections.nCopies(ids.size(),
-                    "?")) + ")");
+            c.add(
+                    ids.isEmpty()
+                            ? "1 = 0"
+                            : "r.id IN (" + String.join(", ", java.util.Collections.nCopies(ids.size(), "?")) + ")");
             params.addAll(ids);
         }
         return c.isEmpty() ? "1 = 1" : String.join(" AND ", c);

@@ -72,9 +72,10 @@ public final class RouteReader {
         String sql = "SELECT MAX(id) FROM (SELECT r.id FROM route r WHERE " + where + " AND r.id > ? ORDER BY r.id"
                 + " FETCH FIRST " + size + " ROWS ONLY) chunk";
         return query(sql, p, rs -> {
-            long v = rs.getLong(1);
-            return rs.wasNull() ? null : v;
-        }).get(0);
+                    long v = rs.getLong(1);
+                    return rs.wasNull() ? null : v;
+                })
+                .get(0);
     }
 
     private List<RouteRecord> read(RouteFilter filter, Long afterId, Long toId, String order) {
@@ -91,28 +92,53 @@ public final class RouteReader {
             long id = rs.getLong(1);
             Double routeAngle = (Double) rs.getObject(15);
             Double angle = routeAngle != null ? routeAngle : (Double) rs.getObject(4);
-            return new RouteRecord(id, rs.getString(2), rs.getString(3), rs.getString(5),
-                    rs.getObject(6, LocalDate.class), rs.getString(7), rs.getObject(8, LocalDate.class),
-                    rs.getObject(9, LocalDate.class), Discipline.valueOf(rs.getString(10)), rs.getString(11),
-                    GradeScale.valueOf(rs.getString(12)), rs.getDouble(13), rs.getString(14), angle, routeAngle,
-                    setters.getOrDefault(id, List.of()), strings.convertToEntityAttribute(rs.getString(16)),
+            return new RouteRecord(
+                    id,
+                    rs.getString(2),
+                    rs.getString(3),
+                    rs.getString(5),
+                    rs.getObject(6, LocalDate.class),
+                    rs.getString(7),
+                    rs.getObject(8, LocalDate.class),
+                    rs.getObject(9, LocalDate.class),
+                    Discipline.valueOf(rs.getString(10)),
+                    rs.getString(11),
+                    GradeScale.valueOf(rs.getString(12)),
+                    rs.getDouble(13),
+                    rs.getString(14),
+                    angle,
+                    routeAngle,
+                    setters.getOrDefault(id, List.of()),
+                    strings.convertToEntityAttribute(rs.getString(16)),
                     strings.convertToEntityAttribute(rs.getString(17)),
-                    integers.convertToEntityAttribute(rs.getString(18)), rs.getString(19),
-                    holds.getOrDefault(id, List.of()), extras(rs.getString(20)));
+                    integers.convertToEntityAttribute(rs.getString(18)),
+                    rs.getString(19),
+                    holds.getOrDefault(id, List.of()),
+                    extras(rs.getString(20)));
         });
     }
 
     private Map<Long, List<HoldRecord>> holds(String where, List<Object> p) {
         Map<Long, List<HoldRecord>> out = new HashMap<>();
-        Sql.forEach(connection, "SELECT h.route_id, h.seq, h.role, h.hold_type, h.hold_size, h.grip_deg, h.hold_ref,"
-                + " h.x_m, h.y_m, h.extra_fields FROM hold_placement h JOIN route r ON r.id = h.route_id"
-                + " WHERE " + where
-                + " ORDER BY h.route_id, h.ordinal", p, rs -> {
+        Sql.forEach(
+                connection,
+                "SELECT h.route_id, h.seq, h.role, h.hold_type, h.hold_size, h.grip_deg, h.hold_ref,"
+                        + " h.x_m, h.y_m, h.extra_fields FROM hold_placement h JOIN route r ON r.id = h.route_id"
+                        + " WHERE " + where
+                        + " ORDER BY h.route_id, h.ordinal",
+                p,
+                rs -> {
                     String size = rs.getString(5);
-                    HoldRecord h = new HoldRecord((Integer) rs.getObject(2), HoldRole.valueOf(rs.getString(3)),
-                            rs.getString(4), size == null ? null : HoldSize.valueOf(size),
-                            doubles.convertToEntityAttribute(rs.getString(6)), rs.getString(7),
-                            (Double) rs.getObject(8), (Double) rs.getObject(9), extras(rs.getString(10)));
+                    HoldRecord h = new HoldRecord(
+                            (Integer) rs.getObject(2),
+                            HoldRole.valueOf(rs.getString(3)),
+                            rs.getString(4),
+                            size == null ? null : HoldSize.valueOf(size),
+                            doubles.convertToEntityAttribute(rs.getString(6)),
+                            rs.getString(7),
+                            (Double) rs.getObject(8),
+                            (Double) rs.getObject(9),
+                            extras(rs.getString(10)));
                     out.computeIfAbsent(rs.getLong(1), k -> new ArrayList<>()).add(h);
                 });
         return out;
@@ -120,8 +146,12 @@ public final class RouteReader {
 
     private Map<Long, List<String>> setters(String where, List<Object> p) {
         Map<Long, List<String>> out = new LinkedHashMap<>();
-        Sql.forEach(connection, "SELECT rs.route_id, s.name FROM route_setter rs JOIN setter s ON s.id = rs.setter_id"
-                + " JOIN route r ON r.id = rs.route_id WHERE " + where + " ORDER BY rs.route_id, rs.ord", p, rs -> {
+        Sql.forEach(
+                connection,
+                "SELECT rs.route_id, s.name FROM route_setter rs JOIN setter s ON s.id = rs.setter_id"
+                        + " JOIN route r ON r.id = rs.route_id WHERE " + where + " ORDER BY rs.route_id, rs.ord",
+                p,
+                rs -> {
                     out.computeIfAbsent(rs.getLong(1), k -> new ArrayList<>()).add(rs.getString(2));
                 });
         return out;

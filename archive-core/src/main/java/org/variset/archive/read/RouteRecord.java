@@ -32,10 +32,28 @@ import org.variset.archive.grade.GradeScale;
  * @param holds hold placements in file order
  * @param extraFields the extra columns it was imported with, in file order
  */
-public record RouteRecord(long id, String gym, String wall, String reset, LocalDate resetOn, String label,
-        LocalDate setOn, LocalDate strippedOn, Discipline discipline, String gradeText, GradeScale gradeScale,
-        double ircra, String color, Double angleDeg, Double ownAngleDeg, List<String> setters, List<String> moves,
-        List<String> styles, List<Integer> moveDifficulty, String notes, List<HoldRecord> holds,
+public record RouteRecord(
+        long id,
+        String gym,
+        String wall,
+        String reset,
+        LocalDate resetOn,
+        String label,
+        LocalDate setOn,
+        LocalDate strippedOn,
+        Discipline discipline,
+        String gradeText,
+        GradeScale gradeScale,
+        double ircra,
+        String color,
+        Double angleDeg,
+        Double ownAngleDeg,
+        List<String> setters,
+        List<String> moves,
+        List<String> styles,
+        List<Integer> moveDifficulty,
+        String notes,
+        List<HoldRecord> holds,
         java.util.Map<String, String> extraFields) {
 
     /** Copies the lists. */
@@ -60,7 +78,8 @@ public record RouteRecord(long id, String gym, String wall, String reset, LocalD
 
     /** The hand-role placements (hand, start, finish) in climbing order: by seq where given, then file order. */
     public List<HoldRecord> handHoldsInOrder() {
-        return holds.stream().filter(HoldRecord::isHand)
+        return holds.stream()
+                .filter(HoldRecord::isHand)
                 .sorted(Comparator.comparing(HoldRecord::seq, Comparator.nullsLast(Comparator.naturalOrder())))
                 .toList();
     }

@@ -10,8 +10,7 @@ import org.variset.archive.store.ArchiveException;
 
 /** Plain JDBC with positional parameters; a failing statement becomes an archive problem naming the cause. */
 final class Sql {
-    private Sql() {
-    }
+    private Sql() {}
 
     /** One row turned into a value. */
     @FunctionalInterface
@@ -44,8 +43,10 @@ final class Sql {
                 }
             }
         } catch (SQLException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the archive: " + e.getMessage()
-                    + ". Run 'variset check' for details.", e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED,
+                    "Cannot read the archive: " + e.getMessage() + ". Run 'variset check' for details.",
+                    e);
         }
     }
 }

@@ -14,6 +14,12 @@ import org.variset.archive.gym.WallDiscipline;
  * @param widthM its width, or null
  * @param cycleDays how often the gym means to reset it, from the walls file; null when not given
  */
-public record WallRecord(long id, long gymId, String name, WallDiscipline discipline, Double angleDeg,
-        Double heightM, Double widthM, Integer cycleDays) {
-}
+public record WallRecord(
+        long id,
+        long gymId,
+        String name,
+        WallDiscipline discipline,
+        Double angleDeg,
+        Double heightM,
+        Double widthM,
+        Integer cycleDays) {}

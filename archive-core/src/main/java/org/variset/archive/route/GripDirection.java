@@ -15,14 +15,27 @@ public final class GripDirection {
     private static final Pattern CLOCK = Pattern.compile("(\\d{1,2}):(\\d{2})");
     private static final Pattern DEGREES = Pattern.compile("\\d+(\\.\\d+)?");
     private static final Map<String, Double> WORDS = Map.of(
-            "up", 0.0, "up-right", 45.0, "right", 90.0, "down-right", 135.0,
-            "down", 180.0, "down-left", 225.0, "left", 270.0, "up-left", 315.0);
+            "up",
+            0.0,
+            "up-right",
+            45.0,
+            "right",
+            90.0,
+            "down-right",
+            135.0,
+            "down",
+            180.0,
+            "down-left",
+            225.0,
+            "left",
+            270.0,
+            "up-left",
+            315.0);
     /** What a grip direction looks like, for error messages. */
     public static final String EXPECTED = "degrees 0-360 clockwise from up, a clock position such as 4:30, or "
             + "up, up-right, right, down-right, down, down-left, left, up-left";
 
-    private GripDirection() {
-    }
+    private GripDirection() {}
 
     /**
      * Reads one direction.
@@ -94,8 +107,9 @@ public final class GripDirection {
     }
 
     /** The direction each of the eight 45-degree sectors faces, sector 0 (up) first, clockwise. */
-    private static final String[] SECTOR_WORDS = {"up", "up-right", "right", "down-right", "down", "down-left",
-        "left", "up-left"};
+    private static final String[] SECTOR_WORDS = {
+        "up", "up-right", "right", "down-right", "down", "down-left", "left", "up-left"
+    };
 
     /**
      * The sector of a direction: k = floor((θ + 22.5) / 45) mod 8, computed on the degree value (docs/spec/metrics.md section 1),

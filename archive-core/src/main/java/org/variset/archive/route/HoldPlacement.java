@@ -84,8 +84,16 @@ public class HoldPlacement {
      * @param yM position from the wall's bottom edge in metres, or null
      * @param extraFields extra columns, in file order
      */
-    public record Spec(Integer seq, HoldRole role, String type, HoldSize size, List<Double> grips, String holdRef,
-            Double xM, Double yM, Map<String, String> extraFields) {
+    public record Spec(
+            Integer seq,
+            HoldRole role,
+            String type,
+            HoldSize size,
+            List<Double> grips,
+            String holdRef,
+            Double xM,
+            Double yM,
+            Map<String, String> extraFields) {
         /** Checks the values. */
         public Spec {
             Objects.requireNonNull(role, "role");
@@ -106,8 +114,7 @@ public class HoldPlacement {
     }
 
     /** For Hibernate. */
-    protected HoldPlacement() {
-    }
+    protected HoldPlacement() {}
 
     HoldPlacement(Route route, int ordinal, Spec spec) {
         this.route = route;

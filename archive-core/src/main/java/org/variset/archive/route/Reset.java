@@ -42,8 +42,7 @@ public class Reset {
     private LocalDate resetOn;
 
     /** For Hibernate. */
-    protected Reset() {
-    }
+    protected Reset() {}
 
     /** A reset of a wall, dated by its first route. */
     public Reset(Wall wall, String label, LocalDate resetOn) {

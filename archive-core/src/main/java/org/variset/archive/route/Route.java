@@ -88,7 +88,9 @@ public class Route {
     private Double angleDeg;
 
     @ManyToMany(fetch = FetchType.LAZY)
-    @JoinTable(name = "route_setter", joinColumns = @JoinColumn(name = "route_id"),
+    @JoinTable(
+            name = "route_setter",
+            joinColumns = @JoinColumn(name = "route_id"),
             inverseJoinColumns = @JoinColumn(name = "setter_id"))
     @OrderColumn(name = "ord")
     private List<Setter> setters = new ArrayList<>();
@@ -117,8 +119,7 @@ public class Route {
     private List<HoldPlacement> holds = new ArrayList<>();
 
     /** For Hibernate. */
-    protected Route() {
-    }
+    protected Route() {}
 
     /**
      * A route of a reset.

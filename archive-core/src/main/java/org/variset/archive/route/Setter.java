@@ -24,8 +24,7 @@ public class Setter {
     private String name;
 
     /** For Hibernate. */
-    protected Setter() {
-    }
+    protected Setter() {}
 
     /** A setter with a name. */
     public Setter(String name) {

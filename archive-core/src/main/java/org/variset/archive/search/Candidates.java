@@ -15,8 +15,7 @@ import org.variset.archive.vocabulary.VocabularyField;
 
 /** The query for routes like a given one: any of its hand-hold directions or moves, same discipline, not itself. */
 final class Candidates {
-    private Candidates() {
-    }
+    private Candidates() {}
 
     /** The query, or null when the route has no hand hold and no move to look for. */
     static Query of(RouteRecord r, Vocabulary vocabulary) {

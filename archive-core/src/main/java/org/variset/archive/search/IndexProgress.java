@@ -4,7 +4,7 @@ package org.variset.archive.search;
 @FunctionalInterface
 public interface IndexProgress {
     /** Reports nothing. */
-    IndexProgress NONE = (done, total) -> { };
+    IndexProgress NONE = (done, total) -> {};
 
     /**
      * Called after each batch.

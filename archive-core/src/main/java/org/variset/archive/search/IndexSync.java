@@ -24,8 +24,9 @@ public record IndexSync(Action action, long routes, String reason, long stamp) {
     public String notice() {
         return switch (action) {
             case CURRENT -> "";
-            case CAUGHT_UP -> "The search index was behind the archive; brought " + routes + (routes == 1 ? " route"
-                    : " routes") + " up to date.";
+            case CAUGHT_UP ->
+                "The search index was behind the archive; brought " + routes + (routes == 1 ? " route" : " routes")
+                        + " up to date.";
             case REBUILT -> "Built the search index from the archive (" + routes + " routes): " + reason + ".";
         };
     }

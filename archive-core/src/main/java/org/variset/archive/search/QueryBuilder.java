@@ -32,13 +32,14 @@ import org.variset.archive.vocabulary.VocabularyField;
  */
 final class QueryBuilder {
     private static final int LONGEST_TERM = 3;
-    private static final List<VocabularyField> TERM_FIELDS = List.of(VocabularyField.MOVES,
-            VocabularyField.HOLD_TYPES, VocabularyField.STYLES);
+    private static final List<VocabularyField> TERM_FIELDS =
+            List.of(VocabularyField.MOVES, VocabularyField.HOLD_TYPES, VocabularyField.STYLES);
 
     private final String query;
     private final TermKeys keys;
     /** Analyzers are thread-safe and keep their token streams per thread for reuse. */
     private static final TextAnalyzer ANALYZER = new TextAnalyzer();
+
     private final GradeReader grades = GradeReader.standard();
 
     QueryBuilder(String query, Vocabulary vocabulary) {
@@ -97,8 +98,11 @@ final class QueryBuilder {
             int took = 1;
             Query q = null;
             for (int len = Math.min(LONGEST_TERM, run.size() - i); len >= 1 && q == null; len--) {
-                String spelled = String.join(" ", run.subList(i, i + len).stream().map(QueryNode.Text::text)
-                        .toList());
+                String spelled = String.join(
+                        " ",
+                        run.subList(i, i + len).stream()
+                                .map(QueryNode.Text::text)
+                                .toList());
                 q = vocabularyTerm(spelled);
                 took = len;
             }
@@ -117,8 +121,9 @@ final class QueryBuilder {
     private Query vocabularyTerm(String spelled) {
         for (VocabularyField f : TERM_FIELDS) {
             if (keys.term(f, spelled) != null) {
-                String field = f == VocabularyField.MOVES ? SearchFields.MOVE : f == VocabularyField.STYLES
-                        ? SearchFields.STYLE : SearchFields.HOLD;
+                String field = f == VocabularyField.MOVES
+                        ? SearchFields.MOVE
+                        : f == VocabularyField.STYLES ? SearchFields.STYLE : SearchFields.HOLD;
                 BooleanQuery.Builder b = new BooleanQuery.Builder();
                 b.add(new TermQuery(new Term(field, keys.key(f, spelled))), Occur.SHOULD);
                 List<String> tokens = ANALYZER.tokens(SearchFields.TEXT, spelled);
@@ -144,7 +149,8 @@ final class QueryBuilder {
     }
 
     private static Query phrase(String field, List<String> tokens) {
-        return tokens.size() == 1 ? new TermQuery(new Term(field, tokens.get(0)))
+        return tokens.size() == 1
+                ? new TermQuery(new Term(field, tokens.get(0)))
                 : new PhraseQuery(field, tokens.toArray(String[]::new));
     }
 
@@ -158,7 +164,8 @@ final class QueryBuilder {
             case "setter" -> keyword(SearchFields.SETTER, v);
             case "band" -> keyword(SearchFields.BAND, v);
             case "size" -> keyword(SearchFields.SIZE, v);
-            case "discipline" -> new TermQuery(new Term(SearchFields.DISCIPLINE, discipline(v, f).word()));
+            case "discipline" ->
+                new TermQuery(new Term(SearchFields.DISCIPLINE, discipline(v, f).word()));
             case "move" -> new TermQuery(new Term(SearchFields.MOVE, keys.key(VocabularyField.MOVES, v)));
             case "style" -> new TermQuery(new Term(SearchFields.STYLE, keys.key(VocabularyField.STYLES, v)));
             case "notes" -> text(SearchFields.NOTES, v, f.valuePosition());
@@ -192,8 +199,9 @@ final class QueryBuilder {
         if (at < 0) {
             return new TermQuery(new Term(SearchFields.HOLD, type));
         }
-        int deg = direction(v.substring(at + 1), new QueryNode.Field(f.field(), v, false, f.position(),
-                f.valuePosition() + at + 1));
+        int deg = direction(
+                v.substring(at + 1),
+                new QueryNode.Field(f.field(), v, false, f.position(), f.valuePosition() + at + 1));
         return new TermQuery(new Term(SearchFields.HOLD, type + "@" + deg));
     }
 
@@ -202,8 +210,8 @@ final class QueryBuilder {
         try {
             return 45 * GripDirection.sector(GripDirection.parse(v));
         } catch (IllegalArgumentException e) {
-            throw new QuerySyntaxException(query, f.valuePosition(), "'" + v + "' is not a direction ("
-                    + GripDirection.EXPECTED + ")");
+            throw new QuerySyntaxException(
+                    query, f.valuePosition(), "'" + v + "' is not a direction (" + GripDirection.EXPECTED + ")");
         }
     }
 
@@ -214,12 +222,17 @@ final class QueryBuilder {
         boolean any = false;
         for (Discipline d : Discipline.values()) {
             try {
-                double lo = ends[0].isEmpty() ? Double.NEGATIVE_INFINITY : read(ends[0], d).lowLevel() - 0.5;
-                double hi = ends[1].isEmpty() ? Double.POSITIVE_INFINITY
+                double lo = ends[0].isEmpty()
+                        ? Double.NEGATIVE_INFINITY
+                        : read(ends[0], d).lowLevel() - 0.5;
+                double hi = ends[1].isEmpty()
+                        ? Double.POSITIVE_INFINITY
                         : Math.nextDown(read(ends[1], d).highLevel() + 0.5);
                 if (lo > hi) {
-                    throw new QuerySyntaxException(query, f.valuePosition(), "the range " + v + " runs from harder "
-                            + "to easier (expected the easier grade first)");
+                    throw new QuerySyntaxException(
+                            query,
+                            f.valuePosition(),
+                            "the range " + v + " runs from harder " + "to easier (expected the easier grade first)");
                 }
                 BooleanQuery.Builder one = new BooleanQuery.Builder();
                 one.add(new TermQuery(new Term(SearchFields.DISCIPLINE, d.word())), Occur.FILTER);
@@ -250,15 +263,18 @@ final class QueryBuilder {
             double hi = ends[1].isEmpty() ? Double.POSITIVE_INFINITY : Double.parseDouble(ends[1].replace(',', '.'));
             return DoublePoint.newRangeQuery(SearchFields.ANGLE, lo, hi);
         } catch (NumberFormatException e) {
-            throw new QuerySyntaxException(query, f.valuePosition(), "'" + v + "' is not an angle or range of angles "
-                    + "in degrees (such as 30 or 20..45)");
+            throw new QuerySyntaxException(
+                    query,
+                    f.valuePosition(),
+                    "'" + v + "' is not an angle or range of angles " + "in degrees (such as 30 or 20..45)");
         }
     }
 
     private Query dates(String field, String v, QueryNode.Field f) {
         String[] ends = range(v, f);
         long lo = ends[0].isEmpty() ? Long.MIN_VALUE : date(ends[0], f).first().toEpochDay();
-        long hi = ends[1].isEmpty() ? Long.MAX_VALUE - 1 : date(ends[1], f).last().toEpochDay();
+        long hi =
+                ends[1].isEmpty() ? Long.MAX_VALUE - 1 : date(ends[1], f).last().toEpochDay();
         return LongPoint.newRangeQuery(field, lo, hi);
     }
 
@@ -275,8 +291,8 @@ final class QueryBuilder {
 
     private PartialDate day(String v, QueryNode.Field f) {
         if (v.contains("..")) {
-            throw new QuerySyntaxException(query, f.valuePosition(), "standing takes one day or one month, not a "
-                    + "range");
+            throw new QuerySyntaxException(
+                    query, f.valuePosition(), "standing takes one day or one month, not a " + "range");
         }
         return date(v, f);
     }
@@ -298,8 +314,8 @@ final class QueryBuilder {
         String lo = v.substring(0, dots).strip();
         String hi = v.substring(dots + 2).strip();
         if (lo.isEmpty() && hi.isEmpty()) {
-            throw new QuerySyntaxException(query, f.valuePosition(), "a range needs at least one end, as V3..V5 or "
-                    + "2026-01..");
+            throw new QuerySyntaxException(
+                    query, f.valuePosition(), "a range needs at least one end, as V3..V5 or " + "2026-01..");
         }
         return new String[] {lo, hi};
     }

@@ -19,10 +19,28 @@ import java.util.Set;
  */
 final class QueryParser {
     /** The fields a query may name. */
-    static final Set<String> FIELDS = Set.of("gym", "wall", "route", "color", "setter", "discipline", "grade", "band",
-            "set", "stripped", "standing", "angle", "hold", "grip", "size", "move", "style", "notes");
-    private static final Set<String> ALIASES = Set.of("label", "colour", "facing", "moves", "holds", "styles",
-            "setters");
+    static final Set<String> FIELDS = Set.of(
+            "gym",
+            "wall",
+            "route",
+            "color",
+            "setter",
+            "discipline",
+            "grade",
+            "band",
+            "set",
+            "stripped",
+            "standing",
+            "angle",
+            "hold",
+            "grip",
+            "size",
+            "move",
+            "style",
+            "notes");
+
+    private static final Set<String> ALIASES =
+            Set.of("label", "colour", "facing", "moves", "holds", "styles", "setters");
 
     private final String q;
     private int i;
@@ -36,8 +54,10 @@ final class QueryParser {
         QueryParser p = new QueryParser(query == null ? "" : query);
         p.skipSpace();
         if (p.i >= p.q.length()) {
-            throw new QuerySyntaxException(p.q, 1, "the query is empty (expected a word, a phrase in quotes or a "
-                    + "field such as move:dyno)");
+            throw new QuerySyntaxException(
+                    p.q,
+                    1,
+                    "the query is empty (expected a word, a phrase in quotes or a " + "field such as move:dyno)");
         }
         QueryNode n = p.or();
         p.skipSpace();
@@ -112,8 +132,10 @@ final class QueryParser {
             QueryNode inner = or();
             skipSpace();
             if (i >= q.length() || q.charAt(i) != ')') {
-                throw new QuerySyntaxException(q, i >= q.length() ? q.length() + 1 : i + 1, "expected ')' to close "
-                        + "the '(' at position " + at);
+                throw new QuerySyntaxException(
+                        q,
+                        i >= q.length() ? q.length() + 1 : i + 1,
+                        "expected ')' to close " + "the '(' at position " + at);
             }
             i++;
             return inner;
@@ -155,8 +177,11 @@ final class QueryParser {
                 default -> name.substring(0, name.length() - 1);
             };
         }
-        throw new QuerySyntaxException(q, at, "there is no field '" + name + "' (fields: " + String.join(", ",
-                FIELDS.stream().sorted().toList()) + ")");
+        throw new QuerySyntaxException(
+                q,
+                at,
+                "there is no field '" + name + "' (fields: "
+                        + String.join(", ", FIELDS.stream().sorted().toList()) + ")");
     }
 
     private static String example(String field) {
@@ -204,8 +229,8 @@ final class QueryParser {
     private boolean peekKeyword(String k) {
         skipSpace();
         int end = i + k.length();
-        return q.startsWith(k, i) && (end == q.length() || Character.isWhitespace(q.charAt(end))
-                || q.charAt(end) == '(');
+        return q.startsWith(k, i)
+                && (end == q.length() || Character.isWhitespace(q.charAt(end)) || q.charAt(end) == '(');
     }
 
     private boolean atEndOfGroup() {

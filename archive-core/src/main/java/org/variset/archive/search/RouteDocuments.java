@@ -17,7 +17,6 @@ import org.variset.archive.read.HoldRecord;
 import org.variset.archive.read.RouteRecord;
 import org.variset.archive.route.GripDirection;
 import org.variset.archive.settings.GymSettings;
-import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 
 /**
@@ -27,9 +26,7 @@ import org.variset.archive.vocabulary.VocabularyField;
 final class RouteDocuments {
     static final String[] FACETS = {"move", "hold", "grip", "band", "wall", "setter"};
     /** Term keys by vocabulary (by identity: settings share one vocabulary for as long as it is in effect). */
-
-    private RouteDocuments() {
-    }
+    private RouteDocuments() {}
 
     /** The facets configuration every writer and reader shares. */
     static FacetsConfig facetsConfig() {
@@ -56,8 +53,9 @@ final class RouteDocuments {
         d.add(new DoubleDocValuesField(SearchFields.IRCRA, r.ircra()));
         d.add(new LongPoint(SearchFields.SET, r.setOn().toEpochDay()));
         d.add(new NumericDocValuesField(SearchFields.SET, r.setOn().toEpochDay()));
-        d.add(new LongPoint(SearchFields.STRIPPED, r.strippedOn() == null ? Long.MAX_VALUE
-                : r.strippedOn().toEpochDay()));
+        d.add(new LongPoint(
+                SearchFields.STRIPPED,
+                r.strippedOn() == null ? Long.MAX_VALUE : r.strippedOn().toEpochDay()));
         if (r.angleDeg() != null) {
             d.add(new DoublePoint(SearchFields.ANGLE, r.angleDeg()));
         }
@@ -81,9 +79,17 @@ final class RouteDocuments {
         if (r.notes() != null) {
             d.add(new TextField(SearchFields.NOTES, r.notes(), Field.Store.NO));
         }
-        text.append(' ').append(r.label()).append(' ').append(r.wall()).append(' ').append(r.gradeText());
+        text.append(' ')
+                .append(r.label())
+                .append(' ')
+                .append(r.wall())
+                .append(' ')
+                .append(r.gradeText());
         text.append(' ').append(r.color() == null ? "" : r.color()).append(' ').append(String.join(" ", r.setters()));
-        r.holds().stream().map(HoldRecord::type).distinct().forEach(t -> text.append(' ').append(t));
+        r.holds().stream()
+                .map(HoldRecord::type)
+                .distinct()
+                .forEach(t -> text.append(' ').append(t));
         text.append(' ').append(r.notes() == null ? "" : r.notes());
         d.add(new TextField(SearchFields.TEXT, text.toString(), Field.Store.NO));
         return d;

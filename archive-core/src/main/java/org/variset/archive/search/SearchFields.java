@@ -4,6 +4,7 @@ package org.variset.archive.search;
 final class SearchFields {
     /** The route's database id, stored: the key for updates and for reading hits back from the database. */
     static final String ID = "id";
+
     static final String GYM = "gym";
     static final String WALL = "wall";
     static final String LABEL = "route";
@@ -18,11 +19,13 @@ final class SearchFields {
     static final String SET = "set";
     /** The strip date as an epoch day, {@link Long#MAX_VALUE} while up. */
     static final String STRIPPED = "stripped";
+
     static final String ANGLE = "angle";
     /** Hold types and type@direction ({@code crimp}, {@code crimp@90}) of hand-role placements and all types. */
     static final String HOLD = "hold";
     /** Directions of hand grips as sector centres ({@code 0}, {@code 45}, ..., {@code 315}). */
     static final String GRIP = "grip";
+
     static final String SIZE = "size";
     static final String MOVE = "move";
     static final String STYLE = "style";
@@ -30,6 +33,5 @@ final class SearchFields {
     /** Everything people may type without a field: label, wall, colour, setters, grade, moves, styles, holds, notes. */
     static final String TEXT = "text";
 
-    private SearchFields() {
-    }
+    private SearchFields() {}
 }

@@ -18,8 +18,7 @@ public record SearchHits(long total, List<Hit> hits, Map<String, List<FacetCount
      * @param routeId its database id
      * @param score how well it matched (higher is better; equal for filters alone)
      */
-    public record Hit(long routeId, float score) {
-    }
+    public record Hit(long routeId, float score) {}
 
     /**
      * One facet value.
@@ -27,6 +26,5 @@ public record SearchHits(long total, List<Hit> hits, Map<String, List<FacetCount
      * @param label the value as people read it
      * @param count how many matching routes have it
      */
-    public record FacetCount(String label, long count) {
-    }
+    public record FacetCount(String label, long count) {}
 }

@@ -31,8 +31,8 @@ import org.variset.archive.read.RouteReader;
 import org.variset.archive.read.RouteRecord;
 import org.variset.archive.settings.SettingsReader;
 import org.variset.archive.settings.SettingsTimeline;
-import org.variset.archive.store.ArchiveException;
 import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveException;
 import org.variset.archive.store.ChangeLog;
 import org.variset.archive.store.SchemaVersion;
 
@@ -46,10 +46,12 @@ import org.variset.archive.store.SchemaVersion;
 public final class SearchIndex implements AutoCloseable {
     /** The document layout; a change of layout rebuilds every index made with another. */
     static final String FORMAT = "2";
+
     private static final String FORMAT_KEY = "variset-index-format";
     private static final String STAMP_KEY = "variset-change-stamp";
     /** The archive the index was built from ({@link SchemaVersion#identity}). */
     private static final String ARCHIVE_KEY = "variset-archive";
+
     private static final int CHUNK = 1_000;
 
     /**
@@ -80,11 +82,14 @@ public final class SearchIndex implements AutoCloseable {
         try {
             Path p = archiveDir.resolve(name);
             Files.createDirectories(p);
-            return new SearchIndex(FSDirectory.open(p), COMMITS.computeIfAbsent(p.toAbsolutePath().normalize(),
-                    k -> new AtomicLong()));
+            return new SearchIndex(
+                    FSDirectory.open(p),
+                    COMMITS.computeIfAbsent(p.toAbsolutePath().normalize(), k -> new AtomicLong()));
         } catch (IOException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot open the search index in "
-                    + archiveDir + ": " + e.getMessage(), e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED,
+                    "Cannot open the search index in " + archiveDir + ": " + e.getMessage(),
+                    e);
         }
     }
 
@@ -132,8 +137,10 @@ public final class SearchIndex implements AutoCloseable {
         Map<String, String> data = commitData();
         long idx = data.isEmpty() ? -1 : Long.parseLong(data.get(STAMP_KEY));
         if (idx < 0) {
-            return rebuild(c, progress, exists() ? "it was unreadable or from another version of Variset"
-                    : "there was none yet");
+            return rebuild(
+                    c,
+                    progress,
+                    exists() ? "it was unreadable or from another version of Variset" : "there was none yet");
         }
         String identity = SchemaVersion.identity(c);
         if (!identity.equals(data.get(ARCHIVE_KEY))) {
@@ -209,7 +216,8 @@ public final class SearchIndex implements AutoCloseable {
     /** Adds a route's document; {@code replace} when the index may hold an older one (not in a rebuild). */
     private void add(IndexWriter w, RouteRecord r, Map<String, SettingsTimeline> timelines, boolean replace) {
         try {
-            Document d = facets.build(RouteDocuments.of(r, timelines.get(r.gym()).on(r.setOn())));
+            Document d =
+                    facets.build(RouteDocuments.of(r, timelines.get(r.gym()).on(r.setOn())));
             if (replace) {
                 w.updateDocument(new Term(SearchFields.ID, Long.toString(r.id())), d);
             } else {
@@ -234,8 +242,8 @@ public final class SearchIndex implements AutoCloseable {
     }
 
     private IndexWriter writer(IndexWriterConfig.OpenMode mode) throws IOException {
-        IndexWriterConfig cfg = new IndexWriterConfig(new TextAnalyzer()).setOpenMode(mode)
-                .setRAMBufferSizeMB(64);
+        IndexWriterConfig cfg =
+                new IndexWriterConfig(new TextAnalyzer()).setOpenMode(mode).setRAMBufferSizeMB(64);
         return new IndexWriter(directory, cfg);
     }
 
@@ -285,8 +293,10 @@ public final class SearchIndex implements AutoCloseable {
         try {
             return SearchQueries.run(new org.apache.lucene.search.IndexSearcher(reader()), q, r, facets);
         } catch (IOException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the search index: "
-                    + e.getMessage() + ". Run 'variset reindex' to build it again.", e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED,
+                    "Cannot read the search index: " + e.getMessage() + ". Run 'variset reindex' to build it again.",
+                    e);
         }
     }
 
@@ -310,8 +320,10 @@ public final class SearchIndex implements AutoCloseable {
             }
             return out;
         } catch (IOException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the search index: "
-                    + e.getMessage() + ". Run 'variset reindex' to build it again.", e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED,
+                    "Cannot read the search index: " + e.getMessage() + ". Run 'variset reindex' to build it again.",
+                    e);
         }
     }
 
@@ -324,8 +336,7 @@ public final class SearchIndex implements AutoCloseable {
      * @param stamp the change stamp it carries, or -1
      * @param ids the route ids of its documents (empty when it cannot be read)
      */
-    public record Health(boolean exists, boolean clean, String detail, long stamp, java.util.Set<Long> ids) {
-    }
+    public record Health(boolean exists, boolean clean, String detail, long stamp, java.util.Set<Long> ids) {}
 
     /** Checks the index with Lucene's CheckIndex and lists its documents. */
     public Health health() {
@@ -338,11 +349,16 @@ public final class SearchIndex implements AutoCloseable {
                 ci.setThreadCount(1);
                 status = ci.checkIndex();
             }
-            String detail = status.clean ? status.numSegments + " segments, every one read and verified"
+            String detail = status.clean
+                    ? status.numSegments + " segments, every one read and verified"
                     : "CheckIndex found problems in " + status.numBadSegments + " of " + status.numSegments
-                    + " segments";
-            return new Health(true, status.clean, detail, stamp(), status.clean ? new java.util.HashSet<>(ids())
-                    : java.util.Set.of());
+                            + " segments";
+            return new Health(
+                    true,
+                    status.clean,
+                    detail,
+                    stamp(),
+                    status.clean ? new java.util.HashSet<>(ids()) : java.util.Set.of());
         } catch (IOException | RuntimeException e) {
             return new Health(true, false, "cannot be read: " + e.getMessage(), -1, java.util.Set.of());
         }
@@ -376,8 +392,10 @@ public final class SearchIndex implements AutoCloseable {
     }
 
     private static ArchiveException failure(IOException e) {
-        return new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot write the search index: "
-                + e.getMessage() + ". Run 'variset reindex' to build it again.", e);
+        return new ArchiveException(
+                ArchiveException.Problem.DAMAGED,
+                "Cannot write the search index: " + e.getMessage() + ". Run 'variset reindex' to build it again.",
+                e);
     }
 
     @Override

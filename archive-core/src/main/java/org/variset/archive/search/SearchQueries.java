@@ -11,6 +11,7 @@ import org.apache.lucene.facet.FacetsConfig;
 import org.apache.lucene.facet.LabelAndValue;
 import org.apache.lucene.facet.sortedset.DefaultSortedSetDocValuesReaderState;
 import org.apache.lucene.facet.sortedset.SortedSetDocValuesFacetCounts;
+import org.apache.lucene.index.StoredFields;
 import org.apache.lucene.index.Term;
 import org.apache.lucene.search.BooleanClause.Occur;
 import org.apache.lucene.search.BooleanQuery;
@@ -22,15 +23,13 @@ import org.apache.lucene.search.SortField;
 import org.apache.lucene.search.TermQuery;
 import org.apache.lucene.search.TopDocs;
 import org.apache.lucene.search.TopFieldCollectorManager;
-import org.apache.lucene.index.StoredFields;
 import org.variset.archive.vocabulary.Vocabulary;
 
 /** Builds a request's Lucene query (the typed query plus the command line's filters) and runs it. */
 final class SearchQueries {
     private static final int FACET_VALUES = 12;
 
-    private SearchQueries() {
-    }
+    private SearchQueries() {}
 
     /** The query of a request. */
     static Query of(SearchRequest r, Vocabulary vocabulary) {
@@ -51,17 +50,19 @@ final class SearchQueries {
     /** Runs a query: the first hits in the order asked for, the total, and the facets when asked for. */
     static SearchHits run(IndexSearcher s, Query q, SearchRequest r, FacetsConfig config) throws IOException {
         Sort sort = switch (r.order()) {
-            case RELEVANCE -> new Sort(SortField.FIELD_SCORE, new SortField(SearchFields.SET, SortField.Type.LONG,
-                    true));
+            case RELEVANCE ->
+                new Sort(SortField.FIELD_SCORE, new SortField(SearchFields.SET, SortField.Type.LONG, true));
             case NEWEST -> new Sort(new SortField(SearchFields.SET, SortField.Type.LONG, true));
-            case GRADE -> new Sort(new SortField(SearchFields.IRCRA, SortField.Type.DOUBLE),
-                    new SortField(SearchFields.SET, SortField.Type.LONG, true));
+            case GRADE ->
+                new Sort(
+                        new SortField(SearchFields.IRCRA, SortField.Type.DOUBLE),
+                        new SortField(SearchFields.SET, SortField.Type.LONG, true));
         };
         TopDocs top;
         Map<String, List<SearchHits.FacetCount>> facets = new LinkedHashMap<>();
         if (r.facets()) {
-            FacetsCollectorManager.FacetsResult result = FacetsCollectorManager.search(s, q, r.limit(), sort, true,
-                    new FacetsCollectorManager());
+            FacetsCollectorManager.FacetsResult result =
+                    FacetsCollectorManager.search(s, q, r.limit(), sort, true, new FacetsCollectorManager());
             top = result.topDocs();
             facets(s, result, config, facets);
         } else {
@@ -74,7 +75,8 @@ final class SearchQueries {
             hits.add(new SearchHits.Hit(Long.parseLong(stored.document(d.doc).get(SearchFields.ID)), score(d)));
         }
         long total = r.facets() && top.totalHits.relation != org.apache.lucene.search.TotalHits.Relation.EQUAL_TO
-                ? s.count(q) : top.totalHits.value;
+                ? s.count(q)
+                : top.totalHits.value;
         return new SearchHits(total, hits, facets);
     }
 
@@ -90,8 +92,12 @@ final class SearchQueries {
         return Float.isNaN(d.score) ? 0 : d.score;
     }
 
-    private static void facets(IndexSearcher s, FacetsCollectorManager.FacetsResult result, FacetsConfig config,
-            Map<String, List<SearchHits.FacetCount>> out) throws IOException {
+    private static void facets(
+            IndexSearcher s,
+            FacetsCollectorManager.FacetsResult result,
+            FacetsConfig config,
+            Map<String, List<SearchHits.FacetCount>> out)
+            throws IOException {
         DefaultSortedSetDocValuesReaderState state;
         try {
             state = new DefaultSortedSetDocValuesReaderState(s.getIndexReader(), config);

@@ -13,8 +13,8 @@ import java.time.LocalDate;
  * @param limit how many hits to return, at least 1
  * @param facets whether to count the matching routes by move, hold type, grip, band, wall and setter
  */
-public record SearchRequest(String query, String gym, String wall, LocalDate standingOn, SearchOrder order, int limit,
-        boolean facets) {
+public record SearchRequest(
+        String query, String gym, String wall, LocalDate standingOn, SearchOrder order, int limit, boolean facets) {
 
     /** Checks the limit. */
     public SearchRequest {

@@ -10,8 +10,7 @@ import org.variset.archive.vocabulary.Vocabulary;
 
 /** The vocabulary a query is read with: the named gym's, or the default with every gym's own terms added. */
 public final class SearchVocabulary {
-    private SearchVocabulary() {
-    }
+    private SearchVocabulary() {}
 
     /**
      * The vocabulary in effect on a day.

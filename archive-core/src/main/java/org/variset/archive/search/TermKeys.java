@@ -57,7 +57,8 @@ final class TermKeys {
 
     /** Lower case, NFKC, letters and digits only: {@code Heel-Hook} to {@code heelhook}. */
     static String squash(String text) {
-        String n = Normalizer.normalize(text == null ? "" : text, Normalizer.Form.NFKC).toLowerCase(Locale.ROOT);
+        String n = Normalizer.normalize(text == null ? "" : text, Normalizer.Form.NFKC)
+                .toLowerCase(Locale.ROOT);
         StringBuilder b = new StringBuilder(n.length());
         n.codePoints().filter(Character::isLetterOrDigit).forEach(b::appendCodePoint);
         return b.toString();
@@ -65,7 +66,9 @@ final class TermKeys {
 
     /** A keyword as indexed: NFC, trimmed, lower case, single spaces ({@code Lantern Rock} to {@code lantern rock}). */
     static String keyword(String text) {
-        return Normalizer.normalize(text == null ? "" : text, Normalizer.Form.NFC).strip().replaceAll("\\s+", " ")
+        return Normalizer.normalize(text == null ? "" : text, Normalizer.Form.NFC)
+                .strip()
+                .replaceAll("\\s+", " ")
                 .toLowerCase(Locale.ROOT);
     }
 

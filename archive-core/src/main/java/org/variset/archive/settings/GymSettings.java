@@ -81,7 +81,8 @@ public final class GymSettings {
      * default (docs/spec/metrics.md section 3).
      */
     public Map<String, Double> target(Discipline d) {
-        return given(SettingKey.TARGET, scopeOf(d)).map(v -> SettingKey.weightMap(v.value()))
+        return given(SettingKey.TARGET, scopeOf(d))
+                .map(v -> SettingKey.weightMap(v.value()))
                 .orElse(d == Discipline.BOULDER ? TargetPyramid.weights() : null);
     }
 
@@ -92,13 +93,17 @@ public final class GymSettings {
 
     /** The grade bands of a discipline (docs/spec/grades.md defaults). */
     public synchronized BandSet bands(Discipline d) {
-        return bandSets.computeIfAbsent(d, x -> given(SettingKey.BANDS, scopeOf(x)).map(v -> SettingKey.bandSet(
-                v.value())).orElse(BandSet.defaults(x)));
+        return bandSets.computeIfAbsent(
+                d,
+                x -> given(SettingKey.BANDS, scopeOf(x))
+                        .map(v -> SettingKey.bandSet(v.value()))
+                        .orElse(BandSet.defaults(x)));
     }
 
     /** The near-repeat threshold. */
     public BigDecimal nearRepeatThreshold() {
-        return given(SettingKey.NEAR_REPEAT_THRESHOLD, "").map(v -> new BigDecimal(v.value().asText()))
+        return given(SettingKey.NEAR_REPEAT_THRESHOLD, "")
+                .map(v -> new BigDecimal(v.value().asText()))
                 .orElse(DEFAULT_THRESHOLD);
     }
 
@@ -109,7 +114,9 @@ public final class GymSettings {
 
     /** The climber height for reach flags. */
     public double reachHeightM() {
-        return given(SettingKey.REACH_HEIGHT_M, "").map(v -> v.value().asDouble()).orElse(DEFAULT_REACH_HEIGHT_M);
+        return given(SettingKey.REACH_HEIGHT_M, "")
+                .map(v -> v.value().asDouble())
+                .orElse(DEFAULT_REACH_HEIGHT_M);
     }
 
     /** The span factor for reach flags. */
@@ -133,23 +140,27 @@ public final class GymSettings {
      * the discipline, else the common-practice default.
      */
     public int cycleDays(WallRecord wall, Discipline d) {
-        return given(SettingKey.CYCLE_DAYS, scopeOf(wall)).map(v -> v.value().asInt())
+        return given(SettingKey.CYCLE_DAYS, scopeOf(wall))
+                .map(v -> v.value().asInt())
                 .or(() -> Optional.ofNullable(wall.cycleDays()))
-                .or(() -> given(SettingKey.CYCLE_DAYS, scopeOf(d)).map(v -> v.value().asInt()))
+                .or(() -> given(SettingKey.CYCLE_DAYS, scopeOf(d))
+                        .map(v -> v.value().asInt()))
                 .orElse(d == Discipline.BOULDER ? DEFAULT_BOULDER_CYCLE_DAYS : DEFAULT_ROPE_CYCLE_DAYS);
     }
 
     /** Days past the cycle before a wall is overdue. */
     public int overdueAfterDays() {
-        return given(SettingKey.OVERDUE_AFTER_DAYS, "").map(v -> v.value().asInt())
+        return given(SettingKey.OVERDUE_AFTER_DAYS, "")
+                .map(v -> v.value().asInt())
                 .orElse(DEFAULT_OVERDUE_AFTER_DAYS);
     }
 
     /** The default vocabulary with the gym's own terms added. */
     public synchronized Vocabulary vocabulary() {
         if (vocabulary == null) {
-            vocabulary = given(SettingKey.VOCABULARY, "").map(v -> Vocabulary.defaults().extendedWith(
-                    v.value().asText())).orElse(Vocabulary.defaults());
+            vocabulary = given(SettingKey.VOCABULARY, "")
+                    .map(v -> Vocabulary.defaults().extendedWith(v.value().asText()))
+                    .orElse(Vocabulary.defaults());
         }
         return vocabulary;
     }

@@ -23,8 +23,11 @@ public enum SettingKey {
     /** Target grade shares per band: {@code VB=1 V0=2 V1=3}. */
     TARGET("target", SettingScope.DISCIPLINE, "target grade shares per band, as band=weight pairs: 'VB=1 V0=2 V1=3'"),
     /** Grade bands: {@code VB V0@10 V1@13.5}, each band from its lower edge on the IRCRA axis to the next one's. */
-    BANDS("bands", SettingScope.DISCIPLINE, "grade bands, easiest first, as label@lower-edge on the IRCRA axis "
-            + "(the first may leave its edge out): 'VB V0@10 V1@13.5 V2@14.5'"),
+    BANDS(
+            "bands",
+            SettingScope.DISCIPLINE,
+            "grade bands, easiest first, as label@lower-edge on the IRCRA axis "
+                    + "(the first may leave its edge out): 'VB V0@10 V1@13.5 V2@14.5'"),
     /** The Jaccard index at or above which two routes are near-repeats. */
     NEAR_REPEAT_THRESHOLD("near_repeat_threshold", SettingScope.GYM, "a number above 0 and at most 1: '0.6'"),
     /** How many days before a reset its routes are compared with. */
@@ -34,15 +37,21 @@ public enum SettingKey {
     /** A span longer than this many times the climber height is flagged. */
     REACH_FACTOR("reach_factor", SettingScope.GYM, "a number above 0 and at most 3: '1.0'"),
     /** Weights of the composite score's parts: {@code grip=0.25 holds=0.2}; parts not named keep their default. */
-    SCORE_WEIGHTS("score_weights", SettingScope.GYM, "part=weight pairs over grip, holds, moves, grades and "
-            + "novelty, each at least 0: 'grip=0.3 novelty=0.3'"),
+    SCORE_WEIGHTS(
+            "score_weights",
+            SettingScope.GYM,
+            "part=weight pairs over grip, holds, moves, grades and "
+                    + "novelty, each at least 0: 'grip=0.3 novelty=0.3'"),
     /** How many days the gym means to leave a wall's set up. */
     CYCLE_DAYS("cycle_days", SettingScope.DISCIPLINE_OR_WALL, "a whole number of days, at least 1: '28'"),
     /** Days past the cycle before a wall counts as overdue rather than due. */
     OVERDUE_AFTER_DAYS("overdue_after_days", SettingScope.GYM, "a whole number of days, at least 0: '14'"),
     /** The gym's own terms and spellings, added to the default vocabulary (vocabulary file form). */
-    VOCABULARY("vocabulary", SettingScope.GYM, "terms in the vocabulary file form: a '[moves]' line, then lines "
-            + "like 'heel hook: hooky heel' (sections: hold-types, moves, styles)");
+    VOCABULARY(
+            "vocabulary",
+            SettingScope.GYM,
+            "terms in the vocabulary file form: a '[moves]' line, then lines "
+                    + "like 'heel hook: hooky heel' (sections: hold-types, moves, styles)");
 
     /** The score's parts, in the order of docs/spec/metrics.md section 7. */
     public static final List<String> SCORE_PARTS = List.of("grip", "holds", "moves", "grades", "novelty");
@@ -87,8 +96,10 @@ public enum SettingKey {
                 return k;
             }
         }
-        throw new IllegalArgumentException("no setting named '" + word + "' (settings: " + String.join(", ",
-                java.util.Arrays.stream(values()).map(SettingKey::word).toList()) + ")");
+        throw new IllegalArgumentException("no setting named '" + word + "' (settings: "
+                + String.join(
+                        ", ",
+                        java.util.Arrays.stream(values()).map(SettingKey::word).toList()) + ")");
     }
 
     /**
@@ -104,11 +115,14 @@ public enum SettingKey {
         return switch (this) {
             case TARGET -> weights(t, null);
             case BANDS -> bands(t);
-            case NEAR_REPEAT_THRESHOLD -> NODES.textNode(decimal(t, "0", false, "1", true).toPlainString());
+            case NEAR_REPEAT_THRESHOLD ->
+                NODES.textNode(decimal(t, "0", false, "1", true).toPlainString());
             case LOOKBACK_DAYS, CYCLE_DAYS -> NODES.numberNode(whole(t, 1));
             case OVERDUE_AFTER_DAYS -> NODES.numberNode(whole(t, 0));
-            case REACH_HEIGHT_M -> NODES.numberNode(decimal(t, "0.5", true, "3", true).doubleValue());
-            case REACH_FACTOR -> NODES.numberNode(decimal(t, "0", false, "3", true).doubleValue());
+            case REACH_HEIGHT_M ->
+                NODES.numberNode(decimal(t, "0.5", true, "3", true).doubleValue());
+            case REACH_FACTOR ->
+                NODES.numberNode(decimal(t, "0", false, "3", true).doubleValue());
             case SCORE_WEIGHTS -> weights(t, SCORE_PARTS);
             case VOCABULARY -> {
                 Vocabulary.defaults().extendedWith(t);
@@ -122,7 +136,9 @@ public enum SettingKey {
         return switch (this) {
             case TARGET, SCORE_WEIGHTS -> {
                 List<String> pairs = new ArrayList<>();
-                value.fields().forEachRemaining(e -> pairs.add(e.getKey() + "=" + e.getValue().asText()));
+                value.fields()
+                        .forEachRemaining(
+                                e -> pairs.add(e.getKey() + "=" + e.getValue().asText()));
                 yield String.join(" ", pairs);
             }
             case BANDS -> {
@@ -202,7 +218,9 @@ public enum SettingKey {
             if (lv.length == 1 && i > 0) {
                 throw bad(t, "band '" + label + "' needs its lower edge, as " + label + "@12.5");
             }
-            Double lo = lv.length == 1 ? null : decimal(lv[1], null, false, null, false).doubleValue();
+            Double lo = lv.length == 1
+                    ? null
+                    : decimal(lv[1], null, false, null, false).doubleValue();
             if (lo != null && previous != null && lo <= previous) {
                 throw bad(t, "band '" + label + "' starts at " + plain(lo) + ", not above the band before it");
             }
@@ -231,18 +249,20 @@ public enum SettingKey {
         } catch (NumberFormatException e) {
             throw bad(t, "'" + t.strip() + "' is not a number");
         }
-        if (min != null && (minIncluded ? v.compareTo(new BigDecimal(min)) < 0 : v.compareTo(new BigDecimal(min)) <= 0)) {
+        if (min != null
+                && (minIncluded ? v.compareTo(new BigDecimal(min)) < 0 : v.compareTo(new BigDecimal(min)) <= 0)) {
             throw bad(t, "it must be " + (minIncluded ? "at least " : "above ") + min);
         }
-        if (max != null && (maxIncluded ? v.compareTo(new BigDecimal(max)) > 0 : v.compareTo(new BigDecimal(max)) >= 0)) {
+        if (max != null
+                && (maxIncluded ? v.compareTo(new BigDecimal(max)) > 0 : v.compareTo(new BigDecimal(max)) >= 0)) {
             throw bad(t, "it must be " + (maxIncluded ? "at most " : "below ") + max);
         }
         return v;
     }
 
     private IllegalArgumentException bad(String text, String why) {
-        return new IllegalArgumentException("setting " + word + ": '" + text + "' is not a valid value: " + why
-                + " (expected " + expected + ")");
+        return new IllegalArgumentException(
+                "setting " + word + ": '" + text + "' is not a valid value: " + why + " (expected " + expected + ")");
     }
 
     private static String plain(double d) {

@@ -45,13 +45,16 @@ public final class SettingsReader {
                         continue; // a key of a newer Variset: this one does not use it
                     }
                     String json = rs.getString(4);
-                    out.add(new SettingValue(key, rs.getString(2), rs.getObject(3, LocalDate.class),
+                    out.add(new SettingValue(
+                            key,
+                            rs.getString(2),
+                            rs.getObject(3, LocalDate.class),
                             "null".equals(json) ? null : SettingKey.read(json)));
                 }
             }
         } catch (SQLException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the gym's settings: "
-                    + e.getMessage(), e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED, "Cannot read the gym's settings: " + e.getMessage(), e);
         }
         return out;
     }

@@ -15,8 +15,7 @@ import org.variset.archive.store.ChangeLog;
  * settings of its day.
  */
 public final class SettingsWriter {
-    private SettingsWriter() {
-    }
+    private SettingsWriter() {}
 
     /**
      * Checks a value against the settings it must agree with, then stores it in the caller's transaction.
@@ -26,13 +25,20 @@ public final class SettingsWriter {
      * @throws IllegalArgumentException when the scope does not fit the key, or a target names a band the
      *     discipline's bands do not have
      */
-    public static void set(Session session, Gym gym, SettingKey key, String scope, LocalDate from, JsonNode value,
+    public static void set(
+            Session session,
+            Gym gym,
+            SettingKey key,
+            String scope,
+            LocalDate from,
+            JsonNode value,
             GymSettings inEffect) {
         checkScope(key, scope);
         if (value != null && key == SettingKey.TARGET) {
             BandSet bands = inEffect.bands(Discipline.parse(scope));
             List<String> unknown = SettingKey.weightMap(value).keySet().stream()
-                    .filter(l -> bands.indexOf(l) < 0).toList();
+                    .filter(l -> bands.indexOf(l) < 0)
+                    .toList();
             if (!unknown.isEmpty()) {
                 throw new IllegalArgumentException("setting target: " + String.join(", ", unknown)
                         + (unknown.size() == 1 ? " is not a band" : " are not bands") + " of " + scope
@@ -55,11 +61,12 @@ public final class SettingsWriter {
             case DISCIPLINE_OR_WALL -> discipline || wall;
         };
         if (!fits) {
-            throw new IllegalArgumentException("setting " + key.word() + " applies to " + switch (key.scope()) {
-                case GYM -> "the whole gym: leave out --discipline and --wall";
-                case DISCIPLINE -> "one discipline: give --discipline boulder or --discipline rope";
-                case DISCIPLINE_OR_WALL -> "one discipline or one wall: give --discipline or --wall";
-            });
+            throw new IllegalArgumentException("setting " + key.word() + " applies to "
+                    + switch (key.scope()) {
+                        case GYM -> "the whole gym: leave out --discipline and --wall";
+                        case DISCIPLINE -> "one discipline: give --discipline boulder or --discipline rope";
+                        case DISCIPLINE_OR_WALL -> "one discipline or one wall: give --discipline or --wall";
+                    });
         }
     }
 }

@@ -9,8 +9,7 @@ import java.util.Map;
  * with the gym's own; rope routes have no default.
  */
 public final class TargetPyramid {
-    private TargetPyramid() {
-    }
+    private TargetPyramid() {}
 
     private static final String[] BANDS = {"VB", "V0", "V1", "V2", "V3", "V4", "V5", "V6", "V7", "V8", "V9"};
     private static final int[] WEIGHTS = {1, 2, 3, 4, 5, 6, 5, 4, 3, 1, 1};

@@ -12,10 +12,10 @@ import java.util.function.Consumer;
 import java.util.function.Function;
 import javax.sql.DataSource;
 import org.h2.jdbcx.JdbcDataSource;
-import org.postgresql.ds.PGSimpleDataSource;
 import org.hibernate.Session;
 import org.hibernate.SessionFactory;
 import org.hibernate.StatelessSession;
+import org.postgresql.ds.PGSimpleDataSource;
 import org.variset.archive.store.ArchiveException.Problem;
 
 /**
@@ -31,6 +31,7 @@ public final class Archive implements AutoCloseable {
 
     /** The database file's base name inside the archive folder ({@code archive.mv.db} on disk). */
     static final String DB_NAME = "archive";
+
     private static final int H2_DATABASE_IN_USE = 90020;
     private static final AtomicInteger MEMORY_IDS = new AtomicInteger();
 
@@ -54,7 +55,12 @@ public final class Archive implements AutoCloseable {
     /** True when this open made the archive's tables (a new archive). */
     private boolean created;
 
-    private Archive(Path dir, ServerAddress server, Path indexDir, DataSource dataSource, Connection keeper,
+    private Archive(
+            Path dir,
+            ServerAddress server,
+            Path indexDir,
+            DataSource dataSource,
+            Connection keeper,
             SchemaVersion schema) {
         this.dir = dir;
         this.server = server;
@@ -81,8 +87,8 @@ public final class Archive implements AutoCloseable {
         try {
             createPrivateDirectories(dir);
         } catch (IOException e) {
-            throw new ArchiveException(Problem.DAMAGED, "Cannot create the archive folder " + dir + ": "
-                    + e.getMessage(), e);
+            throw new ArchiveException(
+                    Problem.DAMAGED, "Cannot create the archive folder " + dir + ": " + e.getMessage(), e);
         }
         ArchiveLock lock = ArchiveLock.acquire(dir, ArchiveLock.DEFAULT_WAIT);
         try {
@@ -99,12 +105,12 @@ public final class Archive implements AutoCloseable {
     /** Archive files are readable by their owner only; where the file system has no POSIX modes, left as is. */
     static void restrictToOwner(Path file) {
         try {
-            if (Files.exists(file) && FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
+            if (Files.exists(file)
+                    && FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
                 Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-------"));
             }
         } catch (IOException e) {
-            throw new ArchiveException(Problem.DAMAGED, "Cannot restrict access to " + file + ": " + e.getMessage(),
-                    e);
+            throw new ArchiveException(Problem.DAMAGED, "Cannot restrict access to " + file + ": " + e.getMessage(), e);
         }
     }
 
@@ -124,8 +130,9 @@ public final class Archive implements AutoCloseable {
      */
     public static Archive open(Path dir, java.time.Duration wait) {
         if (!existsAt(dir)) {
-            throw new ArchiveException(Problem.MISSING, "No archive at " + dir + ". Create one with: variset "
-                    + "--archive " + dir + " init");
+            throw new ArchiveException(
+                    Problem.MISSING,
+                    "No archive at " + dir + ". Create one with: variset " + "--archive " + dir + " init");
         }
         ArchiveLock lock = ArchiveLock.acquire(dir, wait);
         try {
@@ -169,43 +176,16 @@ public final class Archive implements AutoCloseable {
         if (address.password() != null) {
             ds.setPassword(address.password());
         }
-        Connection probe;
-        try {
-            probe = ds.getConnection();
-        } catch (SQLException e) {
-            String why = String.valueOf(e.getMessage()).replaceAll("\\.+$", "");
-            throw new ArchiveException(Problem.MISSING, "Cannot connect to the archive at " + address.shown() + ": "
-                    + why + ". Check the address, that the server is running, and the user's password (PGPASSWORD "
-                    + "or ~/.pgpass).", e);
-        }
-        try {
-            int major = probe.getMetaData().getDatabaseMajorVersion();
-            if (major < MIN_POSTGRESQL) {
-                throw new ArchiveException(Problem.DAMAGED, "The server at " + address.shown() + " runs PostgreSQL "
-                        + major + "; a shared archive needs PostgreSQL " + MIN_POSTGRESQL + " or later (its change log "
-                        + "records 64-bit transaction ids, pg_current_xact_id).");
-            }
-            if (!create && SchemaVersion.read(probe).version() == 0) {
-                throw new ArchiveException(Problem.MISSING, "The database at " + address.shown() + " holds no "
-                        + "Variset archive. Create one with: variset --db '" + address.shown() + "' init");
-            }
-        } catch (SQLException e) {
-            closeQuietly(probe);
-            throw new ArchiveException(Problem.DAMAGED, "Cannot read the archive at " + address.shown() + ": "
-                    + e.getMessage(), e);
-        } catch (RuntimeException e) {
-            closeQuietly(probe);
-            throw e;
-        }
+        Connection probe = probe(address, ds, create);
         ArchiveLock clientLock;
         try {
             createPrivateDirectories(clientDir);
-            clientLock = ArchiveLock.acquire(clientDir, wait, "This client's search index of " + address.shown()
-                    + " (in " + clientDir + ")");
+            clientLock = ArchiveLock.acquire(
+                    clientDir, wait, "This client's search index of " + address.shown() + " (in " + clientDir + ")");
         } catch (IOException e) {
             closeQuietly(probe);
-            throw new ArchiveException(Problem.DAMAGED, "Cannot create this client's folder " + clientDir + ": "
-                    + e.getMessage(), e);
+            throw new ArchiveException(
+                    Problem.DAMAGED, "Cannot create this client's folder " + clientDir + ": " + e.getMessage(), e);
         } catch (RuntimeException e) {
             closeQuietly(probe);
             throw e;
@@ -218,6 +198,48 @@ public final class Archive implements AutoCloseable {
             clientLock.close();
             throw e;
         }
+    }
+
+    /** A first connection to the server, once it is known to run a PostgreSQL new enough and to hold an archive. */
+    private static Connection probe(ServerAddress address, PGSimpleDataSource ds, boolean create) {
+        Connection probe;
+        try {
+            probe = ds.getConnection();
+        } catch (SQLException e) {
+            String why = String.valueOf(e.getMessage()).replaceAll("\\.+$", "");
+            throw new ArchiveException(
+                    Problem.MISSING,
+                    "Cannot connect to the archive at " + address.shown() + ": "
+                            + why
+                            + ". Check the address, that the server is running, and the user's password (PGPASSWORD "
+                            + "or ~/.pgpass).",
+                    e);
+        }
+        try {
+            int major = probe.getMetaData().getDatabaseMajorVersion();
+            if (major < MIN_POSTGRESQL) {
+                throw new ArchiveException(
+                        Problem.DAMAGED,
+                        "The server at " + address.shown() + " runs PostgreSQL "
+                                + major + "; a shared archive needs PostgreSQL " + MIN_POSTGRESQL
+                                + " or later (its change log "
+                                + "records 64-bit transaction ids, pg_current_xact_id).");
+            }
+            if (!create && SchemaVersion.read(probe).version() == 0) {
+                throw new ArchiveException(
+                        Problem.MISSING,
+                        "The database at " + address.shown() + " holds no "
+                                + "Variset archive. Create one with: variset --db '" + address.shown() + "' init");
+            }
+        } catch (SQLException e) {
+            closeQuietly(probe);
+            throw new ArchiveException(
+                    Problem.DAMAGED, "Cannot read the archive at " + address.shown() + ": " + e.getMessage(), e);
+        } catch (RuntimeException e) {
+            closeQuietly(probe);
+            throw e;
+        }
+        return probe;
     }
 
     private static JdbcDataSource h2(String url) {
@@ -251,9 +273,11 @@ public final class Archive implements AutoCloseable {
         try {
             SchemaVersion version = SchemaVersion.read(keeper);
             if (version.version() > SchemaVersion.LATEST) {
-                throw new ArchiveException(Problem.TOO_NEW, "The archive at " + where + " has schema version "
-                        + version.version() + ", newer than this Variset knows (" + SchemaVersion.LATEST
-                        + "). Use a newer Variset; this one will not change the archive.");
+                throw new ArchiveException(
+                        Problem.TOO_NEW,
+                        "The archive at " + where + " has schema version "
+                                + version.version() + ", newer than this Variset knows (" + SchemaVersion.LATEST
+                                + "). Use a newer Variset; this one will not change the archive.");
             }
             boolean empty = version.version() == 0;
             if (version.behind()) {
@@ -269,24 +293,29 @@ public final class Archive implements AutoCloseable {
             if (e instanceof ArchiveException ae) {
                 throw ae;
             }
-            throw new ArchiveException(Problem.DAMAGED, "Cannot read the archive at " + where + ": " + e.getMessage()
-                    + ". Run 'variset check' for details.", e);
+            throw new ArchiveException(
+                    Problem.DAMAGED,
+                    "Cannot read the archive at " + where + ": " + e.getMessage()
+                            + ". Run 'variset check' for details.",
+                    e);
         }
     }
 
     private static ArchiveException openFailure(Path dir, SQLException e) {
         if (e.getErrorCode() == H2_DATABASE_IN_USE) {
-            return new ArchiveException(Problem.IN_USE, "The archive at " + dir + " is in use by another Variset "
-                    + "process. Wait for it to finish and try again.", e);
+            return new ArchiveException(
+                    Problem.IN_USE,
+                    "The archive at " + dir + " is in use by another Variset "
+                            + "process. Wait for it to finish and try again.",
+                    e);
         }
-        return new ArchiveException(Problem.DAMAGED, "Cannot open the archive at " + dir + ": "
-                + e.getMessage(), e);
+        return new ArchiveException(Problem.DAMAGED, "Cannot open the archive at " + dir + ": " + e.getMessage(), e);
     }
 
     static void createPrivateDirectories(Path dir) throws IOException {
         if (FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
-            Files.createDirectories(dir, PosixFilePermissions.asFileAttribute(PosixFilePermissions.fromString(
-                    "rwx------")));
+            Files.createDirectories(
+                    dir, PosixFilePermissions.asFileAttribute(PosixFilePermissions.fromString("rwx------")));
         } else {
             Files.createDirectories(dir);
         }

@@ -30,11 +30,11 @@ public final class ArchiveBackup {
     static final String MANIFEST = "variset-backup.json";
     /** The database's entry name. */
     static final String DATABASE = Archive.DB_NAME + ".mv.db";
+
     private static final String FORMAT = "variset-backup";
     private static final ObjectMapper JSON = new ObjectMapper();
 
-    private ArchiveBackup() {
-    }
+    private ArchiveBackup() {}
 
     /**
      * Writes a backup of an open archive (this process holds its lock, so no other process writes meanwhile).
@@ -55,8 +55,10 @@ public final class ArchiveBackup {
             AtomicFile.write(target, replace, out -> repack(h2, manifest, out));
             return manifest;
         } catch (IOException | SQLException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot back up the archive to " + target
-                    + ": " + e.getMessage(), e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED,
+                    "Cannot back up the archive to " + target + ": " + e.getMessage(),
+                    e);
         } finally {
             deleteQuietly(tmpZip);
         }
@@ -64,11 +66,19 @@ public final class ArchiveBackup {
 
     private static ObjectNode manifest(Archive archive) {
         ArchiveStats s = archive.stats();
-        ObjectNode m = JSON.createObjectNode().put("format", FORMAT).put("format_version", 1)
-                .put("created", Instant.now().toString()).put("schema_version", s.schemaVersion())
+        ObjectNode m = JSON.createObjectNode()
+                .put("format", FORMAT)
+                .put("format_version", 1)
+                .put("created", Instant.now().toString())
+                .put("schema_version", s.schemaVersion())
                 .put("change_stamp", ChangeLog.stamp(archive.connection()));
-        m.putObject("counts").put("gyms", s.gyms()).put("walls", s.walls()).put("resets", s.resets())
-                .put("routes", s.routes()).put("holds", s.holds()).put("setters", s.setters());
+        m.putObject("counts")
+                .put("gyms", s.gyms())
+                .put("walls", s.walls())
+                .put("resets", s.resets())
+                .put("routes", s.routes())
+                .put("holds", s.holds())
+                .put("setters", s.setters());
         return m;
     }
 
@@ -84,7 +94,9 @@ public final class ArchiveBackup {
             try (InputStream in = new DigestInputStream(z.getInputStream(db), sha)) {
                 bytes = in.transferTo(OutputStream.nullOutputStream());
             }
-            manifest.putObject("database").put("entry", DATABASE).put("bytes", bytes)
+            manifest.putObject("database")
+                    .put("entry", DATABASE)
+                    .put("bytes", bytes)
                     .put("sha256", HexFormat.of().formatHex(sha.digest()));
             try (ZipOutputStream zip = new ZipOutputStream(out)) {
                 zip.putNextEntry(new ZipEntry(MANIFEST));
@@ -154,8 +166,10 @@ public final class ArchiveBackup {
         }
         int schema = m.path("schema_version").asInt(-1);
         if (schema > SchemaVersion.LATEST) {
-            throw bad(backup, "it was made with a newer Variset (schema version " + schema + "; this one knows "
-                    + SchemaVersion.LATEST + "): restore it with that version");
+            throw bad(
+                    backup,
+                    "it was made with a newer Variset (schema version " + schema + "; this one knows "
+                            + SchemaVersion.LATEST + "): restore it with that version");
         }
         if (schema < 1 || !m.at("/database/sha256").isTextual()) {
             throw bad(backup, "its manifest is incomplete");

@@ -15,6 +15,5 @@ public final class ArchiveEntities {
     public static final List<Class<?>> ALL = List.of(
             Gym.class, Wall.class, GymSetting.class, Setter.class, Reset.class, Route.class, HoldPlacement.class);
 
-    private ArchiveEntities() {
-    }
+    private ArchiveEntities() {}
 }

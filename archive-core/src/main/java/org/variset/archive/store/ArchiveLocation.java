@@ -103,14 +103,14 @@ public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, Str
             try (Reader r = Files.newBufferedReader(config, StandardCharsets.UTF_8)) {
                 p.load(r);
             } catch (IOException | IllegalArgumentException e) {
-                throw new IllegalArgumentException("Cannot read the configuration file " + config + ": "
-                        + e.getMessage());
+                throw new IllegalArgumentException(
+                        "Cannot read the configuration file " + config + ": " + e.getMessage());
             }
             String cdb = blankToNull(p.getProperty("db"));
             String cdir = blankToNull(p.getProperty("archive"));
             if (cdb != null && cdir != null) {
-                throw new IllegalArgumentException("The configuration file " + config + " sets both 'db' and "
-                        + "'archive'; keep one of them");
+                throw new IllegalArgumentException(
+                        "The configuration file " + config + " sets both 'db' and " + "'archive'; keep one of them");
             }
             if (cdb != null) {
                 return server(cdb, config.toString(), env, home);
@@ -133,7 +133,8 @@ public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, Str
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException(e.getMessage() + " (the address came from " + source + ")");
         }
-        return new ArchiveLocation(null, a, cacheHome(env, home).resolve(a.cacheKey()).resolve("index"), source);
+        return new ArchiveLocation(
+                null, a, cacheHome(env, home).resolve(a.cacheKey()).resolve("index"), source);
     }
 
     /** {@code $XDG_CONFIG_HOME/variset/variset.properties}, else {@code ~/.config/variset/variset.properties}. */

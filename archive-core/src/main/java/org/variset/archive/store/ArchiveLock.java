@@ -27,6 +27,7 @@ public final class ArchiveLock implements AutoCloseable {
     public static final String FILE = "variset.lock";
     /** How long a command waits for another to finish before it gives up. */
     public static final Duration DEFAULT_WAIT = Duration.ofSeconds(5);
+
     private static final long RETRY_MS = 200;
 
     private final FileChannel channel;
@@ -56,8 +57,8 @@ public final class ArchiveLock implements AutoCloseable {
         Path file = dir.resolve(FILE);
         long deadline = System.nanoTime() + wait.toNanos();
         try {
-            FileChannel ch = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.READ,
-                    StandardOpenOption.WRITE);
+            FileChannel ch = FileChannel.open(
+                    file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
             Archive.restrictToOwner(file);
             while (true) {
                 FileLock l;
@@ -73,14 +74,15 @@ public final class ArchiveLock implements AutoCloseable {
                 if (System.nanoTime() >= deadline) {
                     String holder = holder(file);
                     ch.close();
-                    throw new ArchiveException(ArchiveException.Problem.IN_USE, what
-                            + " is in use by " + holder + ". Wait for it to finish and try again.");
+                    throw new ArchiveException(
+                            ArchiveException.Problem.IN_USE,
+                            what + " is in use by " + holder + ". Wait for it to finish and try again.");
                 }
                 sleep();
             }
         } catch (IOException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot lock " + dir + ": "
-                    + e.getMessage(), e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED, "Cannot lock " + dir + ": " + e.getMessage(), e);
         }
     }
 
@@ -89,8 +91,10 @@ public final class ArchiveLock implements AutoCloseable {
         try {
             String[] f = Files.readString(file, StandardCharsets.UTF_8).strip().split(" ");
             if (f.length >= 3) {
-                LocalTime since = Instant.ofEpochMilli(Long.parseLong(f[2])).atZone(ZoneId.systemDefault())
-                        .toLocalTime().truncatedTo(ChronoUnit.SECONDS);
+                LocalTime since = Instant.ofEpochMilli(Long.parseLong(f[2]))
+                        .atZone(ZoneId.systemDefault())
+                        .toLocalTime()
+                        .truncatedTo(ChronoUnit.SECONDS);
                 return "process " + f[0] + " on host " + f[1] + " (since " + since + ")";
             }
         } catch (IOException | RuntimeException e) {
@@ -106,8 +110,9 @@ public final class ArchiveLock implements AutoCloseable {
         } catch (IOException e) {
             host = "unknown";
         }
-        byte[] text = (ProcessHandle.current().pid() + " " + host.replace(' ', '_') + " "
-                + System.currentTimeMillis() + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] text = (ProcessHandle.current().pid() + " " + host.replace(' ', '_') + " " + System.currentTimeMillis()
+                        + "\n")
+                .getBytes(StandardCharsets.UTF_8);
         ch.truncate(0);
         ch.write(ByteBuffer.wrap(text), 0);
         ch.force(false);

@@ -15,8 +15,7 @@ import java.util.stream.Stream;
  * renaming folders. A failure at any step leaves the archive as it was.
  */
 public final class ArchiveRestore {
-    private ArchiveRestore() {
-    }
+    private ArchiveRestore() {}
 
     /**
      * What a restore did.
@@ -24,8 +23,7 @@ public final class ArchiveRestore {
      * @param manifest the backup's manifest
      * @param replaced whether an archive was there before (and was replaced)
      */
-    public record Result(JsonNode manifest, boolean replaced) {
-    }
+    public record Result(JsonNode manifest, boolean replaced) {}
 
     /**
      * Restores a backup into an archive folder.
@@ -55,8 +53,10 @@ public final class ArchiveRestore {
             swap(fresh, target, exists);
             return new Result(manifest, exists);
         } catch (IOException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot restore into " + target + ": "
-                    + e.getMessage() + ". The archive there is unchanged.", e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED,
+                    "Cannot restore into " + target + ": " + e.getMessage() + ". The archive there is unchanged.",
+                    e);
         } finally {
             deleteTree(fresh);
             if (lock != null) {
@@ -74,8 +74,14 @@ public final class ArchiveRestore {
             throw ArchiveBackup.bad(backup, "its database does not open (" + e.getMessage() + ")");
         }
         JsonNode c = manifest.get("counts");
-        long[] expected = {c.path("gyms").asLong(), c.path("walls").asLong(), c.path("resets").asLong(),
-            c.path("routes").asLong(), c.path("holds").asLong(), c.path("setters").asLong()};
+        long[] expected = {
+            c.path("gyms").asLong(),
+            c.path("walls").asLong(),
+            c.path("resets").asLong(),
+            c.path("routes").asLong(),
+            c.path("holds").asLong(),
+            c.path("setters").asLong()
+        };
         long[] found = {s.gyms(), s.walls(), s.resets(), s.routes(), s.holds(), s.setters()};
         if (!java.util.Arrays.equals(expected, found)) {
             throw ArchiveBackup.bad(backup, "its database does not hold what its manifest counts");

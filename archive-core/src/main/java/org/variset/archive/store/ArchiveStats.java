@@ -19,8 +19,16 @@ import java.time.LocalDate;
  * @param lastSetOn the latest set_on, or null
  * @param schemaVersion the schema version
  */
-public record ArchiveStats(long gyms, long walls, long resets, long routes, long holds, long setters,
-        LocalDate firstSetOn, LocalDate lastSetOn, int schemaVersion) {
+public record ArchiveStats(
+        long gyms,
+        long walls,
+        long resets,
+        long routes,
+        long holds,
+        long setters,
+        LocalDate firstSetOn,
+        LocalDate lastSetOn,
+        int schemaVersion) {
 
     static ArchiveStats read(Connection c, int schemaVersion) throws SQLException {
         try (Statement s = c.createStatement();
@@ -29,8 +37,15 @@ public record ArchiveStats(long gyms, long walls, long resets, long routes, long
                         + " (SELECT COUNT(*) FROM hold_placement), (SELECT COUNT(*) FROM setter),"
                         + " (SELECT MIN(set_on) FROM route), (SELECT MAX(set_on) FROM route)")) {
             rs.next();
-            return new ArchiveStats(rs.getLong(1), rs.getLong(2), rs.getLong(3), rs.getLong(4), rs.getLong(5),
-                    rs.getLong(6), rs.getObject(7, LocalDate.class), rs.getObject(8, LocalDate.class),
+            return new ArchiveStats(
+                    rs.getLong(1),
+                    rs.getLong(2),
+                    rs.getLong(3),
+                    rs.getLong(4),
+                    rs.getLong(5),
+                    rs.getLong(6),
+                    rs.getObject(7, LocalDate.class),
+                    rs.getObject(8, LocalDate.class),
                     schemaVersion);
         }
     }

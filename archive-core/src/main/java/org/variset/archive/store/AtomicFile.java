@@ -12,8 +12,7 @@ import java.nio.file.StandardCopyOption;
  * replaced only when asked.
  */
 public final class AtomicFile {
-    private AtomicFile() {
-    }
+    private AtomicFile() {}
 
     /** What writes the content. */
     @FunctionalInterface
@@ -32,15 +31,16 @@ public final class AtomicFile {
         Path file = target.toAbsolutePath().normalize();
         Path dir = file.getParent();
         if (Files.isDirectory(file)) {
-            throw new IllegalArgumentException(target + " is a folder; give a file name, such as " + target.resolve(
-                    "audit.pdf"));
+            throw new IllegalArgumentException(
+                    target + " is a folder; give a file name, such as " + target.resolve("audit.pdf"));
         }
         if (Files.exists(file) && !replace) {
             throw new IllegalArgumentException(target + " exists already; give --force to replace it, or another name");
         }
         if (dir == null || !Files.isDirectory(dir)) {
-            throw new IllegalArgumentException("cannot write " + target + ": " + dir + (dir != null && Files.exists(dir)
-                    ? " is a file, not a folder" : " does not exist") + " (expected a folder that is there)");
+            throw new IllegalArgumentException("cannot write " + target + ": " + dir
+                    + (dir != null && Files.exists(dir) ? " is a file, not a folder" : " does not exist")
+                    + " (expected a folder that is there)");
         }
         Path tmp = null;
         try {

@@ -36,8 +36,7 @@ public final class ChangeLog {
     /** The oldest transaction running when the reader's snapshot was taken. */
     private static final String PG_XMIN = "SELECT pg_snapshot_xmin(pg_current_snapshot())::text::bigint";
 
-    private ChangeLog() {
-    }
+    private ChangeLog() {}
 
     /** Records routes by id; call before deleting them (a deleted route is recorded so its document goes too). */
     public static void routes(Session s, Collection<Long> routeIds) {
@@ -45,22 +44,27 @@ public final class ChangeLog {
         List<Long> ids = new ArrayList<>(routeIds);
         for (int i = 0; i < ids.size(); i += CHUNK) {
             s.createNativeMutationQuery("INSERT INTO route_change (route_id, gym_id, tx) SELECT id, gym_id, " + tx
-                    + " FROM route WHERE id IN (:ids)").setParameter("ids", ids.subList(i, Math.min(ids.size(),
-                            i + CHUNK))).executeUpdate();
+                            + " FROM route WHERE id IN (:ids)")
+                    .setParameter("ids", ids.subList(i, Math.min(ids.size(), i + CHUNK)))
+                    .executeUpdate();
         }
     }
 
     /** Records every route of one setter (a rename or merge changes them all). */
     public static void setter(Session s, long setterId) {
-        s.createNativeMutationQuery("INSERT INTO route_change (route_id, gym_id, tx) SELECT r.id, r.gym_id, "
-                + txExpression(s) + " FROM route r JOIN route_setter x ON x.route_id = r.id WHERE x.setter_id = :id")
-                .setParameter("id", setterId).executeUpdate();
+        s.createNativeMutationQuery(
+                        "INSERT INTO route_change (route_id, gym_id, tx) SELECT r.id, r.gym_id, " + txExpression(s)
+                                + " FROM route r JOIN route_setter x ON x.route_id = r.id WHERE x.setter_id = :id")
+                .setParameter("id", setterId)
+                .executeUpdate();
     }
 
     /** Records every route of a gym (a change of its vocabulary or bands changes how they are indexed). */
     public static void gym(Session s, long gymId) {
         s.createNativeMutationQuery("INSERT INTO route_change (route_id, gym_id, tx) SELECT id, gym_id, "
-                + txExpression(s) + " FROM route WHERE gym_id = :id").setParameter("id", gymId).executeUpdate();
+                        + txExpression(s) + " FROM route WHERE gym_id = :id")
+                .setParameter("id", gymId)
+                .executeUpdate();
     }
 
     private static String txExpression(Session s) {
@@ -70,10 +74,13 @@ public final class ChangeLog {
     /** True when the connection is to a shared archive (PostgreSQL), whose stamps are transaction ids. */
     public static boolean isShared(Connection c) {
         try {
-            return c.getMetaData().getDatabaseProductName().toLowerCase(Locale.ROOT).contains("postgres");
+            return c.getMetaData()
+                    .getDatabaseProductName()
+                    .toLowerCase(Locale.ROOT)
+                    .contains("postgres");
         } catch (SQLException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the archive: " + e.getMessage(),
-                    e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED, "Cannot read the archive: " + e.getMessage(), e);
         }
     }
 
@@ -84,7 +91,8 @@ public final class ChangeLog {
     public static long stamp(Connection c) {
         try {
             String sql = isShared(c) ? PG_XMIN : "SELECT COALESCE(MAX(id), 0) FROM route_change";
-            try (PreparedStatement s = c.prepareStatement(sql); ResultSet rs = s.executeQuery()) {
+            try (PreparedStatement s = c.prepareStatement(sql);
+                    ResultSet rs = s.executeQuery()) {
                 rs.next();
                 return rs.getLong(1);
             }
@@ -105,7 +113,8 @@ public final class ChangeLog {
         List<Long> out = new ArrayList<>();
         try {
             boolean shared = isShared(c);
-            String sql = shared ? "SELECT DISTINCT route_id FROM route_change WHERE tx >= ? ORDER BY route_id"
+            String sql = shared
+                    ? "SELECT DISTINCT route_id FROM route_change WHERE tx >= ? ORDER BY route_id"
                     : "SELECT DISTINCT route_id FROM route_change WHERE id > ? AND id <= ? ORDER BY route_id";
             try (PreparedStatement s = c.prepareStatement(sql)) {
                 s.setLong(1, after);
@@ -125,7 +134,7 @@ public final class ChangeLog {
     }
 
     private static ArchiveException failure(SQLException e) {
-        return new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the archive's change log: "
-                + e.getMessage(), e);
+        return new ArchiveException(
+                ArchiveException.Problem.DAMAGED, "Cannot read the archive's change log: " + e.getMessage(), e);
     }
 }

@@ -12,8 +12,7 @@ import org.hibernate.jpa.HibernatePersistenceConfiguration;
  */
 final class OrmBootstrap {
 
-    private OrmBootstrap() {
-    }
+    private OrmBootstrap() {}
 
     static SessionFactory build(DataSource ds, boolean postgres) {
         return configuration(ds, "none", postgres).createEntityManagerFactory();
@@ -39,7 +38,8 @@ final class OrmBootstrap {
 
     /** Boots Hibernate and validates the mapping against the schema the migrations built. */
     static SessionFactory buildValidating(DataSource ds, boolean postgres) {
-        return configuration(ds, "validate", postgres).property(JdbcSettings.ALLOW_METADATA_ON_BOOT, "true")
+        return configuration(ds, "validate", postgres)
+                .property(JdbcSettings.ALLOW_METADATA_ON_BOOT, "true")
                 .createEntityManagerFactory();
     }
 }

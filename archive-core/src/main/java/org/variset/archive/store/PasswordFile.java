@@ -19,8 +19,7 @@ import java.util.Set;
  */
 final class PasswordFile {
 
-    private PasswordFile() {
-    }
+    private PasswordFile() {}
 
     /** {@code PGPASSFILE} when set, else {@code ~/.pgpass}. */
     static Path location(Map<String, String> env, Path home) {
@@ -54,7 +53,9 @@ final class PasswordFile {
             if (f.size() < 5) {
                 continue;
             }
-            if (matches(f.get(0), host) && matches(f.get(1), Integer.toString(port)) && matches(f.get(2), database)
+            if (matches(f.get(0), host)
+                    && matches(f.get(1), Integer.toString(port))
+                    && matches(f.get(2), database)
                     && matches(f.get(3), user)) {
                 refuseIfShared(file);
                 return f.get(4);
@@ -71,10 +72,14 @@ final class PasswordFile {
     static List<String> fields(String line) {
         List<String> out = new ArrayList<>();
         StringBuilder b = new StringBuilder();
+        boolean escaped = false;
         for (int i = 0; i < line.length(); i++) {
             char ch = line.charAt(i);
-            if (ch == '\\' && i + 1 < line.length()) {
-                b.append(line.charAt(++i));
+            if (escaped) {
+                b.append(ch);
+                escaped = false;
+            } else if (ch == '\\' && i + 1 < line.length()) {
+                escaped = true;
             } else if (ch == ':' && out.size() < 4) {
                 out.add(b.toString());
                 b.setLength(0);

@@ -8,8 +8,7 @@ import org.variset.archive.store.ArchiveException.Problem;
 /** Runs the versioned migrations in {@code db/migration} (only when the archive is new or behind). */
 final class SchemaMigrator {
 
-    private SchemaMigrator() {
-    }
+    private SchemaMigrator() {}
 
     static void migrate(DataSource ds, Object where) {
         try {
@@ -21,9 +20,12 @@ final class SchemaMigrator {
                     .load()
                     .migrate();
         } catch (FlywayException e) {
-            throw new ArchiveException(Problem.DAMAGED, "The archive at " + (where == null ? "(memory)" : where)
-                    + " could not be brought to schema version " + SchemaVersion.LATEST + ": " + e.getMessage()
-                    + ". Nothing was changed by the failed step; restore a backup or report the message.", e);
+            throw new ArchiveException(
+                    Problem.DAMAGED,
+                    "The archive at " + (where == null ? "(memory)" : where)
+                            + " could not be brought to schema version " + SchemaVersion.LATEST + ": " + e.getMessage()
+                            + ". Nothing was changed by the failed step; restore a backup or report the message.",
+                    e);
         }
     }
 }

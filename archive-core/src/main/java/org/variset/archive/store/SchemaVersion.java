@@ -53,8 +53,8 @@ public record SchemaVersion(int version, boolean failed) {
                 ResultSet rs = s.executeQuery("SELECT info_value FROM archive_info WHERE info_key = 'identity'")) {
             return rs.next() ? rs.getString(1) : "";
         } catch (SQLException e) {
-            throw new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot read the archive's identity: "
-                    + e.getMessage(), e);
+            throw new ArchiveException(
+                    ArchiveException.Problem.DAMAGED, "Cannot read the archive's identity: " + e.getMessage(), e);
         }
     }
 

@@ -29,16 +29,21 @@ import org.variset.archive.store.ArchiveException.Problem;
  */
 public final class ArchiveTransfer {
     /** The tables copied, parents before children, each with the columns that order its rows. */
-    static final List<Table> TABLES = List.of(new Table("gym", "id", "gym_seq"), new Table("wall", "id", "wall_seq"),
-            new Table("setter", "id", "setter_seq"), new Table("reset", "id", "reset_seq"),
-            new Table("route", "id", "route_seq"), new Table("route_setter", "route_id, ord", null),
-            new Table("hold_placement", "id", "hold_seq"), new Table("gym_setting", "id", "gym_setting_seq"));
+    static final List<Table> TABLES = List.of(
+            new Table("gym", "id", "gym_seq"),
+            new Table("wall", "id", "wall_seq"),
+            new Table("setter", "id", "setter_seq"),
+            new Table("reset", "id", "reset_seq"),
+            new Table("route", "id", "route_seq"),
+            new Table("route_setter", "route_id, ord", null),
+            new Table("hold_placement", "id", "hold_seq"),
+            new Table("gym_setting", "id", "gym_setting_seq"));
+
     private static final int BATCH = 1_000;
     /** Hibernate's pooled ids take blocks of this many below each sequence value (the migrations' INCREMENT BY). */
     private static final int ID_BLOCK = 50;
 
-    private ArchiveTransfer() {
-    }
+    private ArchiveTransfer() {}
 
     /**
      * A table to copy.
@@ -47,8 +52,7 @@ public final class ArchiveTransfer {
      * @param order the columns that order its rows (its primary key)
      * @param sequence the sequence its ids come from, or null
      */
-    record Table(String name, String order, String sequence) {
-    }
+    record Table(String name, String order, String sequence) {}
 
     /**
      * One table's copy.
@@ -57,8 +61,7 @@ public final class ArchiveTransfer {
      * @param rows how many rows (the same on both sides)
      * @param sha256 the SHA-256 of its rows, in key order (the same on both sides)
      */
-    public record Copied(String table, long rows, String sha256) {
-    }
+    public record Copied(String table, long rows, String sha256) {}
 
     /**
      * Copies {@code from} into {@code to} in one transaction of {@code to}, verified before it commits (the source's
@@ -71,9 +74,12 @@ public final class ArchiveTransfer {
      */
     public static List<Copied> copy(Archive from, Archive to, BiConsumer<String, Long> progress) {
         if (from.schemaVersion().version() != to.schemaVersion().version()) {
-            throw new ArchiveException(Problem.DAMAGED, "The archives have different schema versions ("
-                    + from.schemaVersion().version() + " and " + to.schemaVersion().version() + "); open both with "
-                    + "this Variset first");
+            throw new ArchiveException(
+                    Problem.DAMAGED,
+                    "The archives have different schema versions ("
+                            + from.schemaVersion().version() + " and "
+                            + to.schemaVersion().version() + "); open both with "
+                            + "this Variset first");
         }
         List<Copied> out = new ArrayList<>();
         try (Connection target = to.dataSource().getConnection()) {
@@ -86,10 +92,14 @@ public final class ArchiveTransfer {
                     moveSequence(target, t);
                     Copied copied = digest(target, t);
                     if (!source.equals(copied)) {
-                        throw new ArchiveException(Problem.DAMAGED, "The copy of table " + t.name() + " does not "
-                                + "match its source (source " + source.rows() + " rows, SHA-256 " + source.sha256()
-                                + "; copy " + copied.rows() + " rows, SHA-256 " + copied.sha256() + "). Nothing was "
-                                + "committed to " + to.describe() + ".");
+                        throw new ArchiveException(
+                                Problem.DAMAGED,
+                                "The copy of table " + t.name() + " does not "
+                                        + "match its source (source " + source.rows() + " rows, SHA-256 "
+                                        + source.sha256()
+                                        + "; copy " + copied.rows() + " rows, SHA-256 " + copied.sha256()
+                                        + "). Nothing was "
+                                        + "committed to " + to.describe() + ".");
                     }
                     out.add(source);
                     progress.accept(t.name(), source.rows());
@@ -100,8 +110,10 @@ public final class ArchiveTransfer {
                 throw e;
             }
         } catch (SQLException e) {
-            throw new ArchiveException(Problem.DAMAGED, "Copying into " + to.describe() + " failed: " + e.getMessage()
-                    + ". Nothing was committed.", e);
+            throw new ArchiveException(
+                    Problem.DAMAGED,
+                    "Copying into " + to.describe() + " failed: " + e.getMessage() + ". Nothing was committed.",
+                    e);
         }
         checkAgain(to, out);
         return out;
@@ -118,9 +130,12 @@ public final class ArchiveTransfer {
             throw new ArchiveException(Problem.DAMAGED, "Cannot read back " + to.describe() + ": " + e.getMessage(), e);
         }
         if (!again.equals(source)) {
-            throw new ArchiveException(Problem.DAMAGED, "The archive at " + to.describe() + " was committed but does "
-                    + "not read back as the embedded archive: " + again + " against " + source + ". Drop it and run "
-                    + "migrate-to again.");
+            throw new ArchiveException(
+                    Problem.DAMAGED,
+                    "The archive at " + to.describe() + " was committed but does "
+                            + "not read back as the embedded archive: " + again + " against " + source
+                            + ". Drop it and run "
+                            + "migrate-to again.");
         }
     }
 
@@ -133,14 +148,18 @@ public final class ArchiveTransfer {
             }
         }
         if (!filled.isEmpty()) {
-            throw new ArchiveException(Problem.EXISTS, "The archive at " + where + " is not empty (" + filled
-                    .toString().replaceAll("[{}]", "") + "); migrate-to copies into an empty archive only. Use a new "
-                    + "database or schema.");
+            throw new ArchiveException(
+                    Problem.EXISTS,
+                    "The archive at " + where + " is not empty ("
+                            + filled.toString().replaceAll("[{}]", "")
+                            + "); migrate-to copies into an empty archive only. Use a new "
+                            + "database or schema.");
         }
     }
 
     private static long count(Connection c, String table) throws SQLException {
-        try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT COUNT(*) FROM " + table)) {
+        try (Statement s = c.createStatement();
+                ResultSet rs = s.executeQuery("SELECT COUNT(*) FROM " + table)) {
             rs.next();
             return rs.getLong(1);
         }
@@ -196,8 +215,8 @@ public final class ArchiveTransfer {
             return;
         }
         long max;
-        try (Statement s = target.createStatement(); ResultSet rs = s.executeQuery("SELECT COALESCE(MAX(id), 0) FROM "
-                + t.name())) {
+        try (Statement s = target.createStatement();
+                ResultSet rs = s.executeQuery("SELECT COALESCE(MAX(id), 0) FROM " + t.name())) {
             rs.next();
             max = rs.getLong(1);
         }

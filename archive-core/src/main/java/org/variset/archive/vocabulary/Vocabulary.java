@@ -27,8 +27,8 @@ public final class Vocabulary {
     private final Map<VocabularyField, Map<String, String>> spellingToTerm;
     private final Map<VocabularyField, List<String>> terms;
 
-    private Vocabulary(Map<VocabularyField, Map<String, String>> spellingToTerm,
-            Map<VocabularyField, List<String>> terms) {
+    private Vocabulary(
+            Map<VocabularyField, Map<String, String>> spellingToTerm, Map<VocabularyField, List<String>> terms) {
         this.spellingToTerm = spellingToTerm;
         this.terms = terms;
     }
@@ -126,8 +126,9 @@ public final class Vocabulary {
         return freeze(s, t);
     }
 
-    private static void read(Reader source, Map<VocabularyField, Map<String, String>> s,
-            Map<VocabularyField, List<String>> t) throws IOException {
+    private static void read(
+            Reader source, Map<VocabularyField, Map<String, String>> s, Map<VocabularyField, List<String>> t)
+            throws IOException {
         BufferedReader r = new BufferedReader(source);
         VocabularyField field = null;
         int n = 0;
@@ -164,8 +165,8 @@ public final class Vocabulary {
         }
     }
 
-    private static Vocabulary freeze(Map<VocabularyField, Map<String, String>> s,
-            Map<VocabularyField, List<String>> t) {
+    private static Vocabulary freeze(
+            Map<VocabularyField, Map<String, String>> s, Map<VocabularyField, List<String>> t) {
         Map<VocabularyField, List<String>> frozen = new EnumMap<>(VocabularyField.class);
         t.forEach((f, list) -> frozen.put(f, List.copyOf(list)));
         return new Vocabulary(s, frozen);

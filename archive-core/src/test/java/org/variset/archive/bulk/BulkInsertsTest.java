@@ -1,6 +1,5 @@
 package org.variset.archive.bulk;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -27,6 +26,7 @@ import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveQueries;
+import org.variset.archive.testing.TestArchives;
 
 /** Rows written by JDBC batches read back through Hibernate exactly, and share the id sequences with it safely. */
 class BulkInsertsTest {
@@ -49,21 +49,34 @@ class BulkInsertsTest {
     void routesWrittenInBatchesReadBackAsTheEntitiesTheyCameFrom() {
         List<HoldPlacement.Spec> specs = List.of(
                 new HoldPlacement.Spec(1, HoldRole.START, "jug", HoldSize.L, List.of(0.0), "J12", 1.2, 0.8, Map.of()),
-                new HoldPlacement.Spec(2, HoldRole.HAND, "pinch", HoldSize.M, List.of(90.0, 270.0), "P7", 1.9, 1.85,
+                new HoldPlacement.Spec(
+                        2,
+                        HoldRole.HAND,
+                        "pinch",
+                        HoldSize.M,
+                        List.of(90.0, 270.0),
+                        "P7",
+                        1.9,
+                        1.85,
                         Map.of("colour", "teal")),
-                new HoldPlacement.Spec(null, HoldRole.FOOT, "foot-chip", null, List.of(), null, null, null,
-                        Map.of()));
+                new HoldPlacement.Spec(null, HoldRole.FOOT, "foot-chip", null, List.of(), null, null, null, Map.of()));
         archive.inTransaction(s -> {
             Wall wall = wall(s);
             Reset reset = new Reset(wall, "Cave 2026-05-04", DAY);
-            Route route = new Route(reset, "  Red 9 ", DAY, Discipline.BOULDER,
+            Route route = new Route(
+                    reset,
+                    "  Red 9 ",
+                    DAY,
+                    Discipline.BOULDER,
                     GradeReader.standard().read("6B", Discipline.BOULDER, null, Set.of()));
             route.setMoves(List.of("gaston", "heel hook"));
             route.setMoveDifficulty(List.of(2, 7));
             route.setNotes("   ");
             route.setExtraFields(Map.of("tag", "R-9"));
             Long existing = s.createSelectionQuery("from Setter where name = :n", Setter.class)
-                    .setParameter("n", "Inês Varga").getSingleResult().id();
+                    .setParameter("n", "Inês Varga")
+                    .getSingleResult()
+                    .id();
             s.doWork(c -> {
                 try (BulkInserts bulk = new BulkInserts(c)) {
                     long setter = bulk.setter(new Setter("Rui Anker"));
@@ -103,7 +116,11 @@ class BulkInsertsTest {
                 Reset viaHibernate = new Reset(wall, "Hibernate " + r, DAY.plusDays(r));
                 s.persist(viaHibernate);
                 for (int i = 0; i < 60; i++) {
-                    Route route = new Route(viaHibernate, "H" + r + "-" + i, DAY, Discipline.BOULDER,
+                    Route route = new Route(
+                            viaHibernate,
+                            "H" + r + "-" + i,
+                            DAY,
+                            Discipline.BOULDER,
                             GradeReader.standard().read("V3", Discipline.BOULDER, null, Set.of()));
                     s.persist(route);
                     s.flush();
@@ -111,9 +128,14 @@ class BulkInsertsTest {
                 }
                 s.doWork(c -> {
                     try (BulkInserts bulk = new BulkInserts(c)) {
-                        long resetId = bulk.reset(new Reset(wall, "Batch " + r, DAY), wall.gym().id(), wall.id());
+                        long resetId = bulk.reset(
+                                new Reset(wall, "Batch " + r, DAY), wall.gym().id(), wall.id());
                         for (int i = 0; i < 60; i++) {
-                            Route route = new Route(viaHibernate, "B" + r + "-" + i, DAY, Discipline.BOULDER,
+                            Route route = new Route(
+                                    viaHibernate,
+                                    "B" + r + "-" + i,
+                                    DAY,
+                                    Discipline.BOULDER,
                                     GradeReader.standard().read("V3", Discipline.BOULDER, null, Set.of()));
                             ids.add(bulk.route(route, wall.gym().id(), wall.id(), resetId, List.of()));
                         }

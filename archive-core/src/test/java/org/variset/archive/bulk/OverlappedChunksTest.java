@@ -22,7 +22,8 @@ class OverlappedChunksTest {
                 lane.submit(IntStream.range(i * 10, i * 10 + 10).boxed().toList());
             }
             lane.finish();
-            assertThat(seen).containsExactlyElementsOf(IntStream.range(0, 500).boxed().toList());
+            assertThat(seen)
+                    .containsExactlyElementsOf(IntStream.range(0, 500).boxed().toList());
         }
         assertThat(threads).hasSize(50).containsOnly("test-worker");
     }
@@ -36,7 +37,9 @@ class OverlappedChunksTest {
         })) {
             lane.submit(List.of(1, 2));
             lane.submit(List.of(3));
-            assertThatThrownBy(lane::finish).isInstanceOf(IllegalArgumentException.class).hasMessage("chunk with 3");
+            assertThatThrownBy(lane::finish)
+                    .isInstanceOf(IllegalArgumentException.class)
+                    .hasMessage("chunk with 3");
         }
     }
 }

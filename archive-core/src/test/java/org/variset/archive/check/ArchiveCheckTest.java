@@ -1,6 +1,5 @@
 package org.variset.archive.check;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
@@ -12,6 +11,7 @@ import org.variset.archive.search.IndexProgress;
 import org.variset.archive.search.SearchIndex;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ChangeLog;
+import org.variset.archive.testing.TestArchives;
 
 class ArchiveCheckTest {
     private Archive archive;
@@ -23,7 +23,9 @@ class ArchiveCheckTest {
         archive.inTransaction(s -> {
             ResetFixture.storeFullReset(s);
             s.flush();
-            ChangeLog.routes(s, s.createSelectionQuery("select id from Route", Long.class).getResultList());
+            ChangeLog.routes(
+                    s,
+                    s.createSelectionQuery("select id from Route", Long.class).getResultList());
         });
         index = SearchIndex.inMemory();
         index.sync(archive.connection(), IndexProgress.NONE);
@@ -36,22 +38,32 @@ class ArchiveCheckTest {
     }
 
     private List<String> problems() {
-        return ArchiveCheck.run(archive, index).items().stream().filter(i -> !i.ok())
-                .map(i -> i.part() + ": " + i.name() + ": " + i.detail()).toList();
+        return ArchiveCheck.run(archive, index).items().stream()
+                .filter(i -> !i.ok())
+                .map(i -> i.part() + ": " + i.name() + ": " + i.detail())
+                .toList();
     }
 
     @Test
     void findsAFreshArchiveHealthy() {
         CheckReport r = ArchiveCheck.run(archive, index);
         assertThat(r.healthy()).as(problems().toString()).isTrue();
-        assertThat(r.items()).extracting(CheckReport.Item::name).contains("schema version", "holds without their route",
-                "Lucene CheckIndex", "change stamp", "one document per route");
+        assertThat(r.items())
+                .extracting(CheckReport.Item::name)
+                .contains(
+                        "schema version",
+                        "holds without their route",
+                        "Lucene CheckIndex",
+                        "change stamp",
+                        "one document per route");
     }
 
     @Test
     void findsAHoldWhoseRouteIsGone() throws Exception {
-        TestArchives.withoutForeignKeys(archive.connection(), "INSERT INTO hold_placement (id, route_id, ordinal,"
-                + " role, hold_type) VALUES (999, 424242, 0, 'HAND', 'jug')");
+        TestArchives.withoutForeignKeys(
+                archive.connection(),
+                "INSERT INTO hold_placement (id, route_id, ordinal,"
+                        + " role, hold_type) VALUES (999, 424242, 0, 'HAND', 'jug')");
         assertThat(problems()).containsExactly("database: holds without their route: 1 found");
         assertThat(ArchiveCheck.run(archive, index).databaseHealthy()).isFalse();
     }
@@ -61,17 +73,21 @@ class ArchiveCheckTest {
         archive.inTransaction(s -> {
             Long id = s.createSelectionQuery("select id from Route where label = 'Blue 3'", Long.class)
                     .getSingleResult();
-            s.createNativeMutationQuery("UPDATE route SET label = 'Blue 33' WHERE id = " + id).executeUpdate();
+            s.createNativeMutationQuery("UPDATE route SET label = 'Blue 33' WHERE id = " + id)
+                    .executeUpdate();
             ChangeLog.routes(s, List.of(id));
         });
-        TestArchives.withoutForeignKeys(archive.connection(), "INSERT INTO route (id, gym_id, wall_id, reset_id,"
-                + " label, set_on, discipline, grade_text, grade_scale, grade_ircra) SELECT 777, gym_id, wall_id,"
-                + " reset_id, 'Ghost', set_on, discipline, grade_text, grade_scale, grade_ircra FROM route"
-                + " WHERE label = 'Green 1'");
-        assertThat(problems()).anyMatch(p -> TestArchives.onPostgres()
-                ? p.startsWith("index: change stamp: index at transaction ") && p.endsWith("; 1 routes changed since"
-                        + " (behind: the next search catches up)")
-                : p.startsWith("index: change stamp: index 2, database 3 (behind"))
+        TestArchives.withoutForeignKeys(
+                archive.connection(),
+                "INSERT INTO route (id, gym_id, wall_id, reset_id,"
+                        + " label, set_on, discipline, grade_text, grade_scale, grade_ircra) SELECT 777, gym_id, wall_id,"
+                        + " reset_id, 'Ghost', set_on, discipline, grade_text, grade_scale, grade_ircra FROM route"
+                        + " WHERE label = 'Green 1'");
+        assertThat(problems())
+                .anyMatch(p -> TestArchives.onPostgres()
+                        ? p.startsWith("index: change stamp: index at transaction ")
+                                && p.endsWith("; 1 routes changed since" + " (behind: the next search catches up)")
+                        : p.startsWith("index: change stamp: index 2, database 3 (behind"))
                 .anyMatch(p -> p.startsWith("index: one document per route: 2 documents, 3 routes; 1 routes missing"));
         assertThat(ArchiveCheck.run(archive, index).databaseHealthy()).isTrue();
         index.rebuild(archive.connection(), IndexProgress.NONE, "repair");

@@ -17,7 +17,10 @@ class BandSetTest {
     @CsvSource({"6A, V2", "6B, V3", "6C, V5", "6C+, V6", "7B+, V9", "V0-, V0", "V0+, V0", "V17, V16"})
     void placesBoulderGradesInTheBandsOfTheSpec(String grade, String band) {
         double v = reader.read(grade, Discipline.BOULDER, null, Set.of()).ircra();
-        assertThat(BandSet.defaults(Discipline.BOULDER).bandOf(v)).get().extracting(Band::label).isEqualTo(band);
+        assertThat(BandSet.defaults(Discipline.BOULDER).bandOf(v))
+                .get()
+                .extracting(Band::label)
+                .isEqualTo(band);
     }
 
     /** docs/spec/grades.md: "A UIAA 7 (levels 13 and 14, value 13.5) falls in 6b+"; 6a is [10.5, 11.5). */

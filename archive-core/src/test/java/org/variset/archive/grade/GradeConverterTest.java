@@ -11,7 +11,8 @@ class GradeConverterTest {
     /** Draper et al. (2015), comparison table, row 17: 5.11d = 7a. */
     @Test
     void convertsYdsToFrenchExactly() {
-        assertThat(converter.equivalents(reader.read("5.11d"), GradeScale.FRENCH)).containsExactly("7a");
+        assertThat(converter.equivalents(reader.read("5.11d"), GradeScale.FRENCH))
+                .containsExactly("7a");
     }
 
     /** IRCRA table, secondary transcription: V2 spans rows 15-16, where Font has 5+, 6A and 6A+. */

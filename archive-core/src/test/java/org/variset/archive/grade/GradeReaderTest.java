@@ -81,10 +81,12 @@ class GradeReaderTest {
             assertThatThrownBy(() -> read("5+", Discipline.ROPE))
                     .isInstanceOfSatisfying(GradeException.class, e -> {
                         assertThat(e.ambiguous()).isTrue();
-                        assertThat(e.readings()).extracting(Grade::scale)
+                        assertThat(e.readings())
+                                .extracting(Grade::scale)
                                 .containsExactlyInAnyOrder(GradeScale.FRENCH, GradeScale.UIAA);
                     })
-                    .hasMessageContaining("French 5+").hasMessageContaining("UIAA 5+");
+                    .hasMessageContaining("French 5+")
+                    .hasMessageContaining("UIAA 5+");
         }
 
         @Test
@@ -104,7 +106,8 @@ class GradeReaderTest {
         void readsIrcraNumbersOnlyWhenNamed() {
             assertThatThrownBy(() -> read("25", Discipline.ROPE)).isInstanceOf(GradeException.class);
             assertThatThrownBy(() -> read("17", Discipline.ROPE)).isInstanceOf(GradeException.class);
-            assertThat(reader.read("17.5", null, GradeScale.IRCRA, Set.of()).ircra()).isEqualTo(17.5);
+            assertThat(reader.read("17.5", null, GradeScale.IRCRA, Set.of()).ircra())
+                    .isEqualTo(17.5);
         }
 
         @Test
@@ -164,7 +167,8 @@ class GradeReaderTest {
         @ParameterizedTest
         @CsvSource({"banana", "Vx", "V40", "5.", "6d", "5.9a", "XIX", "'   '", "V3/", "V4/3"})
         void rejectsTextThatIsNoGradeSayingWhatAGradeLooksLike(String text) {
-            assertThatThrownBy(() -> read(text, null)).isInstanceOf(GradeException.class)
+            assertThatThrownBy(() -> read(text, null))
+                    .isInstanceOf(GradeException.class)
                     .hasMessageContaining("expected a grade such as V4");
         }
 

@@ -1,6 +1,5 @@
 package org.variset.archive.read;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -16,6 +15,7 @@ import org.variset.archive.grade.Discipline;
 import org.variset.archive.route.HoldRole;
 import org.variset.archive.route.HoldSize;
 import org.variset.archive.store.Archive;
+import org.variset.archive.testing.TestArchives;
 
 class RouteReaderTest {
     private Archive archive;
@@ -55,7 +55,8 @@ class RouteReaderTest {
         assertThat(pinch.size()).isEqualTo(HoldSize.M);
         assertThat(pinch.grips()).containsExactly(90.0, 270.0);
         assertThat(pinch.holdRef()).isEqualTo("P7");
-        assertThat(blue.handHoldsInOrder()).extracting(HoldRecord::role)
+        assertThat(blue.handHoldsInOrder())
+                .extracting(HoldRecord::role)
                 .containsExactly(HoldRole.START, HoldRole.HAND, HoldRole.FINISH);
     }
 
@@ -72,10 +73,12 @@ class RouteReaderTest {
         @Test
         void selectsTheRoutesStandingOnADay() {
             // Green 1 is up from 2026-03-03 until it came down on 2026-04-06 (that day it is no longer up).
-            assertThat(labels(RouteFilter.all().standingOn(LocalDate.of(2026, 3, 2)))).containsExactly("Blue 3");
+            assertThat(labels(RouteFilter.all().standingOn(LocalDate.of(2026, 3, 2))))
+                    .containsExactly("Blue 3");
             assertThat(labels(RouteFilter.all().standingOn(LocalDate.of(2026, 4, 5))))
                     .containsExactly("Blue 3", "Green 1");
-            assertThat(labels(RouteFilter.all().standingOn(LocalDate.of(2026, 4, 6)))).containsExactly("Blue 3");
+            assertThat(labels(RouteFilter.all().standingOn(LocalDate.of(2026, 4, 6))))
+                    .containsExactly("Blue 3");
         }
 
         @Test
@@ -87,14 +90,17 @@ class RouteReaderTest {
             GymRecord gym = catalog.gym(null);
             ResetRecord reset = catalog.reset(gym, "Cave 2026-03-02");
             assertThat(labels(RouteFilter.reset(reset.id()))).containsExactly("Blue 3", "Green 1");
-            assertThat(labels(RouteFilter.gym(gym.id()).withoutReset(reset.id()))).isEmpty();
+            assertThat(labels(RouteFilter.gym(gym.id()).withoutReset(reset.id())))
+                    .isEmpty();
         }
 
         @Test
         void readsInChunksOfAscendingId() {
             List<List<String>> chunks = new ArrayList<>();
-            long n = reader.forEachChunk(RouteFilter.all(), 1, c -> chunks.add(c.stream()
-                    .map(RouteRecord::label).toList()));
+            long n = reader.forEachChunk(
+                    RouteFilter.all(),
+                    1,
+                    c -> chunks.add(c.stream().map(RouteRecord::label).toList()));
             assertThat(n).isEqualTo(2);
             assertThat(chunks).containsExactly(List.of("Blue 3"), List.of("Green 1"));
         }
@@ -119,9 +125,12 @@ class RouteReaderTest {
         @Test
         void findsTheLatestResetOnOrBeforeADay() {
             WallRecord wall = catalog.wall(catalog.gym(null), "Cave Ôrla");
-            assertThat(catalog.latestResetOnOrBefore(wall.id(), LocalDate.of(2026, 3, 1))).isEmpty();
-            assertThat(catalog.latestResetOnOrBefore(wall.id(), LocalDate.of(2026, 5, 1))).get()
-                    .extracting(ResetRecord::label).isEqualTo("Cave 2026-03-02");
+            assertThat(catalog.latestResetOnOrBefore(wall.id(), LocalDate.of(2026, 3, 1)))
+                    .isEmpty();
+            assertThat(catalog.latestResetOnOrBefore(wall.id(), LocalDate.of(2026, 5, 1)))
+                    .get()
+                    .extracting(ResetRecord::label)
+                    .isEqualTo("Cave 2026-03-02");
             assertThat(wall.cycleDays()).isEqualTo(28);
         }
     }

@@ -11,8 +11,21 @@ class GripDirectionTest {
 
     /** docs/spec/interchange.md, holds.csv "grip": degrees, clock positions (30 x (H mod 12) + 0.5 x MM) and words. */
     @ParameterizedTest(name = "{0} reads as {1} degrees")
-    @CsvSource({"0, 0", "90, 90", "360, 0", "37.5, 37.5", "12:00, 0", "4:30, 135", "1:30, 45", "9:00, 270",
-        "up, 0", "Up-Right, 45", "down, 180", "left, 270", "up-left, 315"})
+    @CsvSource({
+        "0, 0",
+        "90, 90",
+        "360, 0",
+        "37.5, 37.5",
+        "12:00, 0",
+        "4:30, 135",
+        "1:30, 45",
+        "9:00, 270",
+        "up, 0",
+        "Up-Right, 45",
+        "down, 180",
+        "left, 270",
+        "up-left, 315"
+    })
     void readsEveryNotationOfTheSpec(String text, double degrees) {
         assertThat(GripDirection.parse(text)).isEqualTo(degrees);
     }
@@ -20,7 +33,8 @@ class GripDirectionTest {
     @ParameterizedTest
     @ValueSource(strings = {"-15", "361", "13:00", "4:75", "upwards", "", "0x10"})
     void refusesWhatIsNoDirectionSayingWhatWasExpected(String text) {
-        assertThatThrownBy(() -> GripDirection.parse(text)).isInstanceOf(IllegalArgumentException.class)
+        assertThatThrownBy(() -> GripDirection.parse(text))
+                .isInstanceOf(IllegalArgumentException.class)
                 .hasMessageContaining("'" + text + "'");
     }
 

@@ -16,11 +16,56 @@ import org.variset.archive.vocabulary.Vocabulary;
  */
 class QueryFuzzTest {
     private static final int INPUTS = Integer.getInteger("variset.fuzz.inputs", 5_000);
-    private static final String[] PARTS = {"move:", "hold:", "grade:", "set:", "standing:", "angle:", "grip:", "gym:",
-        "wall:", "notes:", "band:", "size:", "discipline:", "colr:", "V3", "V5..V3", "6a..6b+", "5.10a", "..",
-        "2026-03", "2026-02-30", "2026-01..2026-06", "crimp@90", "pinch@left", "@", "heel hook", "\"", "(", ")", "AND",
-        "OR", "NOT", "-", "*", "dyno", "40", "-15..0", ":", "\u00e9", "\uD83E\uDDD7", "\t", "  ", "'", "\\", "5+",
-        "grade:V4.", "1:30", "x".repeat(300)};
+    private static final String[] PARTS = {
+        "move:",
+        "hold:",
+        "grade:",
+        "set:",
+        "standing:",
+        "angle:",
+        "grip:",
+        "gym:",
+        "wall:",
+        "notes:",
+        "band:",
+        "size:",
+        "discipline:",
+        "colr:",
+        "V3",
+        "V5..V3",
+        "6a..6b+",
+        "5.10a",
+        "..",
+        "2026-03",
+        "2026-02-30",
+        "2026-01..2026-06",
+        "crimp@90",
+        "pinch@left",
+        "@",
+        "heel hook",
+        "\"",
+        "(",
+        ")",
+        "AND",
+        "OR",
+        "NOT",
+        "-",
+        "*",
+        "dyno",
+        "40",
+        "-15..0",
+        ":",
+        "\u00e9",
+        "\uD83E\uDDD7",
+        "\t",
+        "  ",
+        "'",
+        "\\",
+        "5+",
+        "grade:V4.",
+        "1:30",
+        "x".repeat(300)
+    };
 
     @Test
     void everyQueryReadsOrGivesAPositionedError() {
@@ -48,8 +93,8 @@ class QueryFuzzTest {
                 crashes.add(query.replace("\n", "\\n") + " -> " + e);
             }
         }
-        System.out.println("QueryFuzzTest: " + INPUTS + " queries, " + errors + " syntax errors, " + crashes.size()
-                + " crashes");
+        System.out.println(
+                "QueryFuzzTest: " + INPUTS + " queries, " + errors + " syntax errors, " + crashes.size() + " crashes");
         assertThat(crashes).isEmpty();
     }
 }

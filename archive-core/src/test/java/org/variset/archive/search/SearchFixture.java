@@ -33,11 +33,9 @@ import org.variset.archive.store.ChangeLog;
  * </pre>
  */
 final class SearchFixture {
-    private SearchFixture() {
-    }
+    private SearchFixture() {}
 
     static void store(Session s) {
-        GradeReader g = GradeReader.standard();
         Gym birch = new Gym("Birchfield", ZoneId.of("UTC"));
         Gym quay = new Gym("Quayside", ZoneId.of("UTC"));
         s.persist(birch);
@@ -54,22 +52,20 @@ final class SearchFixture {
         Reset mar = reset(s, cave, "Cave Mar", "2026-03-14");
         Reset tow = reset(s, tower, "Tower Jan", "2026-01-20");
         Reset q = reset(s, qcave, "Quay Feb", "2026-02-01");
-        route(s, jan, "C1", "V3", Discipline.BOULDER, "2026-01-10", "2026-02-07", List.of(ada), "red",
-                List.of("heel hook", "dyno"), List.of("power"), null, "crimp@0 pinch@90 jug@0", g);
-        route(s, feb, "C2", "V5", Discipline.BOULDER, "2026-02-07", null, List.of(ada, bo), "blue",
-                List.of("toe hook", "gaston"), List.of("slopey"), "slopey top out", "sloper@180 crimp@0", g);
-        route(s, feb, "C3", "6A", Discipline.BOULDER, "2026-02-07", null, List.of(bo), "green",
-                List.of("heel hook", "mantle"), List.of("technical"), null, "pinch@270 volume", g);
-        route(s, mar, "C4", "V8", Discipline.BOULDER, "2026-03-14", null, List.of(cy), "black",
-                List.of("campus", "dyno"), List.of("power"), null, "crimp@45 pocket@0", g);
-        route(s, tow, "T1", "6a", Discipline.ROPE, "2026-01-20", null, List.of(cy), "teal",
-                List.of("layback", "stem"), List.of("endurance"), null, "jug@0 edge@90", g);
-        route(s, tow, "T2", "5.11b", Discipline.ROPE, "2026-01-20", null, List.of(ada), "navy",
-                List.of("drop knee"), List.of(), null, "crimp@0", g);
-        route(s, q, "Q1", "V4", Discipline.BOULDER, "2026-02-01", null, List.of(dee), "red",
-                List.of("heel hook", "dyno"), List.of("power"), null, "crimp@0 pinch@90", g);
+        route(s, jan, List.of(ada), "C1|V3|2026-01-10|2026-02-07|red|heel hook;dyno|power||crimp@0 pinch@90 jug@0");
+        route(
+                s,
+                feb,
+                List.of(ada, bo),
+                "C2|V5|2026-02-07||blue|toe hook;gaston|slopey|slopey top out|sloper@180 crimp@0");
+        route(s, feb, List.of(bo), "C3|6A|2026-02-07||green|heel hook;mantle|technical||pinch@270 volume");
+        route(s, mar, List.of(cy), "C4|V8|2026-03-14||black|campus;dyno|power||crimp@45 pocket@0");
+        route(s, tow, List.of(cy), "T1|6a|2026-01-20||teal|layback;stem|endurance||jug@0 edge@90");
+        route(s, tow, List.of(ada), "T2|5.11b|2026-01-20||navy|drop knee|||crimp@0");
+        route(s, q, List.of(dee), "Q1|V4|2026-02-01||red|heel hook;dyno|power||crimp@0 pinch@90");
         s.flush();
-        ChangeLog.routes(s, s.createSelectionQuery("select id from Route", Long.class).getResultList());
+        ChangeLog.routes(
+                s, s.createSelectionQuery("select id from Route", Long.class).getResultList());
     }
 
     private static Wall wall(Session s, Gym gym, String name, WallDiscipline d, double angle) {
@@ -91,23 +87,28 @@ final class SearchFixture {
         return r;
     }
 
-    @SuppressWarnings("checkstyle:ParameterNumber")
-    private static void route(Session s, Reset reset, String label, String grade, Discipline d, String set,
-            String stripped, List<Setter> setters, String color, List<String> moves, List<String> styles,
-            String notes, String holds, GradeReader g) {
-        Route r = new Route(reset, label, LocalDate.parse(set), d, g.read(grade, d, null, Set.of()));
-        r.setStrippedOn(stripped == null ? null : LocalDate.parse(stripped));
+    /**
+     * A route from one row: {@code label|grade|set_on|stripped_on|color|moves|styles|notes|holds}, lists separated by
+     * {@code ;}, holds as {@code type@degrees} separated by spaces; the discipline is the reset's wall's.
+     */
+    private static void route(Session s, Reset reset, List<Setter> setters, String row) {
+        String[] f = row.split("\\|", -1);
+        Discipline d = reset.wall().discipline() == WallDiscipline.ROPE ? Discipline.ROPE : Discipline.BOULDER;
+        Route r = new Route(
+                reset, f[0], LocalDate.parse(f[2]), d, GradeReader.standard().read(f[1], d, null, Set.of()));
+        r.setStrippedOn(f[3].isEmpty() ? null : LocalDate.parse(f[3]));
         r.setSetters(setters);
-        r.setColor(color);
-        r.setMoves(moves);
-        r.setStyles(styles);
-        r.setNotes(notes);
+        r.setColor(f[4]);
+        r.setMoves(f[5].isEmpty() ? List.of() : List.of(f[5].split(";")));
+        r.setStyles(f[6].isEmpty() ? List.of() : List.of(f[6].split(";")));
+        r.setNotes(f[7].isEmpty() ? null : f[7]);
+        String holds = f[8];
         int seq = 1;
         for (String h : holds.split(" ")) {
             String[] td = h.split("@");
             List<Double> grips = td.length == 1 ? List.of() : List.of(Double.parseDouble(td[1]));
-            r.addHold(new HoldPlacement.Spec(seq++, HoldRole.HAND, td[0], HoldSize.M, grips, null, null, null,
-                    Map.of()));
+            r.addHold(
+                    new HoldPlacement.Spec(seq++, HoldRole.HAND, td[0], HoldSize.M, grips, null, null, null, Map.of()));
         }
         s.persist(r);
         r.holds().forEach(s::persist);

@@ -1,6 +1,5 @@
 package org.variset.archive.search;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -23,6 +22,7 @@ import org.variset.archive.read.RouteRecord;
 import org.variset.archive.route.Route;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ChangeLog;
+import org.variset.archive.testing.TestArchives;
 import org.variset.archive.vocabulary.Vocabulary;
 
 class SearchIndexTest {
@@ -35,10 +35,12 @@ class SearchIndexTest {
         archive = TestArchives.fresh();
         archive.inTransaction(SearchFixture::store);
         index = SearchIndex.inMemory();
-        assertThat(index.sync(archive.connection(), IndexProgress.NONE).action()).isEqualTo(IndexSync.Action.REBUILT);
+        assertThat(index.sync(archive.connection(), IndexProgress.NONE).action())
+                .isEqualTo(IndexSync.Action.REBUILT);
         names = new java.util.HashMap<>();
-        new RouteReader(archive.connection()).read(RouteFilter.all()).forEach(r -> names.put(r.id(),
-                r.gym().charAt(0) + ":" + r.label()));
+        new RouteReader(archive.connection())
+                .read(RouteFilter.all())
+                .forEach(r -> names.put(r.id(), r.gym().charAt(0) + ":" + r.label()));
     }
 
     @AfterEach
@@ -52,26 +54,53 @@ class SearchIndexTest {
     }
 
     private List<String> find(SearchRequest r) {
-        return index.search(r, Vocabulary.defaults()).hits().stream().map(h -> names.get(h.routeId())).toList();
+        return index.search(r, Vocabulary.defaults()).hits().stream()
+                .map(h -> names.get(h.routeId()))
+                .toList();
     }
 
     @Nested
     class Fields {
         @ParameterizedTest(name = "{0}")
-        @CsvSource(delimiter = '|', value = {
-            "gym:quayside|Q:Q1", "gym:\"Birchfield\" wall:tower|B:T1,B:T2", "route:C2|B:C2", "label:c2|B:C2",
-            "color:red|B:C1,Q:Q1", "colour:RED|B:C1,Q:Q1", "setter:\"bo renner\"|B:C3,B:C2",
-            "discipline:rope|B:T1,B:T2", "band:V5|B:C2", "size:m discipline:rope|B:T1,B:T2",
-            "style:slopey|B:C2", "style:endurance|B:T1", "notes:top|B:C2", "wall:cav*|B:C3,B:C1,Q:Q1,B:C2,B:C4",
-            "angle:30..40|B:C3,B:C1,B:C2,B:C4", "angle:..10|B:T1,B:T2"})
+        @CsvSource(
+                delimiter = '|',
+                value = {
+                    "gym:quayside|Q:Q1",
+                    "gym:\"Birchfield\" wall:tower|B:T1,B:T2",
+                    "route:C2|B:C2",
+                    "label:c2|B:C2",
+                    "color:red|B:C1,Q:Q1",
+                    "colour:RED|B:C1,Q:Q1",
+                    "setter:\"bo renner\"|B:C3,B:C2",
+                    "discipline:rope|B:T1,B:T2",
+                    "band:V5|B:C2",
+                    "size:m discipline:rope|B:T1,B:T2",
+                    "style:slopey|B:C2",
+                    "style:endurance|B:T1",
+                    "notes:top|B:C2",
+                    "wall:cav*|B:C3,B:C1,Q:Q1,B:C2,B:C4",
+                    "angle:30..40|B:C3,B:C1,B:C2,B:C4",
+                    "angle:..10|B:T1,B:T2"
+                })
         void findRoutesByEachField(String query, String expected) {
             assertThat(find(query)).containsExactly(expected.split(","));
         }
 
         @ParameterizedTest(name = "{0}")
-        @CsvSource(delimiter = '|', value = {"move:\"heel hook\"", "move:heel-hook", "move:heelhook",
-            "move:\"heel hooks\"", "move:\"Heel Hook\"", "\"heel hook\"", "heel hook", "heelhook", "heel-hook",
-            "heel hooks"})
+        @CsvSource(
+                delimiter = '|',
+                value = {
+                    "move:\"heel hook\"",
+                    "move:heel-hook",
+                    "move:heelhook",
+                    "move:\"heel hooks\"",
+                    "move:\"Heel Hook\"",
+                    "\"heel hook\"",
+                    "heel hook",
+                    "heelhook",
+                    "heel-hook",
+                    "heel hooks"
+                })
         void matchEverySpellingOfAMove(String query) {
             assertThat(find(query)).containsExactlyInAnyOrder("B:C1", "B:C3", "Q:Q1");
         }
@@ -88,8 +117,12 @@ class SearchIndexTest {
         @Test
         void followAGymsOwnSynonyms() {
             Vocabulary gyms = Vocabulary.defaults().extendedWith("[moves]\nheel hook: hooky heel\n");
-            assertThat(index.search(new SearchRequest("move:\"hooky heel\"", null, null, null, SearchOrder.GRADE, 10,
-                    false), gyms).total()).isEqualTo(3);
+            assertThat(index.search(
+                                    new SearchRequest(
+                                            "move:\"hooky heel\"", null, null, null, SearchOrder.GRADE, 10, false),
+                                    gyms)
+                            .total())
+                    .isEqualTo(3);
         }
 
         @Test
@@ -147,8 +180,9 @@ class SearchIndexTest {
         void findWhatWasUpOnADay() {
             assertThat(find("standing:2026-02-06 wall:cave gym:birchfield")).containsExactly("B:C1");
             assertThat(find("standing:2026-02-07 wall:cave gym:birchfield")).containsExactly("B:C3", "B:C2");
-            assertThat(find(new SearchRequest("dyno", "Birchfield", null, LocalDate.parse("2026-03-20"),
-                    SearchOrder.GRADE, 10, false))).containsExactly("B:C4");
+            assertThat(find(new SearchRequest(
+                            "dyno", "Birchfield", null, LocalDate.parse("2026-03-20"), SearchOrder.GRADE, 10, false)))
+                    .containsExactly("B:C4");
             assertThat(find("standing:2026-02 gym:birchfield wall:cave")).containsExactly("B:C3", "B:C1", "B:C2");
         }
     }
@@ -167,25 +201,27 @@ class SearchIndexTest {
 
         @Test
         void ordersNewestFirstOrByGrade() {
-            assertThat(find(new SearchRequest("gym:birchfield wall:cave", null, null, null, SearchOrder.NEWEST, 10,
-                    false))).containsExactly("B:C4", "B:C2", "B:C3", "B:C1");
+            assertThat(find(new SearchRequest(
+                            "gym:birchfield wall:cave", null, null, null, SearchOrder.NEWEST, 10, false)))
+                    .containsExactly("B:C4", "B:C2", "B:C3", "B:C1");
             assertThat(find(new SearchRequest("wall:cave", null, null, null, SearchOrder.GRADE, 2, false)))
                     .containsExactly("B:C3", "B:C1");
         }
 
         @Test
         void countsTheMatchingRoutesByFacet() {
-            SearchHits h = index.search(new SearchRequest("gym:birchfield", null, null, null, SearchOrder.RELEVANCE,
-                    1, true), Vocabulary.defaults());
+            SearchHits h = index.search(
+                    new SearchRequest("gym:birchfield", null, null, null, SearchOrder.RELEVANCE, 1, true),
+                    Vocabulary.defaults());
             assertThat(h.total()).isEqualTo(6);
             assertThat(h.hits()).hasSize(1);
-            assertThat(h.facets().get("move")).contains(new SearchHits.FacetCount("dyno", 2),
-                    new SearchHits.FacetCount("heel hook", 2));
-            assertThat(h.facets().get("wall")).containsExactly(new SearchHits.FacetCount("Cave", 4),
-                    new SearchHits.FacetCount("Tower", 2));
+            assertThat(h.facets().get("move"))
+                    .contains(new SearchHits.FacetCount("dyno", 2), new SearchHits.FacetCount("heel hook", 2));
+            assertThat(h.facets().get("wall"))
+                    .containsExactly(new SearchHits.FacetCount("Cave", 4), new SearchHits.FacetCount("Tower", 2));
             assertThat(h.facets().get("grip")).contains(new SearchHits.FacetCount("up", 5));
-            assertThat(h.facets().get("band")).contains(new SearchHits.FacetCount("V3", 1),
-                    new SearchHits.FacetCount("6a", 1));
+            assertThat(h.facets().get("band"))
+                    .contains(new SearchHits.FacetCount("V3", 1), new SearchHits.FacetCount("6a", 1));
             assertThat(h.facets().get("setter")).contains(new SearchHits.FacetCount("Ada Quill", 3));
         }
     }
@@ -193,15 +229,24 @@ class SearchIndexTest {
     @Nested
     class BadQueries {
         @ParameterizedTest(name = "{0}")
-        @CsvSource(delimiter = '|', value = {
-            "move:dyno grade:|17|expected a value after 'grade:'",
-            "(dyno OR mantle|16|expected ')' to close the '(' at position 1",
-            "dyno)|5|this ')' closes no '('", "dyno OR|8|expected a search term after OR",
-            "dyno AND|9|expected a search term after AND", "\"heel hook|1|this quote is not closed",
-            "grip:sideways|6|'sideways' is not a direction", "grade:V99..V3|7|not a grade",
-            "grade:V6..V3|7|runs from harder to easier", "set:2026-13|5|not a real date",
-            "colr:red|1|there is no field 'colr'", "angle:steep|7|not an angle", "grade:5+|7|French 5+",
-            "   |1|the query is empty"})
+        @CsvSource(
+                delimiter = '|',
+                value = {
+                    "move:dyno grade:|17|expected a value after 'grade:'",
+                    "(dyno OR mantle|16|expected ')' to close the '(' at position 1",
+                    "dyno)|5|this ')' closes no '('",
+                    "dyno OR|8|expected a search term after OR",
+                    "dyno AND|9|expected a search term after AND",
+                    "\"heel hook|1|this quote is not closed",
+                    "grip:sideways|6|'sideways' is not a direction",
+                    "grade:V99..V3|7|not a grade",
+                    "grade:V6..V3|7|runs from harder to easier",
+                    "set:2026-13|5|not a real date",
+                    "colr:red|1|there is no field 'colr'",
+                    "angle:steep|7|not an angle",
+                    "grade:5+|7|French 5+",
+                    "   |1|the query is empty"
+                })
         void sayWhereAndWhatWasExpected(String query, int position, String message) {
             assertThatThrownBy(() -> find(query)).isInstanceOfSatisfying(QuerySyntaxException.class, e -> {
                 assertThat(e.position()).isEqualTo(position);
@@ -211,8 +256,8 @@ class SearchIndexTest {
 
         @Test
         void pointsAtThePositionUnderTheQuery() {
-            QuerySyntaxException e = org.junit.jupiter.api.Assertions.assertThrows(QuerySyntaxException.class,
-                    () -> find("dyno grade:"));
+            QuerySyntaxException e = org.junit.jupiter.api.Assertions.assertThrows(
+                    QuerySyntaxException.class, () -> find("dyno grade:"));
             assertThat(e.pointer()).isEqualTo("  dyno grade:\n" + "  " + " ".repeat(11) + "^");
         }
     }
@@ -222,10 +267,12 @@ class SearchIndexTest {
         @Test
         void catchesUpWithChangesAndDeletions() {
             archive.inTransaction(s -> {
-                Route c1 = s.createSelectionQuery("from Route where label = 'C1'", Route.class).getSingleResult();
+                Route c1 = s.createSelectionQuery("from Route where label = 'C1'", Route.class)
+                        .getSingleResult();
                 c1.setMoves(List.of("bicycle"));
                 ChangeLog.routes(s, List.of(c1.id()));
-                Route t2 = s.createSelectionQuery("from Route where label = 'T2'", Route.class).getSingleResult();
+                Route t2 = s.createSelectionQuery("from Route where label = 'T2'", Route.class)
+                        .getSingleResult();
                 ChangeLog.routes(s, List.of(t2.id()));
                 s.remove(t2);
             });
@@ -241,14 +288,24 @@ class SearchIndexTest {
 
         @Test
         void rebuildsToTheSameResults() throws IOException {
-            List<String> queries = List.of("heel hook", "grade:6a..6b+", "standing:2026-02-07", "hold:crimp@0",
-                    "NOT discipline:boulder", "set:2026-02 OR notes:top");
-            List<List<String>> before = queries.stream().map(SearchIndexTest.this::find).toList();
+            List<String> queries = List.of(
+                    "heel hook",
+                    "grade:6a..6b+",
+                    "standing:2026-02-07",
+                    "hold:crimp@0",
+                    "NOT discipline:boulder",
+                    "set:2026-02 OR notes:top");
+            List<List<String>> before =
+                    queries.stream().map(SearchIndexTest.this::find).toList();
             List<Long> ids = index.ids();
             index.rebuild(archive.connection(), IndexProgress.NONE, "asked for");
-            assertThat(queries.stream().map(SearchIndexTest.this::find).toList()).isEqualTo(before);
+            assertThat(queries.stream().map(SearchIndexTest.this::find).toList())
+                    .isEqualTo(before);
             assertThat(index.ids()).containsExactlyInAnyOrderElementsOf(ids);
-            assertThat(ids).hasSize(new RouteReader(archive.connection()).read(RouteFilter.all()).size());
+            assertThat(ids)
+                    .hasSize(new RouteReader(archive.connection())
+                            .read(RouteFilter.all())
+                            .size());
         }
 
         @Test
@@ -259,7 +316,8 @@ class SearchIndexTest {
                 assertThat(first.notice()).contains("there was none yet");
             }
             try (var files = Files.list(dir.resolve("index"))) {
-                for (Path f : files.filter(p -> p.getFileName().toString().startsWith("segments")).toList()) {
+                for (Path f : files.filter(p -> p.getFileName().toString().startsWith("segments"))
+                        .toList()) {
                     Files.write(f, new byte[] {1, 2, 3});
                 }
             }
@@ -276,39 +334,47 @@ class SearchIndexTest {
                     s.execute("DELETE FROM route_change WHERE id = (SELECT MAX(id) FROM route_change)");
                 }
                 try (SearchIndex ahead = SearchIndex.at(dir)) {
-                    assertThat(ahead.sync(archive.connection(), IndexProgress.NONE).notice())
+                    assertThat(ahead.sync(archive.connection(), IndexProgress.NONE)
+                                    .notice())
                             .contains("ahead of the archive");
                 }
             }
-            try (Archive fresh = TestArchives.fresh(); SearchIndex other = SearchIndex.at(dir)) {
-                assertThat(other.sync(fresh.connection(), IndexProgress.NONE).notice()).contains("built from another"
-                        + " archive");
+            try (Archive fresh = TestArchives.fresh();
+                    SearchIndex other = SearchIndex.at(dir)) {
+                assertThat(other.sync(fresh.connection(), IndexProgress.NONE).notice())
+                        .contains("built from another" + " archive");
                 assertThat(other.ids()).isEmpty();
             }
         }
 
         @Test
         void seesWhatAnotherHandleOnTheSameFolderCommitted(@TempDir Path dir) {
-            try (SearchIndex searching = SearchIndex.at(dir); SearchIndex writing = SearchIndex.at(dir)) {
+            try (SearchIndex searching = SearchIndex.at(dir);
+                    SearchIndex writing = SearchIndex.at(dir)) {
                 writing.sync(archive.connection(), IndexProgress.NONE);
                 SearchRequest bicycle = new SearchRequest("bicycle", null, null, null, SearchOrder.RELEVANCE, 5, false);
-                assertThat(searching.search(bicycle, Vocabulary.defaults()).total()).isZero();
+                assertThat(searching.search(bicycle, Vocabulary.defaults()).total())
+                        .isZero();
                 archive.inTransaction(s -> {
-                    Route c1 = s.createSelectionQuery("from Route where label = 'C1'", Route.class).getSingleResult();
+                    Route c1 = s.createSelectionQuery("from Route where label = 'C1'", Route.class)
+                            .getSingleResult();
                     c1.setMoves(List.of("bicycle"));
                     ChangeLog.routes(s, List.of(c1.id()));
                 });
                 writing.sync(archive.connection(), IndexProgress.NONE);
-                assertThat(searching.search(bicycle, Vocabulary.defaults()).total()).isEqualTo(1);
+                assertThat(searching.search(bicycle, Vocabulary.defaults()).total())
+                        .isEqualTo(1);
             }
         }
 
         @Test
         void readsHitsBackFromTheDatabase() {
-            SearchHits h = index.search(new SearchRequest("route:C4", null, null, null, SearchOrder.RELEVANCE, 5,
-                    false), Vocabulary.defaults());
-            RouteRecord r = new RouteReader(archive.connection()).read(RouteFilter.all().withIds(List.of(
-                    h.hits().get(0).routeId()))).get(0);
+            SearchHits h = index.search(
+                    new SearchRequest("route:C4", null, null, null, SearchOrder.RELEVANCE, 5, false),
+                    Vocabulary.defaults());
+            RouteRecord r = new RouteReader(archive.connection())
+                    .read(RouteFilter.all().withIds(List.of(h.hits().get(0).routeId())))
+                    .get(0);
             assertThat(r.moves()).containsExactly("campus", "dyno");
         }
     }

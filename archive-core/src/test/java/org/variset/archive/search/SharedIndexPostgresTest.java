@@ -43,13 +43,16 @@ class SharedIndexPostgresTest {
     }
 
     private static long hits(SearchIndex index, String query) {
-        return index.search(new SearchRequest(query, null, null, null, SearchOrder.RELEVANCE, 10, false),
-                Vocabulary.defaults()).total();
+        return index.search(
+                        new SearchRequest(query, null, null, null, SearchOrder.RELEVANCE, 10, false),
+                        Vocabulary.defaults())
+                .total();
     }
 
     /** Adds a move to a route and records the change, in a transaction the caller commits. */
     private static void addMove(Session s, String label, String move) {
-        Route r = s.createSelectionQuery("from Route where label = :l", Route.class).setParameter("l", label)
+        Route r = s.createSelectionQuery("from Route where label = :l", Route.class)
+                .setParameter("l", label)
                 .getSingleResult();
         List<String> moves = new java.util.ArrayList<>(r.moves());
         moves.add(move);
@@ -60,7 +63,8 @@ class SharedIndexPostgresTest {
     }
 
     private static long newestChangeId(Archive a) throws Exception {
-        try (var s = a.connection().createStatement(); var rs = s.executeQuery("SELECT MAX(id) FROM route_change")) {
+        try (var s = a.connection().createStatement();
+                var rs = s.executeQuery("SELECT MAX(id) FROM route_change")) {
             rs.next();
             return rs.getLong(1);
         }
@@ -74,8 +78,8 @@ class SharedIndexPostgresTest {
             assertThat(index.ids()).hasSize(7);
 
             // The slow writer records its change first (lower id) and commits last.
-            try (Session slow = writer.sessionFactory().openSession(); Session quick = writer.sessionFactory()
-                    .openSession()) {
+            try (Session slow = writer.sessionFactory().openSession();
+                    Session quick = writer.sessionFactory().openSession()) {
                 Transaction slowTx = slow.beginTransaction();
                 addMove(slow, "C1", "bicycle");
                 long slowId = newestIdIn(slow);
@@ -101,7 +105,8 @@ class SharedIndexPostgresTest {
     }
 
     private static long newestIdIn(Session s) {
-        return s.createNativeQuery("SELECT MAX(id) FROM route_change", Long.class).getSingleResult();
+        return s.createNativeQuery("SELECT MAX(id) FROM route_change", Long.class)
+                .getSingleResult();
     }
 
     @Test
@@ -110,7 +115,8 @@ class SharedIndexPostgresTest {
             index.sync(reader.connection(), IndexProgress.NONE);
             assertThat(hits(index, "route:C4")).isEqualTo(1);
             writer.inTransaction(s -> {
-                Route c4 = s.createSelectionQuery("from Route where label = 'C4'", Route.class).getSingleResult();
+                Route c4 = s.createSelectionQuery("from Route where label = 'C4'", Route.class)
+                        .getSingleResult();
                 ChangeLog.routes(s, List.of(c4.id()));
                 s.remove(c4);
             });
@@ -119,7 +125,8 @@ class SharedIndexPostgresTest {
             assertThat(hits(index, "route:C4")).isZero();
             assertThat(index.ids()).hasSize(6);
             assertThat(index.sync(reader.connection(), IndexProgress.NONE).action())
-                    .as("nothing new: nothing to do").isEqualTo(IndexSync.Action.CURRENT);
+                    .as("nothing new: nothing to do")
+                    .isEqualTo(IndexSync.Action.CURRENT);
         }
     }
 
@@ -142,10 +149,11 @@ class SharedIndexPostgresTest {
     void twoProcessesOfOneClientDoNotShareAnIndexAtOnce(@TempDir Path cache) {
         Path dir = cache.resolve("client");
         try (Archive first = Archive.openServer(server, dir, false, ArchiveLock.DEFAULT_WAIT)) {
-            org.assertj.core.api.Assertions.assertThatThrownBy(() -> Archive.openServer(server, dir, false,
-                    java.time.Duration.ZERO)).hasMessageContaining("This client's search index of "
-                            + server.shown()).hasMessageContaining("is in use by process "
-                                    + ProcessHandle.current().pid());
+            org.assertj.core.api.Assertions.assertThatThrownBy(
+                            () -> Archive.openServer(server, dir, false, java.time.Duration.ZERO))
+                    .hasMessageContaining("This client's search index of " + server.shown())
+                    .hasMessageContaining(
+                            "is in use by process " + ProcessHandle.current().pid());
             assertThat(first.shared()).isTrue();
         }
     }

@@ -1,6 +1,5 @@
 package org.variset.archive.settings;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -20,6 +19,7 @@ import org.variset.archive.read.GymRecord;
 import org.variset.archive.read.WallRecord;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveQueries;
+import org.variset.archive.testing.TestArchives;
 import org.variset.archive.vocabulary.VocabularyField;
 
 class GymSettingsTest {
@@ -27,10 +27,19 @@ class GymSettingsTest {
     @Nested
     class Values {
         @ParameterizedTest(name = "{0} = {1}")
-        @CsvSource(delimiter = '|', value = {
-            "target|VB=1 V0=2 V1=3", "bands|VB V0@10 V1@13.5 V2@14.5", "near_repeat_threshold|0.65",
-            "lookback_days|180", "reach_height_m|1.75", "reach_factor|0.9", "score_weights|grip=0.4 novelty=0.1",
-            "cycle_days|35", "overdue_after_days|7"})
+        @CsvSource(
+                delimiter = '|',
+                value = {
+                    "target|VB=1 V0=2 V1=3",
+                    "bands|VB V0@10 V1@13.5 V2@14.5",
+                    "near_repeat_threshold|0.65",
+                    "lookback_days|180",
+                    "reach_height_m|1.75",
+                    "reach_factor|0.9",
+                    "score_weights|grip=0.4 novelty=0.1",
+                    "cycle_days|35",
+                    "overdue_after_days|7"
+                })
         void readBackAsTheyWereTyped(String key, String text) {
             SettingKey k = SettingKey.of(key);
             assertThat(k.text(k.parse(text))).isEqualTo(text);
@@ -38,20 +47,31 @@ class GymSettingsTest {
 
         @Test
         void acceptsCommasAndColonsBetweenPairs() {
-            assertThat(SettingKey.TARGET.text(SettingKey.TARGET.parse("VB:1, V0:2"))).isEqualTo("VB=1 V0=2");
+            assertThat(SettingKey.TARGET.text(SettingKey.TARGET.parse("VB:1, V0:2")))
+                    .isEqualTo("VB=1 V0=2");
         }
 
         @ParameterizedTest(name = "{0} = {1}")
-        @CsvSource(delimiter = '|', value = {
-            "near_repeat_threshold|0|it must be above 0", "near_repeat_threshold|1.5|it must be at most 1",
-            "lookback_days|-3|it is below 1", "lookback_days|ten|not a whole number",
-            "target|VB=1 V0|'V0' is not a name=weight pair", "target|VB=0|every weight is zero",
-            "score_weights|grip=1 style=2|'style' is not a part of the score",
-            "bands|VB V0@10 V1@9|not above the band before it", "bands|VB V0|needs its lower edge",
-            "reach_height_m|12|it must be at most 3", "target|VB=1 VB=2|given twice"})
+        @CsvSource(
+                delimiter = '|',
+                value = {
+                    "near_repeat_threshold|0|it must be above 0",
+                    "near_repeat_threshold|1.5|it must be at most 1",
+                    "lookback_days|-3|it is below 1",
+                    "lookback_days|ten|not a whole number",
+                    "target|VB=1 V0|'V0' is not a name=weight pair",
+                    "target|VB=0|every weight is zero",
+                    "score_weights|grip=1 style=2|'style' is not a part of the score",
+                    "bands|VB V0@10 V1@9|not above the band before it",
+                    "bands|VB V0|needs its lower edge",
+                    "reach_height_m|12|it must be at most 3",
+                    "target|VB=1 VB=2|given twice"
+                })
         void refuseBadValuesSayingWhatWasExpected(String key, String text, String why) {
-            assertThatThrownBy(() -> SettingKey.of(key).parse(text)).isInstanceOf(IllegalArgumentException.class)
-                    .hasMessageContaining(why).hasMessageContaining("expected");
+            assertThatThrownBy(() -> SettingKey.of(key).parse(text))
+                    .isInstanceOf(IllegalArgumentException.class)
+                    .hasMessageContaining(why)
+                    .hasMessageContaining("expected");
         }
 
         @Test
@@ -76,11 +96,18 @@ class GymSettingsTest {
             assertThat(d.lookbackDays()).isEqualTo(365);
             assertThat(d.reachHeightM()).isEqualTo(1.60);
             assertThat(d.reachFactor()).isEqualTo(1.0);
-            assertThat(d.scoreWeights()).containsExactly(java.util.Map.entry("grip", 0.25),
-                    java.util.Map.entry("holds", 0.20), java.util.Map.entry("moves", 0.20),
-                    java.util.Map.entry("grades", 0.15), java.util.Map.entry("novelty", 0.20));
+            assertThat(d.scoreWeights())
+                    .containsExactly(
+                            java.util.Map.entry("grip", 0.25),
+                            java.util.Map.entry("holds", 0.20),
+                            java.util.Map.entry("moves", 0.20),
+                            java.util.Map.entry("grades", 0.15),
+                            java.util.Map.entry("novelty", 0.20));
             assertThat(d.target(Discipline.BOULDER)).isEqualTo(TargetPyramid.weights());
-            assertThat(TargetPyramid.weights().values().stream().mapToDouble(Double::doubleValue).sum()).isEqualTo(35);
+            assertThat(TargetPyramid.weights().values().stream()
+                            .mapToDouble(Double::doubleValue)
+                            .sum())
+                    .isEqualTo(35);
             assertThat(d.targetIsDefault(Discipline.BOULDER)).isTrue();
             assertThat(d.target(Discipline.ROPE)).isNull();
             assertThat(d.bands(Discipline.BOULDER).labels()).startsWith("VB", "V0", "V1");
@@ -91,9 +118,11 @@ class GymSettingsTest {
         void resetCyclesFollowCommonPractice() {
             WallRecord plain = new WallRecord(1, 1, "Slab", null, null, null, null, null);
             assertThat(d.cycleDays(plain, Discipline.BOULDER)).isEqualTo(28);
-            assertThat(d.cycleDays(plain, Discipline.BOULDER) + d.overdueAfterDays()).isEqualTo(42);
+            assertThat(d.cycleDays(plain, Discipline.BOULDER) + d.overdueAfterDays())
+                    .isEqualTo(42);
             assertThat(d.cycleDays(plain, Discipline.ROPE)).isEqualTo(56);
-            assertThat(d.cycleDays(plain, Discipline.ROPE) + d.overdueAfterDays()).isEqualTo(70);
+            assertThat(d.cycleDays(plain, Discipline.ROPE) + d.overdueAfterDays())
+                    .isEqualTo(70);
         }
     }
 
@@ -122,8 +151,8 @@ class GymSettingsTest {
             LocalDate day = LocalDate.parse(from);
             archive.inTransaction(s -> {
                 Gym g = new ArchiveQueries(s).gym(gym.name()).orElseThrow();
-                SettingsWriter.set(s, g, key, scope, day, text == null ? null : key.parse(text),
-                        reader.inEffectOn(gym.id(), day));
+                SettingsWriter.set(
+                        s, g, key, scope, day, text == null ? null : key.parse(text), reader.inEffectOn(gym.id(), day));
             });
         }
 
@@ -140,7 +169,8 @@ class GymSettingsTest {
             assertThat(on("2026-03-01").nearRepeatThreshold()).isEqualTo(new BigDecimal("0.7"));
             assertThat(on("2026-08-31").nearRepeatThreshold()).isEqualTo(new BigDecimal("0.5"));
             assertThat(on("2026-09-01").nearRepeatThreshold()).isEqualTo(new BigDecimal("0.6"));
-            assertThat(new SettingsReader(archive.connection()).history(gym.id())).extracting(SettingValue::text)
+            assertThat(new SettingsReader(archive.connection()).history(gym.id()))
+                    .extracting(SettingValue::text)
                     .containsExactly("0.7", "0.5", "(default)");
         }
 
@@ -168,7 +198,12 @@ class GymSettingsTest {
             set(SettingKey.BANDS, "boulder", "2026-01-01", "easy hard@17");
             set(SettingKey.TARGET, "boulder", "2026-01-01", "easy=2 hard=1");
             assertThat(on("2026-01-01").target(Discipline.BOULDER)).containsEntry("easy", 2.0);
-            assertThat(on("2026-01-01").bands(Discipline.BOULDER).bandOf(18).orElseThrow().label()).isEqualTo("hard");
+            assertThat(on("2026-01-01")
+                            .bands(Discipline.BOULDER)
+                            .bandOf(18)
+                            .orElseThrow()
+                            .label())
+                    .isEqualTo("hard");
         }
 
         @Test
@@ -184,7 +219,8 @@ class GymSettingsTest {
             set(SettingKey.VOCABULARY, "", "2026-01-01", "[moves]\nheel hook: hooky heel\nbat hang");
             assertThat(on("2026-01-01").vocabulary().canonical(VocabularyField.MOVES, "hooky heel"))
                     .contains("heel hook");
-            assertThat(on("2026-01-01").vocabulary().terms(VocabularyField.MOVES)).contains("bat hang");
+            assertThat(on("2026-01-01").vocabulary().terms(VocabularyField.MOVES))
+                    .contains("bat hang");
         }
     }
 }

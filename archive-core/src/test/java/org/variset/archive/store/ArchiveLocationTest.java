@@ -1,7 +1,6 @@
 package org.variset.archive.store;
 
 import static org.assertj.core.api.Assertions.assertThat;
-
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.nio.file.Files;
@@ -28,13 +27,17 @@ class ArchiveLocationTest {
 
     @Test
     void takesTheServerFromTheOptionBeforeTheEnvironmentAndKeepsItsIndexInTheCache() {
-        ArchiveLocation l = ArchiveLocation.resolve(null, "postgresql://ops@db.example:6543/chain", Map.of(
-                "VARISET_ARCHIVE", "/srv/a", "XDG_CACHE_HOME", "/var/cache/kit"), home);
+        ArchiveLocation l = ArchiveLocation.resolve(
+                null,
+                "postgresql://ops@db.example:6543/chain",
+                Map.of("VARISET_ARCHIVE", "/srv/a", "XDG_CACHE_HOME", "/var/cache/kit"),
+                home);
         assertThat(l.shared()).isTrue();
         assertThat(l.source()).isEqualTo("--db");
         assertThat(l.shown()).isEqualTo("postgresql://ops@db.example:6543/chain");
-        assertThat(l.indexDir().toString()).startsWith("/var/cache/kit/variset/db.example-6543-chain-").endsWith(
-                "/index");
+        assertThat(l.indexDir().toString())
+                .startsWith("/var/cache/kit/variset/db.example-6543-chain-")
+                .endsWith("/index");
         assertThat(l.clientDir()).isEqualTo(l.indexDir().getParent());
         assertThat(l.dir()).isNull();
     }
@@ -43,8 +46,9 @@ class ArchiveLocationTest {
     void refusesBothKindsAtOneLevel() {
         assertThatThrownBy(() -> ArchiveLocation.resolve(Path.of("/a"), "postgresql://h/d", Map.of(), home))
                 .hasMessageContaining("not both");
-        assertThatThrownBy(() -> ArchiveLocation.resolve(null, null, Map.of("VARISET_ARCHIVE", "/a", "VARISET_DB",
-                "postgresql://h/d"), home)).hasMessageContaining("unset one of them");
+        assertThatThrownBy(() -> ArchiveLocation.resolve(
+                        null, null, Map.of("VARISET_ARCHIVE", "/a", "VARISET_DB", "postgresql://h/d"), home))
+                .hasMessageContaining("unset one of them");
     }
 
     @Test
@@ -52,16 +56,20 @@ class ArchiveLocationTest {
         Path config = tmp.resolve("config/variset/variset.properties");
         Files.createDirectories(config.getParent());
         Files.writeString(config, "# the chain's server\ndb = postgresql://127.0.0.1/chain\n");
-        Map<String, String> env = Map.of("XDG_CONFIG_HOME", tmp.resolve("config").toString());
+        Map<String, String> env =
+                Map.of("XDG_CONFIG_HOME", tmp.resolve("config").toString());
         ArchiveLocation l = ArchiveLocation.resolve(null, null, env, home);
         assertThat(l.shown()).endsWith("@127.0.0.1:5432/chain");
         assertThat(l.source()).isEqualTo(config.toString());
         assertThat(l.indexDir()).startsWithRaw(home.resolve(".cache/variset"));
-        ArchiveLocation env2 = ArchiveLocation.resolve(null, null, Map.of("XDG_CONFIG_HOME", tmp.resolve("config")
-                .toString(), "VARISET_ARCHIVE", "/srv/a"), home);
+        ArchiveLocation env2 = ArchiveLocation.resolve(
+                null,
+                null,
+                Map.of("XDG_CONFIG_HOME", tmp.resolve("config").toString(), "VARISET_ARCHIVE", "/srv/a"),
+                home);
         assertThat(env2.dir()).isEqualTo(Path.of("/srv/a"));
         Files.writeString(config, "db = postgresql://h/d\narchive = /srv/a\n");
-        assertThatThrownBy(() -> ArchiveLocation.resolve(null, null, env, home)).hasMessageContaining(
-                "sets both 'db' and 'archive'");
+        assertThatThrownBy(() -> ArchiveLocation.resolve(null, null, env, home))
+                .hasMessageContaining("sets both 'db' and 'archive'");
     }
 }

@@ -1,6 +1,5 @@
 package org.variset.archive.store;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.time.LocalDate;
@@ -21,6 +20,7 @@ import org.variset.archive.route.HoldSize;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
+import org.variset.archive.testing.TestArchives;
 
 class ArchivePersistenceTest {
     private Archive archive;
@@ -64,15 +64,33 @@ class ArchivePersistenceTest {
             assertThat(blue.angleDeg()).isEqualTo(30.0);
             assertThat(blue.color()).isEqualTo("blue");
             assertThat(blue.extraFields()).containsExactly(Map.entry("tag", "B-3"), Map.entry("sponsor_free", "yes"));
-            assertThat(blue.holds()).extracting(HoldPlacement::spec).containsExactly(
-                    new HoldPlacement.Spec(1, HoldRole.START, "jug", HoldSize.L, List.of(0.0), "J12", 1.2, 0.8,
-                            Map.of()),
-                    new HoldPlacement.Spec(2, HoldRole.HAND, "pinch", HoldSize.M, List.of(90.0, 270.0), "P7", 1.9,
-                            1.85, Map.of("colour", "teal")),
-                    new HoldPlacement.Spec(3, HoldRole.FOOT, "foot-chip", HoldSize.XS, List.of(), "F3", 1.3, 0.45,
-                            Map.of()),
-                    new HoldPlacement.Spec(4, HoldRole.FINISH, "sloper", HoldSize.XL, List.of(37.5), null, null,
-                            null, Map.of()));
+            assertThat(blue.holds())
+                    .extracting(HoldPlacement::spec)
+                    .containsExactly(
+                            new HoldPlacement.Spec(
+                                    1, HoldRole.START, "jug", HoldSize.L, List.of(0.0), "J12", 1.2, 0.8, Map.of()),
+                            new HoldPlacement.Spec(
+                                    2,
+                                    HoldRole.HAND,
+                                    "pinch",
+                                    HoldSize.M,
+                                    List.of(90.0, 270.0),
+                                    "P7",
+                                    1.9,
+                                    1.85,
+                                    Map.of("colour", "teal")),
+                            new HoldPlacement.Spec(
+                                    3, HoldRole.FOOT, "foot-chip", HoldSize.XS, List.of(), "F3", 1.3, 0.45, Map.of()),
+                            new HoldPlacement.Spec(
+                                    4,
+                                    HoldRole.FINISH,
+                                    "sloper",
+                                    HoldSize.XL,
+                                    List.of(37.5),
+                                    null,
+                                    null,
+                                    null,
+                                    Map.of()));
 
             Route green = routes.get(1);
             assertThat(green.strippedOn()).isEqualTo(LocalDate.of(2026, 4, 6));
@@ -84,8 +102,8 @@ class ArchivePersistenceTest {
     @Test
     void countsWhatItHoldsWithoutHibernate() {
         ArchiveStats stats = archive.stats();
-        assertThat(List.of(stats.gyms(), stats.walls(), stats.resets(), stats.routes(), stats.holds(),
-                stats.setters())).containsExactly(1L, 1L, 1L, 2L, 5L, 2L);
+        assertThat(List.of(stats.gyms(), stats.walls(), stats.resets(), stats.routes(), stats.holds(), stats.setters()))
+                .containsExactly(1L, 1L, 1L, 2L, 5L, 2L);
         assertThat(stats.firstSetOn()).isEqualTo(ResetFixture.SET_ON);
         assertThat(stats.lastSetOn()).isEqualTo(ResetFixture.SET_ON.plusDays(1));
         assertThat(stats.schemaVersion()).isEqualTo(SchemaVersion.LATEST);
@@ -119,12 +137,14 @@ class ArchivePersistenceTest {
                 ArchiveQueries q = new ArchiveQueries(s);
                 Gym gym = q.gym(ResetFixture.GYM).orElseThrow();
                 Wall wall = q.wall(gym, "Cave Ôrla").orElseThrow();
-                for (LocalDate d = ResetFixture.SET_ON.minusDays(1); d.isBefore(LocalDate.of(2026, 4, 8));
+                for (LocalDate d = ResetFixture.SET_ON.minusDays(1);
+                        d.isBefore(LocalDate.of(2026, 4, 8));
                         d = d.plusDays(1)) {
                     LocalDate day = d;
                     List<Route> all = q.routesSetBetween(gym, LocalDate.of(2000, 1, 1), LocalDate.of(2100, 1, 1));
-                    assertThat(q.standingSet(wall, d)).containsExactlyInAnyOrderElementsOf(
-                            all.stream().filter(r -> r.standingOn(day)).toList());
+                    assertThat(q.standingSet(wall, d))
+                            .containsExactlyInAnyOrderElementsOf(
+                                    all.stream().filter(r -> r.standingOn(day)).toList());
                 }
             });
         }
@@ -134,14 +154,19 @@ class ArchivePersistenceTest {
     void findsTheLatestResetOnOrBeforeADate() {
         archive.inTransaction(s -> {
             ArchiveQueries q = new ArchiveQueries(s);
-            Wall wall = q.wall(q.gym(ResetFixture.GYM).orElseThrow(), "Cave Ôrla").orElseThrow();
+            Wall wall =
+                    q.wall(q.gym(ResetFixture.GYM).orElseThrow(), "Cave Ôrla").orElseThrow();
             Reset later = new Reset(wall, "Cave April", LocalDate.of(2026, 4, 6));
             s.persist(later);
             assertThat(q.resetsOfWall(wall)).extracting(Reset::label).containsExactly("Cave 2026-03-02", "Cave April");
-            assertThat(q.latestResetOnOrBefore(wall, LocalDate.of(2026, 4, 5))).get()
-                    .extracting(Reset::label).isEqualTo("Cave 2026-03-02");
-            assertThat(q.latestResetOnOrBefore(wall, LocalDate.of(2026, 4, 6))).get()
-                    .extracting(Reset::label).isEqualTo("Cave April");
+            assertThat(q.latestResetOnOrBefore(wall, LocalDate.of(2026, 4, 5)))
+                    .get()
+                    .extracting(Reset::label)
+                    .isEqualTo("Cave 2026-03-02");
+            assertThat(q.latestResetOnOrBefore(wall, LocalDate.of(2026, 4, 6)))
+                    .get()
+                    .extracting(Reset::label)
+                    .isEqualTo("Cave April");
             assertThat(q.latestResetOnOrBefore(wall, LocalDate.of(2026, 3, 1))).isEmpty();
         });
     }

@@ -31,14 +31,21 @@ class ArchiveV1FixtureTest {
         try (Archive archive = Archive.open(dir)) {
             assertThat(archive.schemaVersion().version()).isEqualTo(SchemaVersion.LATEST);
             ArchiveStats stats = archive.stats();
-            assertThat(List.of(stats.gyms(), stats.walls(), stats.resets(), stats.routes(), stats.holds(),
-                    stats.setters())).containsExactly(1L, 1L, 1L, 2L, 5L, 2L);
+            assertThat(List.of(
+                            stats.gyms(),
+                            stats.walls(),
+                            stats.resets(),
+                            stats.routes(),
+                            stats.holds(),
+                            stats.setters()))
+                    .containsExactly(1L, 1L, 1L, 2L, 5L, 2L);
             archive.inTransaction(s -> {
                 ArchiveQueries q = new ArchiveQueries(s);
                 Gym gym = q.gym(ResetFixture.GYM).orElseThrow();
                 List<Route> routes = q.standingSet(gym, ResetFixture.SET_ON.plusDays(1));
                 assertThat(routes).extracting(Route::label).containsExactly("Blue 3", "Green 1");
-                assertThat(routes.get(0).holds()).extracting(HoldPlacement::grips)
+                assertThat(routes.get(0).holds())
+                        .extracting(HoldPlacement::grips)
                         .containsExactly(List.of(0.0), List.of(90.0, 270.0), List.of(), List.of(37.5));
                 assertThat(routes.get(0).notes()).endsWith("ずっと");
             });

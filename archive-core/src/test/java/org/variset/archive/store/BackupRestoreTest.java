@@ -23,6 +23,7 @@ import org.variset.archive.fixture.ResetFixture;
 class BackupRestoreTest {
     @TempDir
     Path tmp;
+
     private Path original;
     private Path backup;
 
@@ -41,7 +42,8 @@ class BackupRestoreTest {
     /** Every row of every table, as H2 scripts it. */
     private static String content(Path dir) throws SQLException {
         StringBuilder b = new StringBuilder();
-        try (Archive a = Archive.open(dir); Statement s = a.connection().createStatement();
+        try (Archive a = Archive.open(dir);
+                Statement s = a.connection().createStatement();
                 ResultSet rs = s.executeQuery("SCRIPT NOPASSWORDS NOSETTINGS")) {
             while (rs.next()) {
                 b.append(rs.getString(1)).append('\n');
@@ -90,14 +92,16 @@ class BackupRestoreTest {
             target = tmp.resolve("target");
             try (Archive a = Archive.create(target)) {
                 a.inTransaction(ResetFixture::storeFullReset);
-                a.inTransaction(s -> s.createMutationQuery("update Route set color = 'mine'").executeUpdate());
+                a.inTransaction(s ->
+                        s.createMutationQuery("update Route set color = 'mine'").executeUpdate());
             }
             before = content(target);
         }
 
         private void refused(Path file, String why) throws SQLException, IOException {
-            assertThatThrownBy(() -> ArchiveRestore.restore(file, target, true)).isInstanceOf(
-                    IllegalArgumentException.class).hasMessageContaining("is not a backup Variset can restore")
+            assertThatThrownBy(() -> ArchiveRestore.restore(file, target, true))
+                    .isInstanceOf(IllegalArgumentException.class)
+                    .hasMessageContaining("is not a backup Variset can restore")
                     .hasMessageContaining(why);
             assertThat(content(target)).isEqualTo(before);
             try (var left = Files.list(tmp)) {
@@ -129,8 +133,8 @@ class BackupRestoreTest {
         void refusesATruncatedBackup() throws Exception {
             byte[] all = Files.readAllBytes(backup);
             Path cut = Files.write(tmp.resolve("cut.zip"), java.util.Arrays.copyOf(all, all.length / 2));
-            assertThatThrownBy(() -> ArchiveRestore.restore(cut, target, true)).hasMessageContaining(
-                    "is not a backup Variset can restore");
+            assertThatThrownBy(() -> ArchiveRestore.restore(cut, target, true))
+                    .hasMessageContaining("is not a backup Variset can restore");
             assertThat(content(target)).isEqualTo(before);
         }
 
@@ -147,8 +151,9 @@ class BackupRestoreTest {
             for (ZipEntry e; (e = in.getNextEntry()) != null; ) {
                 byte[] b = in.readAllBytes();
                 if (e.getName().equals(ArchiveBackup.MANIFEST) && manifestOnly) {
-                    b = new String(b, StandardCharsets.UTF_8).replaceFirst("\"schema_version\" : \\d+",
-                            "\"schema_version\" : " + schema).getBytes(StandardCharsets.UTF_8);
+                    b = new String(b, StandardCharsets.UTF_8)
+                            .replaceFirst("\"schema_version\" : \\d+", "\"schema_version\" : " + schema)
+                            .getBytes(StandardCharsets.UTF_8);
                 } else if (e.getName().equals(ArchiveBackup.DATABASE) && !manifestOnly) {
                     b[b.length / 2] ^= 0x5a;
                 }
@@ -166,9 +171,12 @@ class BackupRestoreTest {
         void saysWhichProcessHoldsTheArchive() {
             try (Archive first = Archive.open(original)) {
                 assertThat(first.stats().routes()).isEqualTo(2);
-                assertThatThrownBy(() -> Archive.open(original, Duration.ZERO)).isInstanceOfSatisfying(
-                        ArchiveException.class, e -> assertThat(e.problem()).isEqualTo(ArchiveException.Problem.IN_USE))
-                        .hasMessageContaining("is in use by process " + ProcessHandle.current().pid() + " on host ");
+                assertThatThrownBy(() -> Archive.open(original, Duration.ZERO))
+                        .isInstanceOfSatisfying(
+                                ArchiveException.class,
+                                e -> assertThat(e.problem()).isEqualTo(ArchiveException.Problem.IN_USE))
+                        .hasMessageContaining("is in use by process "
+                                + ProcessHandle.current().pid() + " on host ");
             }
             try (Archive again = Archive.open(original, Duration.ZERO)) {
                 assertThat(again.stats().routes()).isEqualTo(2);
@@ -177,10 +185,11 @@ class BackupRestoreTest {
 
         @Test
         void keepsTheLockFileReadableByItsOwnerOnly() throws IOException {
-            assertThat(java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(
-                    original.resolve(ArchiveLock.FILE)))).isEqualTo("rw-------");
-            assertThat(java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(
-                    original))).isEqualTo("rwx------");
+            assertThat(java.nio.file.attribute.PosixFilePermissions.toString(
+                            Files.getPosixFilePermissions(original.resolve(ArchiveLock.FILE))))
+                    .isEqualTo("rw-------");
+            assertThat(java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(original)))
+                    .isEqualTo("rwx------");
         }
     }
 }

@@ -1,6 +1,5 @@
 package org.variset.archive.store;
 
-import org.variset.archive.testing.TestArchives;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -15,6 +14,7 @@ import java.util.stream.Stream;
 import org.hibernate.SessionFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.variset.archive.testing.TestArchives;
 
 class SchemaTest {
 
@@ -24,8 +24,11 @@ class SchemaTest {
         Pattern name = Pattern.compile("V(\\d+)__.+\\.sql");
         int highest;
         try (Stream<Path> files = Files.list(dir)) {
-            highest = files.map(p -> name.matcher(p.getFileName().toString())).filter(Matcher::matches)
-                    .mapToInt(m -> Integer.parseInt(m.group(1))).max().orElse(0);
+            highest = files.map(p -> name.matcher(p.getFileName().toString()))
+                    .filter(Matcher::matches)
+                    .mapToInt(m -> Integer.parseInt(m.group(1)))
+                    .max()
+                    .orElse(0);
         }
         assertThat(SchemaVersion.LATEST).isEqualTo(highest);
     }
@@ -59,18 +62,24 @@ class SchemaTest {
     @Test
     void refusesAnArchiveFromANewerSchema(@TempDir Path tmp) throws Exception {
         Path dir = tmp.resolve("a");
-        try (Archive a = Archive.create(dir); Statement s = a.connection().createStatement()) {
+        try (Archive a = Archive.create(dir);
+                Statement s = a.connection().createStatement()) {
             s.executeUpdate("UPDATE \"flyway_schema_history\" SET \"version\" = '99' WHERE \"version\" = '1'");
         }
-        assertThatThrownBy(() -> Archive.open(dir)).isInstanceOfSatisfying(ArchiveException.class,
-                e -> assertThat(e.problem()).isEqualTo(ArchiveException.Problem.TOO_NEW))
-                .hasMessageContaining("schema version 99").hasMessageContaining("newer");
+        assertThatThrownBy(() -> Archive.open(dir))
+                .isInstanceOfSatisfying(
+                        ArchiveException.class,
+                        e -> assertThat(e.problem()).isEqualTo(ArchiveException.Problem.TOO_NEW))
+                .hasMessageContaining("schema version 99")
+                .hasMessageContaining("newer");
     }
 
     @Test
     void saysHowToCreateAMissingArchive(@TempDir Path tmp) {
-        assertThatThrownBy(() -> Archive.open(tmp.resolve("none"))).isInstanceOf(ArchiveException.class)
-                .hasMessageContaining("No archive at").hasMessageContaining("init");
+        assertThatThrownBy(() -> Archive.open(tmp.resolve("none")))
+                .isInstanceOf(ArchiveException.class)
+                .hasMessageContaining("No archive at")
+                .hasMessageContaining("init");
         assertThat(Files.exists(tmp.resolve("none"))).isFalse();
     }
 

@@ -21,8 +21,9 @@ class ServerAddressTest {
     @Test
     void readsTheThreeSpellingsWithTheDefaultPortAndTheUserFromTheEnvironment() {
         Map<String, String> env = Map.of("PGUSER", "setter");
-        for (String url : new String[] {"postgresql://db.example/chain", "postgres://db.example/chain",
-            "jdbc:postgresql://db.example/chain"}) {
+        for (String url : new String[] {
+            "postgresql://db.example/chain", "postgres://db.example/chain", "jdbc:postgresql://db.example/chain"
+        }) {
             ServerAddress a = ServerAddress.parse(url, env, HOME);
             assertThat(a.host()).isEqualTo("db.example");
             assertThat(a.port()).isEqualTo(5432); // PostgreSQL's default port (documentation, section 20.3)
@@ -34,14 +35,16 @@ class ServerAddressTest {
         assertThat(s.user()).isEqualTo("ops");
         assertThat(s.port()).isEqualTo(6543);
         assertThat(s.schema()).isEqualTo("north");
-        assertThat(s.jdbcUrl()).isEqualTo("jdbc:postgresql://db.example:6543/chain?currentSchema=north"
-                + "&ApplicationName=variset&reWriteBatchedInserts=true");
+        assertThat(s.jdbcUrl())
+                .isEqualTo("jdbc:postgresql://db.example:6543/chain?currentSchema=north"
+                        + "&ApplicationName=variset&reWriteBatchedInserts=true");
     }
 
     @Test
     void neverTakesAPasswordFromTheAddressAndNeverShowsOne() {
         assertThatThrownBy(() -> ServerAddress.parse("postgresql://ops:hunter2@h/d", Map.of(), HOME))
-                .hasMessageContaining("PGPASSWORD").hasMessageNotContaining("hunter2");
+                .hasMessageContaining("PGPASSWORD")
+                .hasMessageNotContaining("hunter2");
         assertThatThrownBy(() -> ServerAddress.parse("postgresql://h/d?password=hunter2", Map.of(), HOME))
                 .hasMessageContaining("does not take passwords");
         ServerAddress a = ServerAddress.parse("postgresql://ops@h/d", Map.of("PGPASSWORD", "hunter2"), HOME);
@@ -71,13 +74,22 @@ class ServerAddressTest {
                 """);
         Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-------"));
         Map<String, String> env = Map.of("PGPASSFILE", file.toString());
-        assertThat(ServerAddress.parse("postgresql://ops@db.example/chain", env, HOME).password())
+        assertThat(ServerAddress.parse("postgresql://ops@db.example/chain", env, HOME)
+                        .password())
                 .isEqualTo("first:part");
-        assertThat(ServerAddress.parse("postgresql://ops@db.example/stock", env, HOME).password())
+        assertThat(ServerAddress.parse("postgresql://ops@db.example/stock", env, HOME)
+                        .password())
                 .isEqualTo("fallback");
-        assertThat(ServerAddress.parse("postgresql://kit@db.example/chain", env, HOME).password()).isNull();
-        assertThat(ServerAddress.parse("postgresql://ops@db.example/chain", Map.of("PGPASSFILE", file.toString(),
-                "PGPASSWORD", "from-env"), HOME).password()).as("PGPASSWORD comes first").isEqualTo("from-env");
+        assertThat(ServerAddress.parse("postgresql://kit@db.example/chain", env, HOME)
+                        .password())
+                .isNull();
+        assertThat(ServerAddress.parse(
+                                "postgresql://ops@db.example/chain",
+                                Map.of("PGPASSFILE", file.toString(), "PGPASSWORD", "from-env"),
+                                HOME)
+                        .password())
+                .as("PGPASSWORD comes first")
+                .isEqualTo("from-env");
 
         Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-r--r--"));
         assertThatThrownBy(() -> ServerAddress.parse("postgresql://ops@db.example/chain", env, HOME))
@@ -87,11 +99,16 @@ class ServerAddressTest {
     @Test
     void givesEachArchiveItsOwnCacheFolder() {
         Map<String, String> env = Map.of("PGUSER", "ops");
-        String a = ServerAddress.parse("postgresql://db.example/chain", env, HOME).cacheKey();
-        String b = ServerAddress.parse("postgresql://db.example/chain?currentSchema=north", env, HOME).cacheKey();
-        String c = ServerAddress.parse("postgresql://db.example:5433/chain", env, HOME).cacheKey();
+        String a =
+                ServerAddress.parse("postgresql://db.example/chain", env, HOME).cacheKey();
+        String b = ServerAddress.parse("postgresql://db.example/chain?currentSchema=north", env, HOME)
+                .cacheKey();
+        String c = ServerAddress.parse("postgresql://db.example:5433/chain", env, HOME)
+                .cacheKey();
         assertThat(a).startsWith("db.example-5432-chain-").isNotEqualTo(b).isNotEqualTo(c);
-        assertThat(ServerAddress.parse("postgresql://DB.example/chain", env, HOME).cacheKey()).as("host names ignore"
-                + " case").endsWith(a.substring(a.lastIndexOf('-')));
+        assertThat(ServerAddress.parse("postgresql://DB.example/chain", env, HOME)
+                        .cacheKey())
+                .as("host names ignore" + " case")
+                .endsWith(a.substring(a.lastIndexOf('-')));
     }
 }

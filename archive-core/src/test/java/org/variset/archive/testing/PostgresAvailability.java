@@ -16,7 +16,8 @@ public final class PostgresAvailability implements ExecutionCondition {
             return ConditionEvaluationResult.enabled("no PostgreSQL needed, or it is required");
         }
         String why = TestArchives.unreachable();
-        return why == null ? ConditionEvaluationResult.enabled("PostgreSQL answers")
+        return why == null
+                ? ConditionEvaluationResult.enabled("PostgreSQL answers")
                 : ConditionEvaluationResult.disabled("skipped: " + why);
     }
 }

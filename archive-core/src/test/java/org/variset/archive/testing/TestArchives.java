@@ -35,6 +35,7 @@ public final class TestArchives {
     public static final String REQUIRE_PROPERTY = "variset.test.requirePostgres";
     /** The environment variable naming the PostgreSQL server for tests. */
     public static final String SERVER_ENV = "VARISET_TEST_POSTGRES";
+
     private static final String DEFAULT_SERVER = "postgresql://127.0.0.1:5432/test";
     private static final String PREFIX = "vt_" + ProcessHandle.current().pid() + "_";
     private static final AtomicInteger SCHEMAS = new AtomicInteger();
@@ -42,8 +43,7 @@ public final class TestArchives {
     private static volatile String unreachable;
     private static volatile boolean checked;
 
-    private TestArchives() {
-    }
+    private TestArchives() {}
 
     /** True when this run tests PostgreSQL. */
     public static boolean onPostgres() {
@@ -73,7 +73,8 @@ public final class TestArchives {
         ServerAddress base = server();
         requireServer(base);
         String schema = PREFIX + SCHEMAS.incrementAndGet();
-        try (Connection c = connect(base); Statement s = c.createStatement()) {
+        try (Connection c = connect(base);
+                Statement s = c.createStatement()) {
             s.execute("CREATE SCHEMA " + schema);
         } catch (SQLException e) {
             throw new IllegalStateException("cannot create a test schema on " + base + ": " + e.getMessage(), e);
@@ -93,7 +94,9 @@ public final class TestArchives {
     /** The test server, as {@code VARISET_TEST_POSTGRES} or the default names it. */
     public static ServerAddress server() {
         String url = System.getenv(SERVER_ENV);
-        return ServerAddress.parse(url == null || url.isBlank() ? DEFAULT_SERVER : url, System.getenv(),
+        return ServerAddress.parse(
+                url == null || url.isBlank() ? DEFAULT_SERVER : url,
+                System.getenv(),
                 Path.of(System.getProperty("user.home")));
     }
 
@@ -165,8 +168,8 @@ public final class TestArchives {
         if (unreachable != null) {
             String why = "PostgreSQL at " + a + " does not answer: " + unreachable;
             if (Boolean.getBoolean(REQUIRE_PROPERTY)) {
-                throw new AssertionError(why + " (and " + REQUIRE_PROPERTY + " is set, so this fails instead of "
-                        + "skipping)");
+                throw new AssertionError(
+                        why + " (and " + REQUIRE_PROPERTY + " is set, so this fails instead of " + "skipping)");
             }
             Assumptions.abort(why);
         }
@@ -179,7 +182,8 @@ public final class TestArchives {
             while (rs.next()) {
                 String name = rs.getString(1);
                 String[] parts = name.split("_");
-                boolean alive = parts.length >= 3 && parts[1].chars().allMatch(Character::isDigit)
+                boolean alive = parts.length >= 3
+                        && parts[1].chars().allMatch(Character::isDigit)
                         && ProcessHandle.of(Long.parseLong(parts[1])).isPresent();
                 if (!alive) {
                     gone.add(name);

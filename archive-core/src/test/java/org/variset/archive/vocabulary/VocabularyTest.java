@@ -12,9 +12,16 @@ class VocabularyTest {
 
     /** docs/spec/vocabulary.md: the spellings listed for each term. */
     @ParameterizedTest(name = "{0} {1} is {2}")
-    @CsvSource({"HOLD_TYPES, Bucket, jug", "HOLD_TYPES, rail, edge", "HOLD_TYPES, foot  chip, foot-chip",
-        "MOVES, heelhook, heel hook", "MOVES, Heel-Hook, heel hook", "MOVES, lunge, dyno", "MOVES, undercut, undercling",
-        "STYLES, Slab, slab"})
+    @CsvSource({
+        "HOLD_TYPES, Bucket, jug",
+        "HOLD_TYPES, rail, edge",
+        "HOLD_TYPES, foot  chip, foot-chip",
+        "MOVES, heelhook, heel hook",
+        "MOVES, Heel-Hook, heel hook",
+        "MOVES, lunge, dyno",
+        "MOVES, undercut, undercling",
+        "STYLES, Slab, slab"
+    })
     void mapsEverySpellingOfTheSpecToItsTerm(VocabularyField field, String spelling, String term) {
         assertThat(v.canonical(field, spelling)).contains(term);
     }

@@ -12,7 +12,6 @@ import java.sql.PreparedStatement;
 import java.sql.SQLException;
 import java.sql.Types;
 import java.time.LocalDate;
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -55,7 +54,8 @@ import org.variset.archive.store.Archive;
  */
 public final class RawFloor {
     private static final int BATCH = 1_000;
-    private static final CSVFormat CSV = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get();
+    private static final CSVFormat CSV =
+            CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get();
 
     private final Connection db;
     private final IndexWriter index;
@@ -122,9 +122,16 @@ public final class RawFloor {
             long commitNs = System.nanoTime() - t;
             t = System.nanoTime();
             index.commit();
-            System.out.printf(Locale.ROOT, "floor: database commit %.1f s, index commit %.1f s%n", commitNs / 1e9,
+            System.out.printf(
+                    Locale.ROOT,
+                    "floor: database commit %.1f s, index commit %.1f s%n",
+                    commitNs / 1e9,
                     (System.nanoTime() - t) / 1e9);
-            System.out.printf(Locale.ROOT, "floor: %d routes, %d holds in %.1f s%n", f.routes, f.holds,
+            System.out.printf(
+                    Locale.ROOT,
+                    "floor: %d routes, %d holds in %.1f s%n",
+                    f.routes,
+                    f.holds,
                     (System.nanoTime() - start) / 1e9);
         }
     }
@@ -145,9 +152,9 @@ public final class RawFloor {
                 w.setLong(2, gym(r.get("gym")));
                 w.setString(3, r.get("wall"));
                 w.setString(4, r.get("discipline").toUpperCase(Locale.ROOT));
-                setDouble(w, 5, r.get("angle_deg"));
-                setDouble(w, 6, r.get("height_m"));
-                setDouble(w, 7, r.get("width_m"));
+                FloorCells.setDouble(w, 5, r.get("angle_deg"));
+                FloorCells.setDouble(w, 6, r.get("height_m"));
+                FloorCells.setDouble(w, 7, r.get("width_m"));
                 String cycle = r.get("cycle_days");
                 if (cycle.isEmpty()) {
                     w.setNull(8, Types.INTEGER);
@@ -178,15 +185,15 @@ public final class RawFloor {
     private void routesWithHolds(Path routesFile, Path holdsFile) throws IOException, SQLException {
         try (CSVParser p = open(routesFile);
                 CSVParser hp = open(holdsFile);
-                PreparedStatement reset = db.prepareStatement("insert into reset (id, gym_id, wall_id, label, reset_on)"
-                        + " values (?, ?, ?, ?, ?)");
+                PreparedStatement reset = db.prepareStatement(
+                        "insert into reset (id, gym_id, wall_id, label, reset_on)" + " values (?, ?, ?, ?, ?)");
                 PreparedStatement setter = db.prepareStatement("insert into setter (id, name) values (?, ?)");
                 PreparedStatement route = db.prepareStatement("insert into route (id, gym_id, wall_id, reset_id, "
                         + "label, set_on, stripped_on, discipline, grade_text, grade_scale, grade_ircra, color, "
                         + "angle_deg, moves, styles, move_difficulty, notes) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, "
                         + "?, ?, ?, ?, ?, ?)");
-                PreparedStatement routeSetter = db.prepareStatement("insert into route_setter (route_id, setter_id, "
-                        + "ord) values (?, ?, ?)");
+                PreparedStatement routeSetter = db.prepareStatement(
+                        "insert into route_setter (route_id, setter_id, " + "ord) values (?, ?, ?)");
                 PreparedStatement hold = db.prepareStatement("insert into hold_placement (id, route_id, ordinal, seq, "
                         + "role, hold_type, hold_size, grip_deg, hold_ref, x_m, y_m) values (?, ?, ?, ?, ?, ?, ?, ?, "
                         + "?, ?, ?)")) {
@@ -199,83 +206,35 @@ public final class RawFloor {
                 long gym = gym(gymName);
                 long wall = walls.get(gymName + "\u0000" + wallName);
                 LocalDate setOn = LocalDate.parse(r.get("set_on"));
-                String resetLabel = wallName + " " + setOn;
-                Long resetId = resets.get(gymName + "\u0000" + resetLabel);
-                if (resetId == null) {
-                    resetId = nextId++;
-                    resets.put(gymName + "\u0000" + resetLabel, resetId);
-                    reset.setLong(1, resetId);
-                    reset.setLong(2, gym);
-                    reset.setLong(3, wall);
-                    reset.setString(4, resetLabel);
-                    reset.setDate(5, Date.valueOf(setOn));
-                    reset.executeUpdate();
-                }
+                Long resetId = resetId(reset, gymName, gym, wall, wallName, setOn);
                 Discipline discipline = Discipline.parse(r.get("discipline"));
-                String scale = r.get("grade_scale");
-                Grade grade = grades.read(r.get("grade"), discipline, scale.isEmpty() ? null : GradeScale.parse(scale),
-                        Set.of());
+                Grade grade = grade(r, discipline);
                 long id = nextId++;
                 String label = r.get("route");
                 String stripped = r.get("stripped_on");
-                List<String> moves = list(r.get("moves"));
-                List<String> styles = list(r.get("styles"));
-                route.setLong(1, id);
-                route.setLong(2, gym);
-                route.setLong(3, wall);
-                route.setLong(4, resetId);
-                route.setString(5, label);
-                route.setDate(6, Date.valueOf(setOn));
-                route.setDate(7, stripped.isEmpty() ? null : Date.valueOf(LocalDate.parse(stripped)));
-                route.setString(8, discipline.name());
-                route.setString(9, grade.text());
-                route.setString(10, grade.scale().name());
-                route.setDouble(11, grade.ircra());
-                route.setString(12, emptyToNull(r.get("color")));
-                setDouble(route, 13, r.get("angle_deg"));
-                route.setString(14, json(moves));
-                route.setString(15, json(styles));
-                route.setString(16, json(list(r.get("move_difficulty"))));
-                route.setString(17, emptyToNull(r.get("notes")));
+                List<String> moves = FloorCells.list(r.get("moves"));
+                List<String> styles = FloorCells.list(r.get("styles"));
+                bindRoute(route, r, id, gym, wall, resetId, label, setOn, stripped, discipline, grade, moves, styles);
                 route.addBatch();
-                List<String> names = list(r.get("setters"));
-                for (int i = 0; i < names.size(); i++) {
-                    Long s = setters.get(names.get(i));
-                    if (s == null) {
-                        s = nextId++;
-                        setters.put(names.get(i), s);
-                        setter.setLong(1, s);
-                        setter.setString(2, names.get(i));
-                        setter.executeUpdate();
-                    }
-                    routeSetter.setLong(1, id);
-                    routeSetter.setLong(2, s);
-                    routeSetter.setInt(3, i);
-                    routeSetter.addBatch();
-                }
+                List<String> names = FloorCells.list(r.get("setters"));
+                link(setter, routeSetter, id, names);
                 if (++n % BATCH == 0) {
-                    route.executeBatch();
-                    routeSetter.executeBatch();
+                    executeBatches(route, routeSetter);
                 }
                 routes++;
-                RouteDoc rd = document(id, gymName, wallName, label, r, discipline, grade, setOn, stripped, names,
-                        moves, styles);
+                RouteDoc rd = document(
+                        id, gymName, wallName, label, r, discipline, grade, setOn, stripped, names, moves, styles);
                 String key = key(gymName, wallName, label, r.get("set_on"));
-                while (next != null && key(next.get("gym"), next.get("wall"), next.get("route"), next.get("set_on"))
-                        .equals(key)) {
+                while (sameRoute(next, key)) {
                     hold(hold, rd, next);
                     if (holds % BATCH == 0) {
-                        route.executeBatch();
-                        routeSetter.executeBatch();
-                        hold.executeBatch();
+                        executeBatches(route, routeSetter, hold);
                     }
                     next = holdRows.hasNext() ? holdRows.next() : null;
                 }
                 finish(rd);
             }
-            route.executeBatch();
-            routeSetter.executeBatch();
-            hold.executeBatch();
+            executeBatches(route, routeSetter, hold);
             if (next != null) {
                 throw new IllegalStateException(holdsFile + " line " + hp.getCurrentLineNumber() + ": a hold of a "
                         + "route that is not next in " + routesFile + " (the floor reads both files side by side)");
@@ -283,8 +242,99 @@ public final class RawFloor {
         }
     }
 
-    private RouteDoc document(long id, String gym, String wall, String label, CSVRecord r, Discipline discipline,
-            Grade grade, LocalDate setOn, String stripped, List<String> setterNames, List<String> moves,
+    private Grade grade(CSVRecord r, Discipline discipline) {
+        String scale = r.get("grade_scale");
+        return grades.read(r.get("grade"), discipline, scale.isEmpty() ? null : GradeScale.parse(scale), Set.of());
+    }
+
+    /** Sends the batches in this order: parents before children. */
+    private static void executeBatches(PreparedStatement... statements) throws SQLException {
+        for (PreparedStatement s : statements) {
+            s.executeBatch();
+        }
+    }
+
+    private Long resetId(PreparedStatement reset, String gymName, long gym, long wall, String wallName, LocalDate setOn)
+            throws SQLException {
+        String resetLabel = wallName + " " + setOn;
+        Long resetId = resets.get(gymName + "\u0000" + resetLabel);
+        if (resetId == null) {
+            resetId = nextId++;
+            resets.put(gymName + "\u0000" + resetLabel, resetId);
+            reset.setLong(1, resetId);
+            reset.setLong(2, gym);
+            reset.setLong(3, wall);
+            reset.setString(4, resetLabel);
+            reset.setDate(5, Date.valueOf(setOn));
+            reset.executeUpdate();
+        }
+        return resetId;
+    }
+
+    private static void bindRoute(
+            PreparedStatement route,
+            CSVRecord r,
+            long id,
+            long gym,
+            long wall,
+            long resetId,
+            String label,
+            LocalDate setOn,
+            String stripped,
+            Discipline discipline,
+            Grade grade,
+            List<String> moves,
+            List<String> styles)
+            throws SQLException {
+        route.setLong(1, id);
+        route.setLong(2, gym);
+        route.setLong(3, wall);
+        route.setLong(4, resetId);
+        route.setString(5, label);
+        route.setDate(6, Date.valueOf(setOn));
+        route.setDate(7, stripped.isEmpty() ? null : Date.valueOf(LocalDate.parse(stripped)));
+        route.setString(8, discipline.name());
+        route.setString(9, grade.text());
+        route.setString(10, grade.scale().name());
+        route.setDouble(11, grade.ircra());
+        route.setString(12, FloorCells.emptyToNull(r.get("color")));
+        FloorCells.setDouble(route, 13, r.get("angle_deg"));
+        route.setString(14, FloorCells.json(moves));
+        route.setString(15, FloorCells.json(styles));
+        route.setString(16, FloorCells.json(FloorCells.list(r.get("move_difficulty"))));
+        route.setString(17, FloorCells.emptyToNull(r.get("notes")));
+    }
+
+    private void link(PreparedStatement setter, PreparedStatement routeSetter, long id, List<String> names)
+            throws SQLException {
+        for (int i = 0; i < names.size(); i++) {
+            Long s = setters.get(names.get(i));
+            if (s == null) {
+                s = nextId++;
+                setters.put(names.get(i), s);
+                setter.setLong(1, s);
+                setter.setString(2, names.get(i));
+                setter.executeUpdate();
+            }
+            routeSetter.setLong(1, id);
+            routeSetter.setLong(2, s);
+            routeSetter.setInt(3, i);
+            routeSetter.addBatch();
+        }
+    }
+
+    private RouteDoc document(
+            long id,
+            String gym,
+            String wall,
+            String label,
+            CSVRecord r,
+            Discipline discipline,
+            Grade grade,
+            LocalDate setOn,
+            String stripped,
+            List<String> setterNames,
+            List<String> moves,
             List<String> styles) {
         RouteDoc rd = new RouteDoc(id);
         Document d = rd.doc;
@@ -300,7 +350,9 @@ public final class RawFloor {
         d.add(new DoubleDocValuesField("ircra", grade.ircra()));
         d.add(new LongPoint("set", setOn.toEpochDay()));
         d.add(new NumericDocValuesField("set", setOn.toEpochDay()));
-        d.add(new LongPoint("stripped", stripped.isEmpty() ? Long.MAX_VALUE : LocalDate.parse(stripped).toEpochDay()));
+        d.add(new LongPoint(
+                "stripped",
+                stripped.isEmpty() ? Long.MAX_VALUE : LocalDate.parse(stripped).toEpochDay()));
         String angle = r.get("angle_deg");
         if (!angle.isEmpty()) {
             d.add(new DoublePoint("angle", Double.parseDouble(angle)));
@@ -308,21 +360,38 @@ public final class RawFloor {
         d.add(new SortedSetDocValuesFacetField("wall", wall));
         setterNames.forEach(s -> d.add(new SortedSetDocValuesFacetField("setter", s)));
         for (String m : moves) {
-            d.add(new StringField("move", squash(m), Field.Store.NO));
+            d.add(new StringField("move", FloorCells.squash(m), Field.Store.NO));
             d.add(new SortedSetDocValuesFacetField("move", m));
             rd.text.append(' ').append(m);
         }
         for (String s : styles) {
-            d.add(new StringField("style", squash(s), Field.Store.NO));
+            d.add(new StringField("style", FloorCells.squash(s), Field.Store.NO));
             rd.text.append(' ').append(s);
         }
         String notes = r.get("notes");
         if (!notes.isEmpty()) {
             d.add(new TextField("notes", notes, Field.Store.NO));
         }
-        rd.text.append(' ').append(label).append(' ').append(wall).append(' ').append(grade.text()).append(' ')
-                .append(r.get("color")).append(' ').append(String.join(" ", setterNames)).append(' ').append(notes);
+        rd.text
+                .append(' ')
+                .append(label)
+                .append(' ')
+                .append(wall)
+                .append(' ')
+                .append(grade.text())
+                .append(' ')
+                .append(r.get("color"))
+                .append(' ')
+                .append(String.join(" ", setterNames))
+                .append(' ')
+                .append(notes);
         return rd;
+    }
+
+    private static boolean sameRoute(CSVRecord hold, String key) {
+        return hold != null
+                && key(hold.get("gym"), hold.get("wall"), hold.get("route"), hold.get("set_on"))
+                        .equals(key);
     }
 
     private static String key(String gym, String wall, String route, String setOn) {
@@ -333,7 +402,7 @@ public final class RawFloor {
         String role = r.get("role").toUpperCase(Locale.ROOT);
         String type = r.get("type");
         String size = r.get("size");
-        List<String> grips = list(r.get("grip"));
+        List<String> grips = FloorCells.list(r.get("grip"));
         hold.setLong(1, nextId++);
         hold.setLong(2, rd.id);
         hold.setInt(3, rd.ordinal++);
@@ -347,12 +416,12 @@ public final class RawFloor {
         hold.setString(6, type);
         hold.setString(7, size.isEmpty() ? null : size.toUpperCase(Locale.ROOT));
         hold.setString(8, grips.isEmpty() ? null : "[" + String.join(",", grips) + "]");
-        hold.setString(9, emptyToNull(r.get("hold_ref")));
-        setDouble(hold, 10, r.get("x_m"));
-        setDouble(hold, 11, r.get("y_m"));
+        hold.setString(9, FloorCells.emptyToNull(r.get("hold_ref")));
+        FloorCells.setDouble(hold, 10, r.get("x_m"));
+        FloorCells.setDouble(hold, 11, r.get("y_m"));
         hold.addBatch();
         holds++;
-        String key = squash(type);
+        String key = FloorCells.squash(type);
         rd.holdTerms.add(key);
         rd.types.add(type);
         if (!size.isEmpty()) {
@@ -386,46 +455,6 @@ public final class RawFloor {
     private static void keyword(Document d, String field, String value) {
         if (value != null && !value.isBlank()) {
             d.add(new StringField(field, value.strip().toLowerCase(Locale.ROOT), Field.Store.NO));
-        }
-    }
-
-    private static String squash(String s) {
-        StringBuilder b = new StringBuilder(s.length());
-        s.toLowerCase(Locale.ROOT).codePoints().filter(Character::isLetterOrDigit).forEach(b::appendCodePoint);
-        return b.toString();
-    }
-
-    private static List<String> list(String cell) {
-        List<String> out = new ArrayList<>();
-        for (String s : cell.split(";")) {
-            if (!s.isBlank()) {
-                out.add(s.strip());
-            }
-        }
-        return out;
-    }
-
-    private static String json(List<String> xs) {
-        if (xs.isEmpty()) {
-            return null;
-        }
-        StringBuilder b = new StringBuilder("[");
-        for (String x : xs) {
-            b.append(b.length() > 1 ? "," : "").append('"').append(x.replace("\\", "\\\\").replace("\"", "\\\""))
-                    .append('"');
-        }
-        return b.append(']').toString();
-    }
-
-    private static String emptyToNull(String s) {
-        return s == null || s.isEmpty() ? null : s;
-    }
-
-    private static void setDouble(PreparedStatement s, int i, String cell) throws SQLException {
-        if (cell == null || cell.isEmpty()) {
-            s.setNull(i, Types.DOUBLE);
-        } else {
-            s.setDouble(i, Double.parseDouble(cell));
         }
     }
 }

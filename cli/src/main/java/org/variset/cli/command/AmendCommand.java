@@ -12,21 +12,29 @@ import org.variset.archive.route.Route;
 import org.variset.archive.store.Archive;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.convert.DateConverter;
 import org.variset.cli.convert.GradeScaleConverter;
+import org.variset.cli.internal.IndexUpkeep;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** Corrects one route's fields without re-importing a file. */
-@Command(name = "amend", mixinStandardHelpOptions = true,
-        description = {"Correct one route: its grade, setters, moves, styles, move difficulties, colour, notes or "
-                + "strip date. Lists are separated by ;."},
-        footer = {"", "Examples:", "  variset amend \"Blue 3\" --wall Cave --set-on 2026-03-02 --grade V5",
+@Command(
+        name = "amend",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Correct one route: its grade, setters, moves, styles, move difficulties, colour, notes or "
+                    + "strip date. Lists are separated by ;."
+        },
+        footer = {
+            "",
+            "Examples:",
+            "  variset amend \"Blue 3\" --wall Cave --set-on 2026-03-02 --grade V5",
             "  variset amend N1 --wall \"North Arch\" --set-on 2026-03-02 --setters \"Kit Ames;Rui Sol\"",
-            "  variset amend N1 --wall \"North Arch\" --set-on 2026-03-02 --still-up"})
+            "  variset amend N1 --wall \"North Arch\" --set-on 2026-03-02 --still-up"
+        })
 final class AmendCommand extends VarisetSubcommand {
     @Parameters(paramLabel = "ROUTE", description = "The route's label.")
     String label;
@@ -37,14 +45,21 @@ final class AmendCommand extends VarisetSubcommand {
     @Option(names = "--wall", required = true, paramLabel = "WALL", description = "The route's wall.")
     String wall;
 
-    @Option(names = "--set-on", required = true, paramLabel = "DATE", converter = DateConverter.class,
+    @Option(
+            names = "--set-on",
+            required = true,
+            paramLabel = "DATE",
+            converter = DateConverter.class,
             description = "The day the route went up (with the label and wall, what identifies it).")
     LocalDate setOn;
 
     @Option(names = "--grade", paramLabel = "GRADE", description = "The grade as written.")
     String grade;
 
-    @Option(names = "--scale", paramLabel = "SCALE", converter = GradeScaleConverter.class,
+    @Option(
+            names = "--scale",
+            paramLabel = "SCALE",
+            converter = GradeScaleConverter.class,
             description = "The grade's scale, when it fits two.")
     GradeScale scale;
 
@@ -60,7 +75,10 @@ final class AmendCommand extends VarisetSubcommand {
     @Option(names = "--move-difficulty", paramLabel = "LIST", description = "Numbers 1-10, separated by ;.")
     String difficulty;
 
-    @Option(names = "--stripped-on", paramLabel = "DATE", converter = DateConverter.class,
+    @Option(
+            names = "--stripped-on",
+            paramLabel = "DATE",
+            converter = DateConverter.class,
             description = "The day it came down.")
     LocalDate strippedOn;
 
@@ -78,17 +96,29 @@ final class AmendCommand extends VarisetSubcommand {
         if (stillUp && strippedOn != null) {
             throw new IllegalArgumentException("give --stripped-on or --still-up, not both");
         }
-        RouteCorrection c = new RouteCorrection(grade, scale, list(setters), list(moves), list(styles),
-                difficulty == null ? null : list(difficulty).stream().map(AmendCommand::number).toList(),
-                strippedOn, stillUp, color, notes);
+        RouteCorrection c = new RouteCorrection(
+                grade,
+                scale,
+                list(setters),
+                list(moves),
+                list(styles),
+                difficulty == null
+                        ? null
+                        : list(difficulty).stream().map(AmendCommand::number).toList(),
+                strippedOn,
+                stillUp,
+                color,
+                notes);
         List<String> changed;
         try (Archive archive = openArchive()) {
             changed = archive.fromTransaction(s -> {
                 GymLookup lookup = new GymLookup(s);
                 Gym g = lookup.gym(gym.gym);
                 Wall w = lookup.wall(g, wall);
-                Route r = new org.variset.archive.store.ArchiveQueries(s).route(w, label, setOn).orElseThrow(() ->
-                        new IllegalArgumentException("no route '" + label + "' set on " + setOn + " on " + wall));
+                Route r = new org.variset.archive.store.ArchiveQueries(s)
+                        .route(w, label, setOn)
+                        .orElseThrow(() -> new IllegalArgumentException(
+                                "no route '" + label + "' set on " + setOn + " on " + wall));
                 return c.apply(s, r, Vocabulary.defaults());
             });
             IndexUpkeep.afterWrite(archive, err());
@@ -103,8 +133,12 @@ final class AmendCommand extends VarisetSubcommand {
     }
 
     private static List<String> list(String text) {
-        return text == null ? null : Arrays.stream(text.split(";")).map(String::strip).filter(x -> !x.isEmpty())
-                .toList();
+        return text == null
+                ? null
+                : Arrays.stream(text.split(";"))
+                        .map(String::strip)
+                        .filter(x -> !x.isEmpty())
+                        .toList();
     }
 
     private static Integer number(String text) {

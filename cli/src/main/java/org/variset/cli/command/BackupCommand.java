@@ -11,11 +11,15 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** Writes a consistent backup of the archive. */
-@Command(name = "backup", mixinStandardHelpOptions = true,
-        description = {"Write a backup of the archive to FILE: the database as one consistent snapshot and a "
-                + "manifest with its SHA-256 checksum and counts. The backup takes the archive's lock like any "
-                + "command, so it waits for a running import to finish (up to --wait) and nothing changes while it "
-                + "copies. The search index is not in it: it is rebuilt from the database after a restore."},
+@Command(
+        name = "backup",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Write a backup of the archive to FILE: the database as one consistent snapshot and a "
+                    + "manifest with its SHA-256 checksum and counts. The backup takes the archive's lock like any "
+                    + "command, so it waits for a running import to finish (up to --wait) and nothing changes while it "
+                    + "copies. The search index is not in it: it is rebuilt from the database after a restore."
+        },
         footer = {"", "Example:", "  variset backup backups/archive-2026-12-02.zip"})
 final class BackupCommand extends VarisetSubcommand {
     @Parameters(paramLabel = "FILE", description = "The backup file to write (a zip).")
@@ -24,7 +28,10 @@ final class BackupCommand extends VarisetSubcommand {
     @Option(names = "--force", description = "Replace FILE if it exists.")
     boolean force;
 
-    @Option(names = "--wait", paramLabel = "SECONDS", defaultValue = "60",
+    @Option(
+            names = "--wait",
+            paramLabel = "SECONDS",
+            defaultValue = "60",
             description = "How long to wait for another process using the archive (default: ${DEFAULT-VALUE}).")
     int waitSeconds;
 
@@ -35,9 +42,12 @@ final class BackupCommand extends VarisetSubcommand {
             m = ArchiveBackup.write(archive, file, force);
         }
         JsonNode c = m.get("counts");
-        out().println("Backed up " + c.get("routes").asLong() + " routes, " + c.get("holds").asLong() + " holds, "
-                + c.get("gyms").asLong() + (c.get("gyms").asLong() == 1 ? " gym" : " gyms") + " to " + file + " (schema version " + m.get("schema_version").asInt()
-                + ", SHA-256 of the database " + m.at("/database/sha256").asText().substring(0, 16) + "...).");
+        out().println("Backed up " + c.get("routes").asLong() + " routes, "
+                + c.get("holds").asLong() + " holds, "
+                + c.get("gyms").asLong() + (c.get("gyms").asLong() == 1 ? " gym" : " gyms") + " to " + file
+                + " (schema version " + m.get("schema_version").asInt()
+                + ", SHA-256 of the database "
+                + m.at("/database/sha256").asText().substring(0, 16) + "...).");
         return ExitCode.OK;
     }
 }

@@ -14,13 +14,18 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Checks the archive's database and search index. */
-@Command(name = "check", mixinStandardHelpOptions = true,
-        description = {"Check the archive: the database (schema version, every row reads back, nothing refers to a "
-                + "row that is gone, every route on its reset's wall) and the search index (Lucene's check, one "
-                + "document per route, in step with the database). The exit status is 0 when all is well, 3 when "
-                + "something is not.", "",
+@Command(
+        name = "check",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Check the archive: the database (schema version, every row reads back, nothing refers to a "
+                    + "row that is gone, every route on its reset's wall) and the search index (Lucene's check, one "
+                    + "document per route, in step with the database). The exit status is 0 when all is well, 3 when "
+                    + "something is not.",
+            "",
             "--repair rebuilds what is derived (the index). Database problems cannot be repaired here: restore the "
-                + "latest backup ('variset restore FILE')."})
+                    + "latest backup ('variset restore FILE')."
+        })
 final class CheckCommand extends VarisetSubcommand {
     @Option(names = "--repair", description = "Rebuild the search index when it is not sound or not in step.")
     boolean repair;
@@ -32,7 +37,8 @@ final class CheckCommand extends VarisetSubcommand {
     ExitCode execute() {
         CheckReport report;
         boolean repaired = false;
-        try (Archive archive = openArchive(); SearchIndex index = SearchIndex.of(archive)) {
+        try (Archive archive = openArchive();
+                SearchIndex index = SearchIndex.of(archive)) {
             report = ArchiveCheck.run(archive, index);
             if (repair && !report.healthy() && report.databaseHealthy()) {
                 index.rebuild(archive.connection(), IndexProgress.NONE, "repair asked for");
@@ -43,8 +49,12 @@ final class CheckCommand extends VarisetSubcommand {
         if (format.json()) {
             ObjectNode o = Json.object().put("healthy", report.healthy()).put("index_rebuilt", repaired);
             ArrayNode a = o.putArray("checks");
-            report.items().forEach(i -> a.addObject().put("part", i.part()).put("check", i.name()).put("ok", i.ok())
-                    .put("detail", i.detail()));
+            report.items()
+                    .forEach(i -> a.addObject()
+                            .put("part", i.part())
+                            .put("check", i.name())
+                            .put("ok", i.ok())
+                            .put("detail", i.detail()));
             out().println(Json.write(o));
         } else {
             print(report, repaired);

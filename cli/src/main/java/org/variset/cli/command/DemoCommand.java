@@ -19,17 +19,26 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /** Loads the bundled sample gym into a fresh archive of its own folder, audits it and writes the reports. */
-@Command(name = "demo", mixinStandardHelpOptions = true,
-        description = {"Show the whole job on the bundled sample gym (Lantern Rock, invented): load its two years of "
-                + "resets into a fresh archive inside the demo's own folder, audit the latest reset of each wall, "
-                + "the gym's routes up and each setter's year, and write the reset audits and the annual report as "
-                + "PDF (with JSON beside them). It never touches your real archive, and replaces only what it made "
-                + "itself.", "", "The sample ends on " + "2026-11-30; the demo audits as of that day."})
+@Command(
+        name = "demo",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Show the whole job on the bundled sample gym (Lantern Rock, invented): load its two years of "
+                    + "resets into a fresh archive inside the demo's own folder, audit the latest reset of each wall, "
+                    + "the gym's routes up and each setter's year, and write the reset audits and the annual report as "
+                    + "PDF (with JSON beside them). It never touches your real archive, and replaces only what it made "
+                    + "itself.",
+            "",
+            "The sample ends on " + "2026-11-30; the demo audits as of that day."
+        })
 final class DemoCommand extends VarisetSubcommand {
     /** Marks a folder as the demo's own, so that a later run may replace what is in it. */
     static final String MARKER = ".variset-demo";
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "variset-demo",
+    @Option(
+            names = "--out",
+            paramLabel = "DIR",
+            defaultValue = "variset-demo",
             description = "The demo's folder (default: ${DEFAULT-VALUE}).")
     Path out;
 
@@ -49,7 +58,12 @@ final class DemoCommand extends VarisetSubcommand {
                     + s.holds() + " holds, " + s.walls() + " walls, " + s.resets() + " resets, " + s.setters()
                     + " setters, set " + s.firstSetOn() + " to " + s.lastSetOn() + ".");
             err().println("Auditing as of " + SampleGenerator.SAMPLE_END + " and writing the reports ...");
-            new DemoReports(archive, dir.resolve("reports"), SampleGenerator.SAMPLE_END, root().cli().clock(), out())
+            new DemoReports(
+                            archive,
+                            dir.resolve("reports"),
+                            SampleGenerator.SAMPLE_END,
+                            root().cli().clock(),
+                            out())
                     .write();
         } catch (IOException e) {
             throw new IllegalArgumentException("cannot write the demo into " + dir + ": " + e.getMessage(), e);
@@ -68,8 +82,8 @@ final class DemoCommand extends VarisetSubcommand {
                     empty = s.findAny().isEmpty();
                 }
                 if (!empty && !Files.exists(dir.resolve(MARKER))) {
-                    throw new IllegalArgumentException(dir + " holds files the demo did not make; give another "
-                            + "folder with --out");
+                    throw new IllegalArgumentException(
+                            dir + " holds files the demo did not make; give another " + "folder with --out");
                 }
                 for (String mine : List.of("archive", "sample", "reports")) {
                     deleteTree(dir.resolve(mine));

@@ -24,28 +24,46 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** Reads a grade and shows it on the IRCRA axis with its equivalents. Needs no archive. */
-@Command(name = "grade", mixinStandardHelpOptions = true,
-        description = {"Read a grade as setters write it, place it on the IRCRA axis and show its equivalents.",
+@Command(
+        name = "grade",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Read a grade as setters write it, place it on the IRCRA axis and show its equivalents.",
             "Scales: V (V4, V0+, V3/4), Font (6B+), YDS (5.10c, 5.10-), French (6a+), UIAA (VII+, 7-), and",
             "IRCRA numbers with --scale ircra. A grade spanning several rows of the IRCRA table converts to",
-            "every grade on those rows."},
-        footer = {"", "Examples:", "  variset grade 5.11d --to french", "  variset grade 6A+ --discipline rope",
-            "  variset grade 5+ --discipline rope --scale uiaa"})
+            "every grade on those rows."
+        },
+        footer = {
+            "",
+            "Examples:",
+            "  variset grade 5.11d --to french",
+            "  variset grade 6A+ --discipline rope",
+            "  variset grade 5+ --discipline rope --scale uiaa"
+        })
 final class GradeCommand extends VarisetSubcommand {
     @Parameters(paramLabel = "GRADE", description = "The grade as written.")
     String text;
 
-    @Option(names = "--discipline", paramLabel = "boulder|rope", converter = DisciplineConverter.class,
+    @Option(
+            names = "--discipline",
+            paramLabel = "boulder|rope",
+            converter = DisciplineConverter.class,
             description = "The route's discipline; decides which scales fit (boulder: V, Font; rope: YDS, "
                     + "French, UIAA).")
     Discipline discipline;
 
-    @Option(names = "--scale", paramLabel = "SCALE", converter = GradeScaleConverter.class,
+    @Option(
+            names = "--scale",
+            paramLabel = "SCALE",
+            converter = GradeScaleConverter.class,
             description = "The scale the grade is written in, when the text fits two: v, font, yds, french, "
                     + "uiaa, ircra.")
     GradeScale scale;
 
-    @Option(names = "--to", paramLabel = "SCALE", converter = GradeScaleConverter.class,
+    @Option(
+            names = "--to",
+            paramLabel = "SCALE",
+            converter = GradeScaleConverter.class,
             description = "Show only the equivalents in this scale.")
     GradeScale to;
 
@@ -59,7 +77,8 @@ final class GradeCommand extends VarisetSubcommand {
             g = GradeReader.standard().read(text, discipline, scale, Set.of());
         } catch (GradeException e) {
             if (e.ambiguous()) {
-                String options = e.readings().stream().map(r -> "--scale " + r.scale().word())
+                String options = e.readings().stream()
+                        .map(r -> "--scale " + r.scale().word())
                         .collect(Collectors.joining(" or "));
                 throw new IllegalArgumentException(e.getMessage() + ". Choose with " + options + ".", e);
             }
@@ -93,15 +112,19 @@ final class GradeCommand extends VarisetSubcommand {
     }
 
     private void printText(Grade g, Discipline d, List<GradeScale> targets) {
-        StringBuilder head = new StringBuilder(g.text().strip() + ": " + g.describe() + ", IRCRA "
-                + g.ircraText());
+        StringBuilder head = new StringBuilder(g.text().strip() + ": " + g.describe() + ", IRCRA " + g.ircraText());
         if (d != null) {
-            head.append(" (default ").append(d.word()).append(" band ").append(band(g, d)).append(')');
+            head.append(" (default ")
+                    .append(d.word())
+                    .append(" band ")
+                    .append(band(g, d))
+                    .append(')');
         }
         out().println(head);
         if (g.modifier() != GradeModifier.NONE) {
             out().println("  The table has no " + g.canonical() + (g.modifier() == GradeModifier.HARD ? "+" : "-")
-                    + ": read as " + g.canonical() + ", kept as a " + g.modifier().name().toLowerCase() + " flag.");
+                    + ": read as " + g.canonical() + ", kept as a "
+                    + g.modifier().name().toLowerCase() + " flag.");
         }
         if (g.beyondTable()) {
             out().println("  Beyond the IRCRA table: the axis is extended one level per grade step.");
@@ -109,8 +132,9 @@ final class GradeCommand extends VarisetSubcommand {
         GradeConverter converter = GradeConverter.standard();
         for (GradeScale s : targets) {
             List<String> eq = converter.equivalents(g, s);
-            out().printf("  %-7s %s%n", s.displayName(), eq.isEmpty() ? "(no equivalent in the table)"
-                    : String.join(", ", eq));
+            out().printf(
+                            "  %-7s %s%n",
+                            s.displayName(), eq.isEmpty() ? "(no equivalent in the table)" : String.join(", ", eq));
         }
     }
 

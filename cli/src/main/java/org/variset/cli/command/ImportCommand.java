@@ -5,8 +5,8 @@ import java.nio.file.Path;
 import java.util.List;
 import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.internal.ConsoleProgress;
+import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.internal.Json;
 import org.variset.imports.ImportException;
 import org.variset.imports.load.ArchiveImporter;
@@ -18,14 +18,23 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** Imports interchange files into the archive. */
-@Command(name = "import", mixinStandardHelpOptions = true,
-        description = {"Import routes, holds and walls from CSV files, an XLSX workbook (sheets routes, holds, "
-                + "walls) or a JSON document.",
+@Command(
+        name = "import",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Import routes, holds and walls from CSV files, an XLSX workbook (sheets routes, holds, "
+                    + "walls) or a JSON document.",
             "One import writes every row or none. Importing the same rows again adds nothing; a changed row for a "
-                + "route already in the archive is refused, with its differences, unless --update is given.",
-            "Errors are listed as file:line: column: what is wrong (what was expected)."},
-        footer = {"", "Examples:", "  variset import routes.csv holds.csv", "  variset import reset.xlsx --dry-run",
-            "  variset import spring.json --skip-bad-rows"})
+                    + "route already in the archive is refused, with its differences, unless --update is given.",
+            "Errors are listed as file:line: column: what is wrong (what was expected)."
+        },
+        footer = {
+            "",
+            "Examples:",
+            "  variset import routes.csv holds.csv",
+            "  variset import reset.xlsx --dry-run",
+            "  variset import spring.json --skip-bad-rows"
+        })
 final class ImportCommand extends VarisetSubcommand {
     @Parameters(paramLabel = "FILE", arity = "1..*", description = "Files to import (.csv, .xlsx, .json).")
     List<Path> files;
@@ -44,7 +53,9 @@ final class ImportCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        ImportOptions options = ImportOptions.defaults().withDryRun(dryRun).withSkipBadRows(skipBadRows)
+        ImportOptions options = ImportOptions.defaults()
+                .withDryRun(dryRun)
+                .withSkipBadRows(skipBadRows)
                 .withUpdate(update);
         ImportSummary s;
         try (Archive archive = openArchive();
@@ -93,7 +104,9 @@ final class ImportCommand extends VarisetSubcommand {
     private static ObjectNode json(ImportSummary s) {
         ObjectNode o = Json.object();
         o.put("dry_run", s.dryRun());
-        o.putObject("routes").put("new", s.routesNew()).put("unchanged", s.routesUnchanged())
+        o.putObject("routes")
+                .put("new", s.routesNew())
+                .put("unchanged", s.routesUnchanged())
                 .put("changed", s.routesChanged());
         o.putObject("walls").put("new", s.wallsNew()).put("changed", s.wallsChanged());
         o.put("holds_written", s.holdsWritten());

@@ -10,7 +10,9 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
 /** Says what the archive holds. */
-@Command(name = "info", mixinStandardHelpOptions = true,
+@Command(
+        name = "info",
+        mixinStandardHelpOptions = true,
         description = "Show what the archive holds: gyms, walls, resets, routes, holds, setters, the span of "
                 + "set dates, and the schema version.")
 final class InfoCommand extends VarisetSubcommand {
@@ -51,8 +53,7 @@ final class InfoCommand extends VarisetSubcommand {
         out().printf("Routes    %d%n", s.routes());
         out().printf("Holds     %d%n", s.holds());
         out().printf("Setters   %d%n", s.setters());
-        out().printf("Set dates %s%n", s.firstSetOn() == null ? "none yet"
-                : s.firstSetOn() + " to " + s.lastSetOn());
+        out().printf("Set dates %s%n", s.firstSetOn() == null ? "none yet" : s.firstSetOn() + " to " + s.lastSetOn());
         if (s.routes() == 0) {
             out().println("The archive is empty: add sets with 'variset import FILE...'.");
         }

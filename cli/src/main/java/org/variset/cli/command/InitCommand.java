@@ -9,10 +9,14 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
 /** Creates an empty archive. */
-@Command(name = "init", mixinStandardHelpOptions = true,
-        description = {"Create an empty archive (see --archive and --db for where). With --db, makes the archive's tables "
-                + "in an empty PostgreSQL database (or schema).",
-            "Running it again on an existing archive changes nothing and says so."})
+@Command(
+        name = "init",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Create an empty archive (see --archive and --db for where). With --db, makes the archive's tables "
+                    + "in an empty PostgreSQL database (or schema).",
+            "Running it again on an existing archive changes nothing and says so."
+        })
 final class InitCommand extends VarisetSubcommand {
     @Mixin
     FormatOptions format;
@@ -23,8 +27,8 @@ final class InitCommand extends VarisetSubcommand {
         boolean existed;
         int version;
         if (where.shared()) {
-            try (Archive archive = Archive.openServer(where.server(), where.clientDir(), true,
-                    org.variset.archive.store.ArchiveLock.DEFAULT_WAIT)) {
+            try (Archive archive = Archive.openServer(
+                    where.server(), where.clientDir(), true, org.variset.archive.store.ArchiveLock.DEFAULT_WAIT)) {
                 existed = !archive.wasCreated();
                 version = archive.schemaVersion().version();
             }

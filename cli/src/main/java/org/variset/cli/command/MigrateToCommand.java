@@ -14,21 +14,26 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
 
 /** Copies the embedded archive into an empty shared one on a PostgreSQL server, verified. */
-@Command(name = "migrate-to", mixinStandardHelpOptions = true,
-        description = {"Copy this embedded archive (see --archive) into an empty shared archive on a PostgreSQL "
-                + "server, for a chain whose gyms and head office all use one archive.",
+@Command(
+        name = "migrate-to",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Copy this embedded archive (see --archive) into an empty shared archive on a PostgreSQL "
+                    + "server, for a chain whose gyms and head office all use one archive.",
             "",
             "The server's database (or schema) gets the archive's tables if it has none, and must hold no gyms, "
-                + "routes or holds yet. Everything is copied in one transaction; before it commits, each table's "
-                + "row count and a SHA-256 of its rows are read back from the server and compared with the "
-                + "embedded archive's, and they are compared once more after the commit. A copy that does not match "
-                + "is not committed. The embedded archive is not changed.",
+                    + "routes or holds yet. Everything is copied in one transaction; before it commits, each table's "
+                    + "row count and a SHA-256 of its rows are read back from the server and compared with the "
+                    + "embedded archive's, and they are compared once more after the commit. A copy that does not match "
+                    + "is not committed. The embedded archive is not changed.",
             "",
             "Afterwards use the server with --db URL (or VARISET_DB); each client builds its own search index on "
-                + "first use. The password comes from PGPASSWORD or ~/.pgpass, never from the address."})
+                    + "first use. The password comes from PGPASSWORD or ~/.pgpass, never from the address."
+        })
 final class MigrateToCommand extends VarisetSubcommand {
-    @Parameters(paramLabel = "URL", description = "The shared archive, as postgresql://[user@]host[:port]/database"
-            + "[?currentSchema=name].")
+    @Parameters(
+            paramLabel = "URL",
+            description = "The shared archive, as postgresql://[user@]host[:port]/database" + "[?currentSchema=name].")
     String url;
 
     @Mixin
@@ -42,7 +47,8 @@ final class MigrateToCommand extends VarisetSubcommand {
                     + "archive " + source.shown() + " (from " + source.source() + "); name the embedded one with "
                     + "--archive DIR");
         }
-        ArchiveLocation target = ArchiveLocation.resolve(null, url, root().cli().env(), root().cli().home());
+        ArchiveLocation target = ArchiveLocation.resolve(
+                null, url, root().cli().env(), root().cli().home());
         long start = System.nanoTime();
         List<ArchiveTransfer.Copied> copied;
         try (Archive from = Archive.open(source.dir());
@@ -70,10 +76,13 @@ final class MigrateToCommand extends VarisetSubcommand {
             out().println(Json.write(o));
             return ExitCode.OK;
         }
-        out().printf("Copied the archive at %s into %s in %.1f s; every table's rows and SHA-256 match:%n",
-                source.dir(), target.shown(), seconds);
+        out().printf(
+                        "Copied the archive at %s into %s in %.1f s; every table's rows and SHA-256 match:%n",
+                        source.dir(), target.shown(), seconds);
         for (ArchiveTransfer.Copied c : copied) {
-            out().printf("  %-15s %,10d rows  %s%n", c.table(), c.rows(), c.sha256().substring(0, 16));
+            out().printf(
+                            "  %-15s %,10d rows  %s%n",
+                            c.table(), c.rows(), c.sha256().substring(0, 16));
         }
         out().println("Use it with: variset --db '" + target.shown() + "' info");
         return ExitCode.OK;

@@ -13,7 +13,10 @@ public final class PdfFileOptions {
     @Option(names = "--pdf", paramLabel = "FILE", description = "Also write a PDF document to FILE.")
     Path pdf;
 
-    @Option(names = "--paper", paramLabel = "SIZE", defaultValue = "a4",
+    @Option(
+            names = "--paper",
+            paramLabel = "SIZE",
+            defaultValue = "a4",
             description = "Paper size of the PDF: a4 or letter (default: ${DEFAULT-VALUE}).")
     PdfOptions.Paper paper;
 
@@ -32,8 +35,8 @@ public final class PdfFileOptions {
             return;
         }
         PdfOptions options = new PdfOptions(paper, today, VersionProvider.version());
-        java.util.concurrent.atomic.AtomicReference<Set<String>> missing = new java.util.concurrent.atomic
-                .AtomicReference<>(Set.of());
+        java.util.concurrent.atomic.AtomicReference<Set<String>> missing =
+                new java.util.concurrent.atomic.AtomicReference<>(Set.of());
         AtomicFile.write(pdf, force, out -> missing.set(doc.write(options, out)));
         err.println("Wrote " + pdf + ".");
         if (!missing.get().isEmpty()) {

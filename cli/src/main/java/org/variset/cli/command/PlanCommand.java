@@ -16,13 +16,23 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Proposes what a wall's next reset should bring. */
-@Command(name = "plan", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Propose what a wall's next reset should bring: grade slots that bring the gym's routes up "
-                + "that day as close as possible to the grade target once the wall's current routes come down; grip "
-                + "directions, hold types, moves and styles whose share has fallen behind the gym's last twelve "
-                + "months; and the hold shapes the wall used in its last three resets, to rest.", ""},
-        footer = {"", "Examples:", "  variset plan --wall Cave --routes 8",
-            "  variset plan --wall Cave --on 2026-04-06 --routes 8 --margin 0.1 --format json"})
+@Command(
+        name = "plan",
+        mixinStandardHelpOptions = true,
+        sortOptions = false,
+        description = {
+            "Propose what a wall's next reset should bring: grade slots that bring the gym's routes up "
+                    + "that day as close as possible to the grade target once the wall's current routes come down; grip "
+                    + "directions, hold types, moves and styles whose share has fallen behind the gym's last twelve "
+                    + "months; and the hold shapes the wall used in its last three resets, to rest.",
+            ""
+        },
+        footer = {
+            "",
+            "Examples:",
+            "  variset plan --wall Cave --routes 8",
+            "  variset plan --wall Cave --on 2026-04-06 --routes 8 --margin 0.1 --format json"
+        })
 final class PlanCommand extends VarisetSubcommand {
     @Mixin
     GymOptions gym;
@@ -30,14 +40,20 @@ final class PlanCommand extends VarisetSubcommand {
     @Option(names = "--wall", required = true, paramLabel = "WALL", description = "The wall to reset.")
     String wall;
 
-    @Option(names = "--on", paramLabel = "DATE", converter = DateConverter.class,
+    @Option(
+            names = "--on",
+            paramLabel = "DATE",
+            converter = DateConverter.class,
             description = "The day of the reset (default: today).")
     LocalDate on;
 
     @Option(names = "--routes", required = true, paramLabel = "N", description = "How many routes it will bring.")
     int routes;
 
-    @Option(names = "--margin", paramLabel = "SHARE", defaultValue = "0.05",
+    @Option(
+            names = "--margin",
+            paramLabel = "SHARE",
+            defaultValue = "0.05",
             description = "How far (as a share, 0.05 = 5 points) a category must be below its twelve-month share "
                     + "to be listed (default: ${DEFAULT-VALUE}).")
     double margin;
@@ -48,13 +64,17 @@ final class PlanCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
         if (!(margin >= 0 && margin < 1)) {
-            throw new IllegalArgumentException("--margin " + margin + " is not a share between 0 and 1 (0.05 is five "
-                    + "points)");
+            throw new IllegalArgumentException(
+                    "--margin " + margin + " is not a share between 0 and 1 (0.05 is five " + "points)");
         }
         ResetPlan plan;
         try (Archive archive = openArchive()) {
-            LocalDate day = on != null ? on : new GymCalendar(root().cli().clock()).today(
-                    new ArchiveCatalog(archive.connection()).gym(gym.gym).zone());
+            LocalDate day = on != null
+                    ? on
+                    : new GymCalendar(root().cli().clock())
+                            .today(new ArchiveCatalog(archive.connection())
+                                    .gym(gym.gym)
+                                    .zone());
             plan = new ResetPlanner(archive.connection()).plan(gym.gym, wall, day, routes, margin);
         }
         if (format.json()) {

@@ -13,8 +13,8 @@ import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveQueries;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.IndexUpkeep;
-import org.variset.imports.ProblemList;
 import org.variset.imports.ImportException;
+import org.variset.imports.ProblemList;
 import org.variset.imports.load.RouteKeys;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -22,19 +22,29 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Takes back a mistaken import: a reset by its label, or the routes a file lists. */
-@Command(name = "remove", mixinStandardHelpOptions = true,
-        description = {"Take back a mistaken import: remove the routes of a reset (by its label), or the routes a "
-                + "routes file lists, with their holds. Shows what will go and asks first; --yes answers for "
-                + "scripts."},
-        footer = {"", "Examples:", "  variset remove --reset \"Cave 2026-03-02\"",
-            "  variset remove --file routes.csv --yes"})
+@Command(
+        name = "remove",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Take back a mistaken import: remove the routes of a reset (by its label), or the routes a "
+                    + "routes file lists, with their holds. Shows what will go and asks first; --yes answers for "
+                    + "scripts."
+        },
+        footer = {
+            "",
+            "Examples:",
+            "  variset remove --reset \"Cave 2026-03-02\"",
+            "  variset remove --file routes.csv --yes"
+        })
 final class RemoveCommand extends VarisetSubcommand {
     static final class Target {
         @Option(names = "--reset", paramLabel = "LABEL", description = "The reset's label.")
         String reset;
 
-        @Option(names = "--file", paramLabel = "FILE", description = "A routes file (CSV, XLSX or JSON) whose "
-                + "routes to remove.")
+        @Option(
+                names = "--file",
+                paramLabel = "FILE",
+                description = "A routes file (CSV, XLSX or JSON) whose " + "routes to remove.")
         Path file;
     }
 
@@ -56,8 +66,10 @@ final class RemoveCommand extends VarisetSubcommand {
                 return ExitCode.OK;
             }
             out().println("This removes " + plan.routes().size() + " routes and " + plan.holds() + " holds"
-                    + (plan.emptiedResets().isEmpty() ? "" : ", and the resets " + String.join(", ",
-                            plan.emptiedResets())) + ":");
+                    + (plan.emptiedResets().isEmpty()
+                            ? ""
+                            : ", and the resets " + String.join(", ", plan.emptiedResets()))
+                    + ":");
             plan.routes().stream().limit(20).forEach(r -> out().println("  " + r));
             if (plan.routes().size() > 20) {
                 out().println("  ... and " + (plan.routes().size() - 20) + " more");
@@ -78,7 +90,8 @@ final class RemoveCommand extends VarisetSubcommand {
         out().flush();
         try {
             String answer = root().cli().in().readLine();
-            return answer != null && answer.strip().toLowerCase(java.util.Locale.ROOT).startsWith("y");
+            return answer != null
+                    && answer.strip().toLowerCase(java.util.Locale.ROOT).startsWith("y");
         } catch (IOException e) {
             return false;
         }
@@ -93,7 +106,9 @@ final class RemoveCommand extends VarisetSubcommand {
         List<Route> out = new ArrayList<>();
         for (var key : RouteKeys.read(target.file, problems)) {
             Gym g = lookup.gym(key.gym());
-            new ArchiveQueries(s).route(g.name(), key.wall(), key.label(), key.setOn()).ifPresent(out::add);
+            new ArchiveQueries(s)
+                    .route(g.name(), key.wall(), key.label(), key.setOn())
+                    .ifPresent(out::add);
         }
         if (!problems.isEmpty()) {
             throw new ImportException(problems);

@@ -8,7 +8,9 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
 
 /** Renames a setter, or merges two names of one person, across the archive. */
-@Command(name = "setter", mixinStandardHelpOptions = true,
+@Command(
+        name = "setter",
+        mixinStandardHelpOptions = true,
         description = "Rename a setter, or merge two names of one person, across the whole archive.",
         subcommands = {SetterCommand.Rename.class, SetterCommand.Merge.class})
 final class SetterCommand implements Runnable {
@@ -41,7 +43,9 @@ final class SetterCommand implements Runnable {
     }
 
     /** {@code variset setter merge FROM INTO}. */
-    @Command(name = "merge", mixinStandardHelpOptions = true,
+    @Command(
+            name = "merge",
+            mixinStandardHelpOptions = true,
             description = "Give every route of FROM to INTO and remove FROM (\"K. Ames\" into \"Kit Ames\").")
     static final class Merge extends VarisetSubcommand {
         @Parameters(index = "0", paramLabel = "FROM")

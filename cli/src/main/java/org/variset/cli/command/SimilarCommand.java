@@ -23,14 +23,24 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** Lists the archived routes most like one route. */
-@Command(name = "similar", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"List the archived routes most like one route, by the Jaccard index over their hand holds "
-                + "with the directions they face, moves, consecutive move pairs, wall-angle band and grade band "
-                + "(1 = the same features, 0 = none shared), with the shared features spelled out.", "",
+@Command(
+        name = "similar",
+        mixinStandardHelpOptions = true,
+        sortOptions = false,
+        description = {
+            "List the archived routes most like one route, by the Jaccard index over their hand holds "
+                    + "with the directions they face, moves, consecutive move pairs, wall-angle band and grade band "
+                    + "(1 = the same features, 0 = none shared), with the shared features spelled out.",
+            "",
             "ROUTE is the route's label, or GYM/LABEL/SET_ON; when a label names several routes, narrow it with "
-                + "--wall and --set-on."},
-        footer = {"", "Examples:", "  variset similar C2 --wall Cave --set-on 2026-02-07",
-            "  variset similar \"Lantern Rock/C1/2026-10-05\" --limit 5"})
+                    + "--wall and --set-on."
+        },
+        footer = {
+            "",
+            "Examples:",
+            "  variset similar C2 --wall Cave --set-on 2026-02-07",
+            "  variset similar \"Lantern Rock/C1/2026-10-05\" --limit 5"
+        })
 final class SimilarCommand extends VarisetSubcommand {
     @Parameters(index = "0", paramLabel = "ROUTE", description = "The route: LABEL or GYM/LABEL/SET_ON.")
     String route;
@@ -41,11 +51,17 @@ final class SimilarCommand extends VarisetSubcommand {
     @Option(names = "--wall", paramLabel = "WALL", description = "The route's wall, when its label is not unique.")
     String wall;
 
-    @Option(names = "--set-on", paramLabel = "DATE", converter = DateConverter.class,
+    @Option(
+            names = "--set-on",
+            paramLabel = "DATE",
+            converter = DateConverter.class,
             description = "The day it was set, when its label is not unique.")
     LocalDate setOn;
 
-    @Option(names = "--limit", paramLabel = "N", defaultValue = "10",
+    @Option(
+            names = "--limit",
+            paramLabel = "N",
+            defaultValue = "10",
             description = "How many routes to list (default: ${DEFAULT-VALUE}).")
     int limit;
 
@@ -87,7 +103,8 @@ final class SimilarCommand extends VarisetSubcommand {
         int n = 0;
         for (SimilarRoutes.Match m : r.matches()) {
             out().println();
-            out().println((++n) + ". Jaccard " + FigureFormat.of("jaccard", m.similarity().jaccard()) + " ("
+            out().println((++n) + ". Jaccard "
+                    + FigureFormat.of("jaccard", m.similarity().jaccard()) + " ("
                     + m.similarity().shared() + " of " + m.similarity().union() + " features) · "
                     + RouteText.heading(m.other()));
             out().println("   " + FeatureText.shared(m.similarity().sharedFeatures()));
@@ -96,12 +113,17 @@ final class SimilarCommand extends VarisetSubcommand {
     }
 
     private static ObjectNode json(SimilarRoutes.Result r) {
-        ObjectNode o = Json.object().put("route", r.route().name()).put("comparable", r.comparable())
+        ObjectNode o = Json.object()
+                .put("route", r.route().name())
+                .put("comparable", r.comparable())
                 .put("candidates_scored", r.candidates());
         ArrayNode a = o.putArray("similar");
         for (SimilarRoutes.Match m : r.matches()) {
-            ObjectNode x = a.addObject().put("route", m.other().name()).put("gym", m.other().gym())
-                    .put("jaccard", m.similarity().jaccard()).put("shared_count", m.similarity().shared())
+            ObjectNode x = a.addObject()
+                    .put("route", m.other().name())
+                    .put("gym", m.other().gym())
+                    .put("jaccard", m.similarity().jaccard())
+                    .put("shared_count", m.similarity().shared())
                     .put("union_count", m.similarity().union());
             m.similarity().sharedFeatures().forEach(x.putArray("shared")::add);
         }

@@ -6,16 +6,20 @@ import org.variset.archive.change.WallStrip;
 import org.variset.archive.gym.Wall;
 import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.convert.DateConverter;
+import org.variset.cli.internal.IndexUpkeep;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Marks a wall's old routes as stripped on the day it was reset. */
-@Command(name = "strip", mixinStandardHelpOptions = true,
-        description = {"Take a wall's old routes down: every route of the wall set before DATE and still up gets "
-                + "DATE as its strip date. Routes set on DATE (the new set) stay up."},
+@Command(
+        name = "strip",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Take a wall's old routes down: every route of the wall set before DATE and still up gets "
+                    + "DATE as its strip date. Routes set on DATE (the new set) stay up."
+        },
         footer = {"", "Example:", "  variset strip --wall \"Cave\" --on 2026-04-06"})
 final class StripCommand extends VarisetSubcommand {
     @Mixin
@@ -24,7 +28,11 @@ final class StripCommand extends VarisetSubcommand {
     @Option(names = "--wall", required = true, paramLabel = "WALL", description = "The wall that was reset.")
     String wall;
 
-    @Option(names = "--on", required = true, paramLabel = "DATE", converter = DateConverter.class,
+    @Option(
+            names = "--on",
+            required = true,
+            paramLabel = "DATE",
+            converter = DateConverter.class,
             description = "The day the old routes came down.")
     LocalDate on;
 

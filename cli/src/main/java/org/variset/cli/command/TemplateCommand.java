@@ -10,9 +10,13 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /** Writes empty interchange files with the right headers. Needs no archive. */
-@Command(name = "template", mixinStandardHelpOptions = true,
-        description = {"Write empty walls, routes and holds files with the right headers and one example row "
-                + "(CSV), or one workbook with drop-down lists for hold type, role, size and discipline (XLSX)."},
+@Command(
+        name = "template",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Write empty walls, routes and holds files with the right headers and one example row "
+                    + "(CSV), or one workbook with drop-down lists for hold type, role, size and discipline (XLSX)."
+        },
         footer = {"", "Example:", "  variset template --format xlsx --out ."})
 final class TemplateCommand extends VarisetSubcommand {
     @Option(names = "--format", required = true, paramLabel = "FORMAT", description = "csv or xlsx.")
@@ -32,7 +36,8 @@ final class TemplateCommand extends VarisetSubcommand {
         } catch (IOException e) {
             throw new IllegalArgumentException("cannot write the templates into " + out + ": " + e.getMessage(), e);
         }
-        out().println("Wrote " + String.join(", ", files.stream().map(Path::toString).toList()) + ".");
+        out().println("Wrote "
+                + String.join(", ", files.stream().map(Path::toString).toList()) + ".");
         return ExitCode.OK;
     }
 }

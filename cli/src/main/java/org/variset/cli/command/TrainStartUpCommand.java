@@ -18,7 +18,9 @@ import picocli.CommandLine.Command;
  * classes they load in a class-data sharing archive (the JVM then starts from that archive instead of reading and
  * checking each class again). Not for people: hidden from the help.
  */
-@Command(name = "train-start-up", hidden = true,
+@Command(
+        name = "train-start-up",
+        hidden = true,
         description = "Run the common commands once on a temporary sample archive (used by the launcher).")
 final class TrainStartUpCommand extends VarisetSubcommand {
     /** What is run, in order; {@code ARCHIVE} and {@code OUT} stand for the temporary folders. */
@@ -47,11 +49,19 @@ final class TrainStartUpCommand extends VarisetSubcommand {
         }
         try {
             PrintWriter nowhere = new PrintWriter(Writer.nullWriter());
-            VarisetCli quiet = new VarisetCli(new BufferedReader(new StringReader("")), nowhere, nowhere,
-                    root().cli().env(), root().cli().home(), root().cli().clock());
+            VarisetCli quiet = new VarisetCli(
+                    new BufferedReader(new StringReader("")),
+                    nowhere,
+                    nowhere,
+                    root().cli().env(),
+                    root().cli().home(),
+                    root().cli().clock());
             for (List<String> line : SCRIPT) {
-                int status = quiet.run(line.stream().map(a -> a.replace("ARCHIVE", tmp.resolve("demo/archive")
-                        .toString()).replace("OUT", tmp.resolve("demo").toString())).toArray(String[]::new));
+                int status = quiet.run(line.stream()
+                        .map(a -> a.replace(
+                                        "ARCHIVE", tmp.resolve("demo/archive").toString())
+                                .replace("OUT", tmp.resolve("demo").toString()))
+                        .toArray(String[]::new));
                 if (status != 0) {
                     err().println("train-start-up: 'variset " + String.join(" ", line) + "' exited with " + status);
                     return ExitCode.INTERNAL;

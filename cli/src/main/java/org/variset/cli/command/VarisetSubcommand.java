@@ -62,8 +62,10 @@ abstract class VarisetSubcommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             return fail(ExitCode.BAD_INPUT, e.getMessage(), e);
         } catch (RuntimeException e) {
-            return fail(ExitCode.INTERNAL, "internal error: " + e
-                    + (root().verbose ? "" : " (run again with --verbose for the stack trace)"), e);
+            return fail(
+                    ExitCode.INTERNAL,
+                    "internal error: " + e + (root().verbose ? "" : " (run again with --verbose for the stack trace)"),
+                    e);
         }
     }
 

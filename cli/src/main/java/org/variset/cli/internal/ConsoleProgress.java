@@ -42,8 +42,14 @@ public final class ConsoleProgress implements ImportProgress, AutoCloseable {
     @Override
     public void advanced(String phase, long rows) {
         if (terminal) {
-            bars.computeIfAbsent(phase, p -> new ProgressBarBuilder().setTaskName(p).setInitialMax(-1)
-                    .setUnit(" rows", 1).setConsumer(new ConsoleProgressBarConsumer(System.err)).build())
+            bars.computeIfAbsent(
+                            phase,
+                            p -> new ProgressBarBuilder()
+                                    .setTaskName(p)
+                                    .setInitialMax(-1)
+                                    .setUnit(" rows", 1)
+                                    .setConsumer(new ConsoleProgressBarConsumer(System.err))
+                                    .build())
                     .stepTo(rows);
         } else if (rows % PLAIN_EVERY == 0) {
             err.println(phase + ": " + rows + " rows");

@@ -12,8 +12,7 @@ import org.variset.archive.store.Archive;
  * date; the user is told so.
  */
 public final class IndexUpkeep {
-    private IndexUpkeep() {
-    }
+    private IndexUpkeep() {}
 
     /**
      * A test hook: with this environment variable set to a number of milliseconds, a command that wrote the database

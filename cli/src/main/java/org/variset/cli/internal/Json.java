@@ -9,8 +9,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 public final class Json {
     private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
-    private Json() {
-    }
+    private Json() {}
 
     /** A new empty object. */
     public static ObjectNode object() {

@@ -10,8 +10,7 @@ import java.util.logging.Logger;
  * they go to standard error, never to standard output.
  */
 public final class Logging {
-    private Logging() {
-    }
+    private Logging() {}
 
     /** Sets java.util.logging's root logger for this command. */
     public static void configure(boolean verbose) {

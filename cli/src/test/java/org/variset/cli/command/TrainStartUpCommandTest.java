@@ -27,7 +27,8 @@ class TrainStartUpCommandTest {
         for (var line : TrainStartUpCommand.SCRIPT) {
             String name = RootCommand.commandName(line.toArray(String[]::new));
             if (name != null) {
-                assertThat(RootCommand.SUBCOMMANDS.stream().map(RootCommand::nameOf)).as(line.toString())
+                assertThat(RootCommand.SUBCOMMANDS.stream().map(RootCommand::nameOf))
+                        .as(line.toString())
                         .contains(name);
             }
         }

@@ -51,8 +51,7 @@ public final class ArchiveExporter {
      * @param routes routes exported
      * @param holds hold placements exported
      */
-    public record Result(List<Path> files, int walls, int routes, int holds) {
-    }
+    public record Result(List<Path> files, int walls, int routes, int holds) {}
 
     private final Archive archive;
 
@@ -71,7 +70,8 @@ public final class ArchiveExporter {
     public Result export(Selection sel, ExportFormat format, Path out, boolean force) {
         List<ExportTable> tables = archive.fromTransaction(s -> tables(s, sel));
         List<Path> targets = format == ExportFormat.CSV
-                ? tables.stream().map(t -> out.resolve(t.name() + ".csv")).toList() : List.of(out);
+                ? tables.stream().map(t -> out.resolve(t.name() + ".csv")).toList()
+                : List.of(out);
         for (Path t : targets) {
             if (Files.exists(t) && !force) {
                 throw new IllegalArgumentException(t + " exists; give --force to replace it");
@@ -92,7 +92,10 @@ public final class ArchiveExporter {
         } catch (IOException e) {
             throw new IllegalArgumentException("cannot write " + out + ": " + e.getMessage(), e);
         }
-        return new Result(targets, tables.get(0).rows().size(), tables.get(1).rows().size(),
+        return new Result(
+                targets,
+                tables.get(0).rows().size(),
+                tables.get(1).rows().size(),
                 tables.get(2).rows().size());
     }
 
@@ -115,18 +118,23 @@ public final class ArchiveExporter {
 
     private static List<ExportTable> tables(Session s, Selection sel) {
         ArchiveQueries q = new ArchiveQueries(s);
-        Gym gym = q.gym(sel.gym()).orElseThrow(() -> new IllegalArgumentException("no gym named '" + sel.gym()
-                + "' in the archive (gyms: " + String.join(", ", q.gyms().stream().map(Gym::name).toList()) + ")"));
+        Gym gym = q.gym(sel.gym())
+                .orElseThrow(() -> new IllegalArgumentException("no gym named '" + sel.gym()
+                        + "' in the archive (gyms: "
+                        + String.join(", ", q.gyms().stream().map(Gym::name).toList()) + ")"));
         if (sel.wall() != null && q.wall(gym, sel.wall()).isEmpty()) {
             throw new IllegalArgumentException("no wall named '" + sel.wall() + "' in " + gym.name());
         }
         LocalDate from = sel.from() == null ? LocalDate.of(1, 1, 1) : sel.from();
         LocalDate to = sel.to() == null ? LocalDate.of(9999, 12, 31) : sel.to();
         List<Route> routes = q.routesSetBetween(gym, from, to).stream()
-                .filter(r -> sel.wall() == null || r.wall().name().equals(sel.wall())).toList();
+                .filter(r -> sel.wall() == null || r.wall().name().equals(sel.wall()))
+                .toList();
         Set<Wall> walls = new LinkedHashSet<>();
         if (sel.from() == null && sel.to() == null) {
-            q.walls(gym).stream().filter(w -> sel.wall() == null || w.name().equals(sel.wall())).forEach(walls::add);
+            q.walls(gym).stream()
+                    .filter(w -> sel.wall() == null || w.name().equals(sel.wall()))
+                    .forEach(walls::add);
         }
         routes.forEach(r -> walls.add(r.wall()));
         ExportTable wallTable = new ExportTable("walls", TableKind.WALLS.columns());
@@ -170,7 +178,11 @@ public final class ArchiveExporter {
         c.put("angle_deg", num(r.angleDeg()));
         c.put("moves", List.copyOf(r.moves()));
         c.put("styles", List.copyOf(r.styles()));
-        c.put("move_difficulty", r.moveDifficulty().stream().map(d -> (Object) new ExportTable.Num(d)).toList());
+        c.put(
+                "move_difficulty",
+                r.moveDifficulty().stream()
+                        .map(d -> (Object) new ExportTable.Num(d))
+                        .toList());
         c.put("notes", r.notes());
         return c;
     }

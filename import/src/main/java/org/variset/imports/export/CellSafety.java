@@ -7,8 +7,7 @@ package org.variset.imports.export;
  * -15 stays a number.
  */
 public final class CellSafety {
-    private CellSafety() {
-    }
+    private CellSafety() {}
 
     /** The text, with a leading quote when a spreadsheet would read it as a formula. */
     public static String neutralise(String text) {

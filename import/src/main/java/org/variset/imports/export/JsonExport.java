@@ -15,8 +15,7 @@ import java.util.Objects;
 final class JsonExport {
     private static final ObjectMapper MAPPER = new ObjectMapper();
 
-    private JsonExport() {
-    }
+    private JsonExport() {}
 
     static void write(String gym, List<ExportTable> tables, Path file) throws IOException {
         ExportTable walls = tables.get(0);
@@ -24,8 +23,9 @@ final class JsonExport {
         ExportTable holds = tables.get(2);
         Map<List<Object>, List<Map<String, Object>>> holdsByRoute = new LinkedHashMap<>();
         for (Map<String, Object> h : holds.rows()) {
-            holdsByRoute.computeIfAbsent(List.of(h.get("wall"), h.get("route"), h.get("set_on")),
-                    k -> new ArrayList<>()).add(plain(holds, h, List.of("gym", "route", "set_on", "wall")));
+            holdsByRoute
+                    .computeIfAbsent(List.of(h.get("wall"), h.get("route"), h.get("set_on")), k -> new ArrayList<>())
+                    .add(plain(holds, h, List.of("gym", "route", "set_on", "wall")));
         }
         try (JsonGenerator g = MAPPER.getFactory().createGenerator(file.toFile(), JsonEncoding.UTF8)) {
             g.useDefaultPrettyPrinter();
@@ -39,8 +39,9 @@ final class JsonExport {
             g.writeArrayFieldStart("routes");
             for (Map<String, Object> r : routes.rows()) {
                 Map<String, Object> out = plain(routes, r, List.of("gym"));
-                out.put("holds", holdsByRoute.getOrDefault(List.of(r.get("wall"), r.get("route"), r.get("set_on")),
-                        List.of()));
+                out.put(
+                        "holds",
+                        holdsByRoute.getOrDefault(List.of(r.get("wall"), r.get("route"), r.get("set_on")), List.of()));
                 MAPPER.writeValue(g, out);
             }
             g.writeEndArray();
@@ -67,8 +68,11 @@ final class JsonExport {
             return d == Math.rint(d) && Math.abs(d) < 1e15 ? (Object) (long) d : (Object) d;
         }
         if (v instanceof List<?> l) {
-            return l.stream().map(x -> x instanceof Double || x instanceof ExportTable.Num ? json(
-                    x instanceof Double d ? new ExportTable.Num(d) : x) : Objects.toString(x)).toList();
+            return l.stream()
+                    .map(x -> x instanceof Double || x instanceof ExportTable.Num
+                            ? json(x instanceof Double d ? new ExportTable.Num(d) : x)
+                            : Objects.toString(x))
+                    .toList();
         }
         return v;
     }

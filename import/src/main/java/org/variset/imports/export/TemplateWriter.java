@@ -26,14 +26,40 @@ import org.variset.imports.table.TableKind;
 public final class TemplateWriter {
     private static final Map<TableKind, List<String>> EXAMPLE = Map.of(
             TableKind.WALLS, List.of("Harbour Hall", "Cave", "boulder", "35", "4.2", "9.5", "28"),
-            TableKind.ROUTES, List.of("Harbour Hall", "Cave", "Blue 3", "2026-03-02", "boulder", "V4", "",
-                    "", "Cave 2026-03-02", "Ana Brook;Tomo Heikkila", "blue", "30", "heel hook;dyno", "power",
-                    "3;4;8;3", "start matched on the jug"),
-            TableKind.HOLDS, List.of("Harbour Hall", "Blue 3", "2026-03-02", "crimp", "Cave", "1", "start", "s",
-                    "90;270", "C40", "1.55", "1.35"));
+            TableKind.ROUTES,
+                    List.of(
+                            "Harbour Hall",
+                            "Cave",
+                            "Blue 3",
+                            "2026-03-02",
+                            "boulder",
+                            "V4",
+                            "",
+                            "",
+                            "Cave 2026-03-02",
+                            "Ana Brook;Tomo Heikkila",
+                            "blue",
+                            "30",
+                            "heel hook;dyno",
+                            "power",
+                            "3;4;8;3",
+                            "start matched on the jug"),
+            TableKind.HOLDS,
+                    List.of(
+                            "Harbour Hall",
+                            "Blue 3",
+                            "2026-03-02",
+                            "crimp",
+                            "Cave",
+                            "1",
+                            "start",
+                            "s",
+                            "90;270",
+                            "C40",
+                            "1.55",
+                            "1.35"));
 
-    private TemplateWriter() {
-    }
+    private TemplateWriter() {}
 
     /**
      * Writes the templates into a folder.
@@ -42,7 +68,8 @@ public final class TemplateWriter {
      * @throws IllegalArgumentException when a file exists and force is off
      */
     public static List<Path> write(ExportFormat format, Path dir, boolean force) throws IOException {
-        List<Path> files = format == ExportFormat.XLSX ? List.of(dir.resolve("variset-template.xlsx"))
+        List<Path> files = format == ExportFormat.XLSX
+                ? List.of(dir.resolve("variset-template.xlsx"))
                 : List.of(dir.resolve("walls.csv"), dir.resolve("routes.csv"), dir.resolve("holds.csv"));
         if (format == ExportFormat.JSON) {
             throw new IllegalArgumentException("templates are CSV or XLSX (JSON has no header to fill in)");
@@ -58,7 +85,8 @@ public final class TemplateWriter {
         } else {
             TableKind[] kinds = {TableKind.WALLS, TableKind.ROUTES, TableKind.HOLDS};
             for (int i = 0; i < kinds.length; i++) {
-                try (CSVPrinter p = new CSVPrinter(Files.newBufferedWriter(files.get(i), StandardCharsets.UTF_8),
+                try (CSVPrinter p = new CSVPrinter(
+                        Files.newBufferedWriter(files.get(i), StandardCharsets.UTF_8),
                         CSVFormat.RFC4180.builder().setRecordSeparator("\n").get())) {
                     p.printRecord(kinds[i].columns());
                     p.printRecord(EXAMPLE.get(kinds[i]));
@@ -69,7 +97,8 @@ public final class TemplateWriter {
     }
 
     private static void xlsx(Path file) throws IOException {
-        try (XSSFWorkbook wb = new XSSFWorkbook(); OutputStream out = Files.newOutputStream(file)) {
+        try (XSSFWorkbook wb = new XSSFWorkbook();
+                OutputStream out = Files.newOutputStream(file)) {
             for (TableKind kind : new TableKind[] {TableKind.WALLS, TableKind.ROUTES, TableKind.HOLDS}) {
                 Sheet sheet = wb.createSheet(kind.word());
                 List<String> columns = kind.columns();
@@ -93,15 +122,16 @@ public final class TemplateWriter {
             case "type" -> Vocabulary.defaults().terms(VocabularyField.HOLD_TYPES);
             case "role" -> List.of("hand", "foot", "start", "finish");
             case "size" -> List.of("xs", "s", "m", "l", "xl");
-            case "discipline" -> kind == TableKind.WALLS ? List.of("boulder", "rope", "both")
-                    : List.of("boulder", "rope");
+            case "discipline" ->
+                kind == TableKind.WALLS ? List.of("boulder", "rope", "both") : List.of("boulder", "rope");
             default -> List.of();
         };
     }
 
     private static void dropDown(Sheet sheet, int column, List<String> choices) {
         DataValidationHelper helper = sheet.getDataValidationHelper();
-        DataValidation v = helper.createValidation(helper.createExplicitListConstraint(choices.toArray(String[]::new)),
+        DataValidation v = helper.createValidation(
+                helper.createExplicitListConstraint(choices.toArray(String[]::new)),
                 new CellRangeAddressList(1, 10_000, column, column));
         v.setShowErrorBox(true);
         sheet.addValidationData(v);

@@ -16,11 +16,11 @@ import org.apache.poi.xssf.streaming.SXSSFWorkbook;
  * text cells, neutralised against formulas.
  */
 final class XlsxExport {
-    private XlsxExport() {
-    }
+    private XlsxExport() {}
 
     static void write(List<ExportTable> tables, Path file) throws IOException {
-        try (SXSSFWorkbook wb = new SXSSFWorkbook(200); OutputStream out = Files.newOutputStream(file)) {
+        try (SXSSFWorkbook wb = new SXSSFWorkbook(200);
+                OutputStream out = Files.newOutputStream(file)) {
             for (ExportTable t : tables) {
                 Sheet sheet = wb.createSheet(t.name());
                 List<String> header = t.header();

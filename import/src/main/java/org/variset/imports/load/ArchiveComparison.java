@@ -64,8 +64,11 @@ final class ArchiveComparison {
         }
         plan.digests.forEach((key, digest) -> {
             if (!plan.routes.containsKey(key)) {
-                classify(key, digest.firstFile(), digest.firstLine(), holdDifference(archived.get(key), key)
-                        .stream().toList());
+                classify(
+                        key,
+                        digest.firstFile(),
+                        digest.firstLine(),
+                        holdDifference(archived.get(key), key).stream().toList());
             }
         });
         plan.walls.values().forEach(this::compareWall);
@@ -80,12 +83,20 @@ final class ArchiveComparison {
             RouteKey key = e.getKey();
             String reset = e.getValue().reset;
             var other = first.putIfAbsent(List.of(key.gym(), reset), e);
-            String wall = other != null ? other.getKey().wall()
-                    : archivedResets.computeIfAbsent(key.gym(), this::resetWalls).get(reset);
+            String wall = other != null
+                    ? other.getKey().wall()
+                    : archivedResets
+                            .computeIfAbsent(key.gym(), this::resetWalls)
+                            .get(reset);
             if (wall != null && !wall.equals(key.wall())) {
-                plan.problems.add(e.getValue().file, e.getValue().line, "reset", "reset '" + reset + "' belongs to "
-                        + "wall " + wall + (other != null ? " (" + other.getValue().where() + ")" : " in the archive")
-                        + ", not " + key.wall() + " (a reset label names one wall's reset)");
+                plan.problems.add(
+                        e.getValue().file,
+                        e.getValue().line,
+                        "reset",
+                        "reset '" + reset + "' belongs to "
+                                + "wall " + wall
+                                + (other != null ? " (" + other.getValue().where() + ")" : " in the archive")
+                                + ", not " + key.wall() + " (a reset label names one wall's reset)");
                 plan.refused.add(key);
             }
         }
@@ -100,16 +111,20 @@ final class ArchiveComparison {
         plan.changes.add(key + " (" + file + ":" + line + "): " + String.join("; ", diff));
         if (!plan.options.update()) {
             plan.refused.add(key);
-            plan.problems.add(file, line, "route", "changes the archived " + key + ": " + String.join("; ", diff)
-                    + " (give --update to replace it)");
+            plan.problems.add(
+                    file,
+                    line,
+                    "route",
+                    "changes the archived " + key + ": " + String.join("; ", diff) + " (give --update to replace it)");
         }
     }
 
     /** Reset label to wall name, for one gym, with one query. */
     private Map<String, String> resetWalls(String gym) {
         Map<String, String> out = new HashMap<>();
-        session.createSelectionQuery("select r.label, r.wall.name from Reset r where r.gym.name = :g",
-                Object[].class).setParameter("g", gym).getResultList()
+        session.createSelectionQuery("select r.label, r.wall.name from Reset r where r.gym.name = :g", Object[].class)
+                .setParameter("g", gym)
+                .getResultList()
                 .forEach(row -> out.put((String) row[0], (String) row[1]));
         return out;
     }
@@ -121,34 +136,45 @@ final class ArchiveComparison {
         }
         HoldDigest before = new HoldDigest();
         for (HoldRecord h : existing.holds()) {
-            before.add(new HoldPlacement.Spec(h.seq(), h.role(), h.type(), h.size(), h.grips(), h.holdRef(), h.xM(),
-                    h.yM(), h.extraFields()));
+            before.add(new HoldPlacement.Spec(
+                    h.seq(), h.role(), h.type(), h.size(), h.grips(), h.holdRef(), h.xM(), h.yM(), h.extraFields()));
         }
-        return before.size() == file.size() && before.value() == file.value() ? Optional.empty()
+        return before.size() == file.size() && before.value() == file.value()
+                ? Optional.empty()
                 : Optional.of("holds: " + before.size() + " placements -> " + file.size() + " placements, not the same "
                         + "list");
     }
 
     private void compareWall(WallRow w) {
-        Wall existing = session.createSelectionQuery("from Wall w where w.gym.name = :g and w.name = :n",
-                Wall.class).setParameter("g", w.gym()).setParameter("n", w.wall()).uniqueResult();
+        Wall existing = session.createSelectionQuery("from Wall w where w.gym.name = :g and w.name = :n", Wall.class)
+                .setParameter("g", w.gym())
+                .setParameter("n", w.wall())
+                .uniqueResult();
         List<String> key = List.of(w.gym(), w.wall());
         if (existing == null) {
             plan.newWalls.add(key);
             return;
         }
-        List<Object> before = java.util.Arrays.asList(existing.discipline(), existing.angleDeg(),
-                existing.heightM(), existing.widthM(), existing.cycleDays(), existing.extraFields());
-        List<Object> after = java.util.Arrays.asList(w.discipline(), w.angleDeg(), w.heightM(), w.widthM(),
-                w.cycleDays(), w.extraFields());
+        List<Object> before = java.util.Arrays.asList(
+                existing.discipline(),
+                existing.angleDeg(),
+                existing.heightM(),
+                existing.widthM(),
+                existing.cycleDays(),
+                existing.extraFields());
+        List<Object> after = java.util.Arrays.asList(
+                w.discipline(), w.angleDeg(), w.heightM(), w.widthM(), w.cycleDays(), w.extraFields());
         if (before.equals(after)) {
             return;
         }
         plan.changedWalls.add(key);
         plan.changes.add("wall " + w.wall() + " (" + w.file() + ":" + w.line() + "): " + before + " -> " + after);
         if (!plan.options.update()) {
-            plan.problems.add(w.file(), w.line(), "wall", "changes the archived wall " + w.wall()
-                    + " (give --update to replace it)");
+            plan.problems.add(
+                    w.file(),
+                    w.line(),
+                    "wall",
+                    "changes the archived wall " + w.wall() + " (give --update to replace it)");
         }
     }
 }

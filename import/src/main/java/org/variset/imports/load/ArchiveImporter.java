@@ -128,8 +128,12 @@ public final class ArchiveImporter {
         }
     }
 
-    private static void checkHolds(List<RowSource> sources, RowParser parser, RouteResolver resolver,
-            ImportPlan plan, ImportProgress progress) {
+    private static void checkHolds(
+            List<RowSource> sources,
+            RowParser parser,
+            RouteResolver resolver,
+            ImportPlan plan,
+            ImportProgress progress) {
         long n = 0;
         for (RowSource s : sources) {
             if (s.kind() != TableKind.HOLDS) {

@@ -52,12 +52,12 @@ final class ArchiveWriter {
     private final Map<List<String>, WallRef> walls = new HashMap<>();
     /** Resets by gym and label. */
     private final Map<List<String>, ResetRef> resets = new HashMap<>();
+
     private final Map<String, Long> setters = new HashMap<>();
     private final Map<RouteKey, Long> routeIds = new HashMap<>();
     private int wallsCreated;
 
-    private record WallRef(long gymId, long wallId, Wall entity) {
-    }
+    private record WallRef(long gymId, long wallId, Wall entity) {}
 
     /** A reset: its ids, its date so far, and a transient entity for building transient routes on. */
     private static final class ResetRef {
@@ -81,8 +81,8 @@ final class ArchiveWriter {
     }
 
     /** Writes walls, routes and holds, and records the routes written in the change log; returns holds written. */
-    long write(List<RowSource> sources, RouteResolver resolver, ImportProgress progress,
-            ArchiveImporter.Stopwatch clock) {
+    long write(
+            List<RowSource> sources, RouteResolver resolver, ImportProgress progress, ArchiveImporter.Stopwatch clock) {
         writeWalls();
         Connection c = session.doReturningWork(x -> x);
         long holds;
@@ -119,8 +119,8 @@ final class ArchiveWriter {
     }
 
     private boolean writesRoute(RouteKey k) {
-        return !plan.refused.contains(k) && (plan.newRoutes.contains(k) || plan.changedRoutes.contains(k)
-                && plan.options.update());
+        return !plan.refused.contains(k)
+                && (plan.newRoutes.contains(k) || plan.changedRoutes.contains(k) && plan.options.update());
     }
 
     /** Creates and describes walls with Hibernate: those of the walls files and those new routes name. */
@@ -148,8 +148,11 @@ final class ArchiveWriter {
         if (ref != null) {
             return ref.entity();
         }
-        Wall w = session.createSelectionQuery("from Wall w join fetch w.gym where w.gym.name = :g and w.name = :n",
-                Wall.class).setParameter("g", key.get(0)).setParameter("n", key.get(1)).uniqueResultOptional()
+        Wall w = session.createSelectionQuery(
+                        "from Wall w join fetch w.gym where w.gym.name = :g and w.name = :n", Wall.class)
+                .setParameter("g", key.get(0))
+                .setParameter("n", key.get(1))
+                .uniqueResultOptional()
                 .orElseGet(() -> {
                     Wall created = new Wall(gym(key.get(0)), key.get(1));
                     session.persist(created);
@@ -161,8 +164,10 @@ final class ArchiveWriter {
     }
 
     private Gym gym(String name) {
-        return session.createSelectionQuery("from Gym g where g.name = :n", Gym.class).setParameter("n", name)
-                .uniqueResultOptional().orElseGet(() -> {
+        return session.createSelectionQuery("from Gym g where g.name = :n", Gym.class)
+                .setParameter("n", name)
+                .uniqueResultOptional()
+                .orElseGet(() -> {
                     Gym g = new Gym(name, plan.options.newGymZone());
                     session.persist(g);
                     session.flush();
@@ -188,8 +193,9 @@ final class ArchiveWriter {
                         WallRef w = wallsById.get(wallId);
                         Wall wall = w != null ? w.entity() : wall(List.of(g.getValue(), r.getString(5)));
                         LocalDate on = r.getDate(3).toLocalDate();
-                        resets.put(List.of(g.getValue(), r.getString(2)), new ResetRef(r.getLong(1), wallId,
-                                new Reset(wall, r.getString(2), on), on));
+                        resets.put(
+                                List.of(g.getValue(), r.getString(2)),
+                                new ResetRef(r.getLong(1), wallId, new Reset(wall, r.getString(2), on), on));
                     }
                 }
             }
@@ -197,7 +203,8 @@ final class ArchiveWriter {
     }
 
     private void loadSetters(Connection c) throws SQLException {
-        try (PreparedStatement s = c.prepareStatement("SELECT id, name FROM setter"); ResultSet r = s.executeQuery()) {
+        try (PreparedStatement s = c.prepareStatement("SELECT id, name FROM setter");
+                ResultSet r = s.executeQuery()) {
             while (r.next()) {
                 setters.put(r.getString(2), r.getLong(1));
             }
@@ -293,8 +300,9 @@ final class ArchiveWriter {
         r.setExtraFields(row.extraFields());
     }
 
-    private long writeHolds(Connection c, List<RowSource> sources, RouteResolver resolver, BulkInserts bulk,
-            ImportProgress progress) throws SQLException {
+    private long writeHolds(
+            Connection c, List<RowSource> sources, RouteResolver resolver, BulkInserts bulk, ImportProgress progress)
+            throws SQLException {
         try (PreparedStatement delete = c.prepareStatement("DELETE FROM hold_placement WHERE route_id = ?")) {
             for (RouteKey k : plan.keysWithHolds()) {
                 if (plan.writesHoldsOf(k) && !plan.newRoutes.contains(k)) {
@@ -308,8 +316,8 @@ final class ArchiveWriter {
         List<PlacedHold> chunk = new ArrayList<>(HOLD_CHUNK);
         // This thread reads and parses the rows; a second one sends the batches (every route id is known by now, so
         // the second thread needs nothing from this one but the chunks).
-        try (OverlappedChunks<PlacedHold> inserts = new OverlappedChunks<>("variset-hold-writer",
-                part -> insertHolds(part, bulk))) {
+        try (OverlappedChunks<PlacedHold> inserts =
+                new OverlappedChunks<>("variset-hold-writer", part -> insertHolds(part, bulk))) {
             for (RowSource s : sources) {
                 if (s.kind() != TableKind.HOLDS) {
                     continue;
@@ -340,8 +348,7 @@ final class ArchiveWriter {
     }
 
     /** A hold placement ready to insert. */
-    private record PlacedHold(long routeId, int ordinal, HoldPlacement.Spec spec) {
-    }
+    private record PlacedHold(long routeId, int ordinal, HoldPlacement.Spec spec) {}
 
     private static void insertHolds(List<PlacedHold> part, BulkInserts bulk) {
         try {
@@ -354,8 +361,8 @@ final class ArchiveWriter {
     }
 
     private static ArchiveException writeFailure(SQLException e) {
-        return new ArchiveException(ArchiveException.Problem.DAMAGED, "Cannot write to the archive: " + e.getMessage(),
-                e);
+        return new ArchiveException(
+                ArchiveException.Problem.DAMAGED, "Cannot write to the archive: " + e.getMessage(), e);
     }
 
     private long routeId(RouteKey k) {
@@ -363,6 +370,8 @@ final class ArchiveWriter {
     }
 
     private Route find(RouteKey k) {
-        return new ArchiveQueries(session).route(k.gym(), k.wall(), k.label(), k.setOn()).orElse(null);
+        return new ArchiveQueries(session)
+                .route(k.gym(), k.wall(), k.label(), k.setOn())
+                .orElse(null);
     }
 }

@@ -69,8 +69,8 @@ final class HoldDigest {
     }
 
     private static long hash(HoldPlacement.Spec s) {
-        String text = s.seq() + "|" + s.role() + "|" + s.type() + "|" + s.size() + "|" + s.grips() + "|"
-                + s.holdRef() + "|" + s.xM() + "|" + s.yM() + "|" + s.extraFields();
+        String text = s.seq() + "|" + s.role() + "|" + s.type() + "|" + s.size() + "|" + s.grips() + "|" + s.holdRef()
+                + "|" + s.xM() + "|" + s.yM() + "|" + s.extraFields();
         try {
             byte[] d = MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
             long v = 0;

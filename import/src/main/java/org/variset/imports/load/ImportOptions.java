@@ -13,8 +13,8 @@ import org.variset.archive.vocabulary.Vocabulary;
  * @param vocabulary the terms hold types, moves and styles are read with
  * @param newGymZone the time zone given to a gym the import creates
  */
-public record ImportOptions(boolean dryRun, boolean skipBadRows, boolean update, Vocabulary vocabulary,
-        ZoneId newGymZone) {
+public record ImportOptions(
+        boolean dryRun, boolean skipBadRows, boolean update, Vocabulary vocabulary, ZoneId newGymZone) {
 
     /** Checks the fields. */
     public ImportOptions {

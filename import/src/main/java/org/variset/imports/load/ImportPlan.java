@@ -26,11 +26,13 @@ final class ImportPlan {
     final Map<RouteKey, PlannedRoute> routes = new LinkedHashMap<>();
     /** Hold-list fingerprints of routes the archive already holds, to compare with it. */
     final Map<RouteKey, HoldDigest> digests = new HashMap<>();
+
     final Set<RouteKey> newRoutes = new LinkedHashSet<>();
     final Set<RouteKey> changedRoutes = new LinkedHashSet<>();
     final Set<RouteKey> refused = new LinkedHashSet<>();
     /** Route rows with problems, by key: their holds are left out without a problem of their own. */
     final Set<RouteKey> badRows = new LinkedHashSet<>();
+
     final Set<List<String>> newWalls = new LinkedHashSet<>();
     final Set<List<String>> changedWalls = new LinkedHashSet<>();
     final List<String> changes = new ArrayList<>();
@@ -91,11 +93,14 @@ final class ImportPlan {
         if (r == null) {
             return;
         }
-        PlannedRoute before = routes.putIfAbsent(intern(r.key()), new PlannedRoute(intern(r.file()), r.line(),
-                intern(r.reset())));
+        PlannedRoute before =
+                routes.putIfAbsent(intern(r.key()), new PlannedRoute(intern(r.file()), r.line(), intern(r.reset())));
         if (before != null) {
-            problems.add(r.file(), r.line(), "route", "the same route as " + before.where()
-                    + " (a route is identified by gym, wall, route and set_on)");
+            problems.add(
+                    r.file(),
+                    r.line(),
+                    "route",
+                    "the same route as " + before.where() + " (a route is identified by gym, wall, route and set_on)");
         }
     }
 
@@ -126,17 +131,31 @@ final class ImportPlan {
 
     /** True when the route's holds are written: it is new, or changed and updated, and the files bring holds. */
     boolean writesHoldsOf(RouteKey k) {
-        return holdsOf(k) > 0 && !refused.contains(k)
+        return holdsOf(k) > 0
+                && !refused.contains(k)
                 && (newRoutes.contains(k) || changedRoutes.contains(k) && options.update());
     }
 
     long holdCount() {
-        return keysWithHolds().stream().filter(this::writesHoldsOf).mapToLong(this::holdsOf).sum();
+        return keysWithHolds().stream()
+                .filter(this::writesHoldsOf)
+                .mapToLong(this::holdsOf)
+                .sum();
     }
 
     ImportSummary summary(long holdsWritten, long wallsNew, Set<String> extraColumns, Set<String> unknownTerms) {
-        return new ImportSummary(options.dryRun(), newRoutes.size(), unchanged, changedRoutes.size(),
-                wallsNew, changedWalls.size(), holdsWritten, List.copyOf(changes), problems.lines(),
-                problems.count(), Set.copyOf(extraColumns), Set.copyOf(unknownTerms));
+        return new ImportSummary(
+                options.dryRun(),
+                newRoutes.size(),
+                unchanged,
+                changedRoutes.size(),
+                wallsNew,
+                changedWalls.size(),
+                holdsWritten,
+                List.copyOf(changes),
+                problems.lines(),
+                problems.count(),
+                Set.copyOf(extraColumns),
+                Set.copyOf(unknownTerms));
     }
 }

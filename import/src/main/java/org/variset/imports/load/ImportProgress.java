@@ -3,7 +3,7 @@ package org.variset.imports.load;
 /** Hears how far an import has got, so a front end can show progress. */
 public interface ImportProgress {
     /** Does nothing. */
-    ImportProgress NONE = (phase, rows) -> { };
+    ImportProgress NONE = (phase, rows) -> {};
 
     /**
      * Called now and then during a long pass.
@@ -19,6 +19,5 @@ public interface ImportProgress {
      * @param phase the phase ({@code reading routes}, {@code checking holds}, {@code writing holds}, ...)
      * @param nanos how long it took
      */
-    default void finished(String phase, long nanos) {
-    }
+    default void finished(String phase, long nanos) {}
 }

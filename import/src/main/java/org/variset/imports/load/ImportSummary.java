@@ -19,7 +19,16 @@ import java.util.Set;
  * @param extraColumns columns the spec does not define, kept as extra fields
  * @param unknownTerms moves and styles not in the vocabulary, kept as written
  */
-public record ImportSummary(boolean dryRun, long routesNew, long routesUnchanged, long routesChanged,
-        long wallsNew, long wallsChanged, long holdsWritten, List<String> changes, List<String> skipped,
-        long skippedCount, Set<String> extraColumns, Set<String> unknownTerms) {
-}
+public record ImportSummary(
+        boolean dryRun,
+        long routesNew,
+        long routesUnchanged,
+        long routesChanged,
+        long wallsNew,
+        long wallsChanged,
+        long holdsWritten,
+        List<String> changes,
+        List<String> skipped,
+        long skippedCount,
+        Set<String> extraColumns,
+        Set<String> unknownTerms) {}

@@ -18,8 +18,7 @@ import org.variset.imports.table.XlsxWorkbook;
 
 /** Opens the input files by extension and checks every header before any row is read. */
 final class InputFiles {
-    private InputFiles() {
-    }
+    private InputFiles() {}
 
     /** The tables of the files; problems for files that cannot be opened and for bad headers. */
     static List<RowSource> open(List<Path> files, ProblemList problems, Set<String> extraColumns) {
@@ -72,8 +71,12 @@ final class InputFiles {
         }
         for (String r : kind.required()) {
             if (!seen.contains(r)) {
-                problems.add(s.file(), s.headerLine(), r, "missing required column (a " + kind.word()
-                        + " file needs " + String.join(", ", kind.required()) + ")");
+                problems.add(
+                        s.file(),
+                        s.headerLine(),
+                        r,
+                        "missing required column (a " + kind.word() + " file needs "
+                                + String.join(", ", kind.required()) + ")");
             }
         }
     }

@@ -8,14 +8,16 @@ import org.variset.imports.row.RouteRow;
 
 /** What differs between a route row and the route the archive holds under the same key. */
 final class RouteDiff {
-    private RouteDiff() {
-    }
+    private RouteDiff() {}
 
     /** The differences as {@code field: archive -> file}; empty when the row matches. */
     static List<String> between(RouteRecord r, RouteRow row) {
         List<String> d = new ArrayList<>();
         compare(d, "discipline", r.discipline().word(), row.discipline().word());
-        compare(d, "grade", r.gradeText() + " (" + r.gradeScale().word() + ")",
+        compare(
+                d,
+                "grade",
+                r.gradeText() + " (" + r.gradeScale().word() + ")",
                 row.grade().text().strip() + " (" + row.grade().scale().word() + ")");
         compare(d, "stripped_on", r.strippedOn(), row.strippedOn());
         compare(d, "reset", r.reset(), row.reset());

@@ -16,8 +16,7 @@ import org.variset.imports.table.TableKind;
 
 /** The route keys a routes file lists, to find the routes an import brought (to take it back). */
 public final class RouteKeys {
-    private RouteKeys() {
-    }
+    private RouteKeys() {}
 
     /** The keys of the file's route rows; problems for rows that cannot be read. */
     public static List<RouteKey> read(Path file, ProblemList problems) {

@@ -16,8 +16,7 @@ import org.variset.imports.row.RouteKey;
  * (gym, label, set_on); the wall is needed only when two walls have a route with that label and date.
  */
 final class RouteResolver {
-    private record Name(String gym, String label, LocalDate setOn) {
-    }
+    private record Name(String gym, String label, LocalDate setOn) {}
 
     private final Session session;
     private final Map<Name, List<RouteKey>> inFile = new HashMap<>();
@@ -54,12 +53,22 @@ final class RouteResolver {
         if (problems != null) {
             String route = "route " + h.route() + " of " + h.setOn() + " in " + h.gym();
             if (candidates.isEmpty()) {
-                problems.add(h.file(), h.line(), "route", route + (h.wall() == null ? "" : " on " + h.wall())
-                        + " is neither in the import nor in the archive (expected a row for it in the routes file)");
+                problems.add(
+                        h.file(),
+                        h.line(),
+                        "route",
+                        route + (h.wall() == null ? "" : " on " + h.wall())
+                                + " is neither in the import nor in the archive (expected a row for it in the routes file)");
             } else {
-                problems.add(h.file(), h.line(), "wall", route + " is on more than one wall ("
-                        + String.join(", ", candidates.stream().map(RouteKey::wall).toList())
-                        + "); give the wall column");
+                problems.add(
+                        h.file(),
+                        h.line(),
+                        "wall",
+                        route + " is on more than one wall ("
+                                + String.join(
+                                        ", ",
+                                        candidates.stream().map(RouteKey::wall).toList())
+                                + "); give the wall column");
             }
         }
         return null;
@@ -77,8 +86,11 @@ final class RouteResolver {
     /** Every route key of one gym, read once with one query (not one query per hold or route). */
     private Map<Name, List<RouteKey>> loadGym(String gym) {
         Map<Name, List<RouteKey>> out = new HashMap<>();
-        session.createSelectionQuery("select r.label, r.setOn, r.wall.name from Route r where r.gym.name = :g",
-                Object[].class).setParameter("g", gym).getResultList().forEach(row -> {
+        session.createSelectionQuery(
+                        "select r.label, r.setOn, r.wall.name from Route r where r.gym.name = :g", Object[].class)
+                .setParameter("g", gym)
+                .getResultList()
+                .forEach(row -> {
                     RouteKey k = new RouteKey(gym, (String) row[2], (String) row[0], (LocalDate) row[1]);
                     out.merge(new Name(gym, k.label(), k.setOn()), List.of(k), RouteResolver::concat);
                 });

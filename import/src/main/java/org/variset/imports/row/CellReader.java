@@ -22,8 +22,8 @@ import org.variset.imports.table.TableRow;
 final class CellReader {
     private static final Pattern ISO_DATE = Pattern.compile("\\d{4}-\\d{2}-\\d{2}");
     private static final Pattern OTHER_DATE = Pattern.compile("\\d{1,4}[/.\\-]\\d{1,2}[/.\\-]\\d{1,4}");
-    private static final DateTimeFormatter STRICT = DateTimeFormatter.ofPattern("uuuu-MM-dd")
-            .withResolverStyle(ResolverStyle.STRICT);
+    private static final DateTimeFormatter STRICT =
+            DateTimeFormatter.ofPattern("uuuu-MM-dd").withResolverStyle(ResolverStyle.STRICT);
 
     private final TableRow row;
     private final ProblemList problems;
@@ -76,8 +76,11 @@ final class CellReader {
     }
 
     private static String tooLong(int length, int max) {
-        return String.format(java.util.Locale.ROOT, "%,d characters, more than the %,d the archive keeps here "
-                + "(expected a shorter text)", length, max);
+        return String.format(
+                java.util.Locale.ROOT,
+                "%,d characters, more than the %,d the archive keeps here " + "(expected a shorter text)",
+                length,
+                max);
     }
 
     /** Restores text that export prefixed with a quote so that a spreadsheet would not run it (OWASP). */
@@ -209,7 +212,9 @@ final class CellReader {
                 }
             }
         });
-        int length = out.entrySet().stream().mapToInt(e -> e.getKey().length() + e.getValue().length() + 6).sum();
+        int length = out.entrySet().stream()
+                .mapToInt(e -> e.getKey().length() + e.getValue().length() + 6)
+                .sum();
         if (length > MAX_EXTRAS) {
             problem("extra columns", tooLong(length, MAX_EXTRAS));
             return Map.of();

@@ -14,6 +14,5 @@ import org.variset.archive.route.HoldPlacement;
  * @param setOn the route's set date
  * @param spec the placement's values
  */
-public record HoldRow(String file, int line, String gym, String wall, String route, LocalDate setOn,
-        HoldPlacement.Spec spec) {
-}
+public record HoldRow(
+        String file, int line, String gym, String wall, String route, LocalDate setOn, HoldPlacement.Spec spec) {}

@@ -25,9 +25,22 @@ import org.variset.archive.grade.Grade;
  * @param notes notes, or null
  * @param extraFields extra columns in file order
  */
-public record RouteRow(String file, int line, RouteKey key, Discipline discipline, Grade grade,
-        LocalDate strippedOn, String reset, List<String> setters, String color, Double angleDeg, List<String> moves,
-        List<String> styles, List<Integer> moveDifficulty, String notes, Map<String, String> extraFields) {
+public record RouteRow(
+        String file,
+        int line,
+        RouteKey key,
+        Discipline discipline,
+        Grade grade,
+        LocalDate strippedOn,
+        String reset,
+        List<String> setters,
+        String color,
+        Double angleDeg,
+        List<String> moves,
+        List<String> styles,
+        List<Integer> moveDifficulty,
+        String notes,
+        Map<String, String> extraFields) {
 
     /** {@code file:line}, for messages. */
     public String where() {

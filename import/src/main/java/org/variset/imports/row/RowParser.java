@@ -56,12 +56,15 @@ public final class RowParser {
         Grade grade = discipline == null ? null : grade(c, discipline);
         LocalDate stripped = c.date("stripped_on", false);
         if (setOn != null && stripped != null && !stripped.isAfter(setOn)) {
-            c.problem("stripped_on", stripped + " is not after set_on " + setOn
-                    + " (expected the date it came down, or empty while it is up)");
+            c.problem(
+                    "stripped_on",
+                    stripped + " is not after set_on " + setOn
+                            + " (expected the date it came down, or empty while it is up)");
         }
         String reset = c.name("reset", false);
-        List<String> setters = c.list("setters").stream().map(s -> java.text.Normalizer.normalize(s,
-                java.text.Normalizer.Form.NFC)).toList();
+        List<String> setters = c.list("setters").stream()
+                .map(s -> java.text.Normalizer.normalize(s, java.text.Normalizer.Form.NFC))
+                .toList();
         Double angle = c.number("angle_deg", -45, 90, "degrees from vertical, -45 to 90");
         List<String> moves = terms(c, VocabularyField.MOVES, "moves");
         List<String> styles = terms(c, VocabularyField.STYLES, "styles");
@@ -70,9 +73,22 @@ public final class RowParser {
         if (!c.ok()) {
             return null;
         }
-        return new RouteRow(row.file(), row.line(), new RouteKey(gym, wall, label, setOn), discipline, grade,
-                stripped, reset == null ? Reset.defaultLabel(wall, setOn) : reset, setters, c.text("color"), angle,
-                moves, styles, difficulty, c.text("notes"), extras);
+        return new RouteRow(
+                row.file(),
+                row.line(),
+                new RouteKey(gym, wall, label, setOn),
+                discipline,
+                grade,
+                stripped,
+                reset == null ? Reset.defaultLabel(wall, setOn) : reset,
+                setters,
+                c.text("color"),
+                angle,
+                moves,
+                styles,
+                difficulty,
+                c.text("notes"),
+                extras);
     }
 
     /**
@@ -85,7 +101,8 @@ public final class RowParser {
         String wall = c.name("wall", true);
         String label = c.name("route", true);
         LocalDate setOn = c.date("set_on", true);
-        return gym == null || wall == null || label == null || setOn == null ? null
+        return gym == null || wall == null || label == null || setOn == null
+                ? null
                 : new RouteKey(gym, wall, label, setOn);
     }
 
@@ -107,7 +124,13 @@ public final class RowParser {
         if (!c.ok()) {
             return null;
         }
-        return new HoldRow(row.file(), row.line(), gym, wall, route, setOn,
+        return new HoldRow(
+                row.file(),
+                row.line(),
+                gym,
+                wall,
+                route,
+                setOn,
                 new HoldPlacement.Spec(seq, role, type, size, grips, c.text("hold_ref"), x, y, extras));
     }
 
@@ -169,8 +192,14 @@ public final class RowParser {
         try {
             return grades.read(text, discipline, scale, Set.of());
         } catch (GradeException e) {
-            String hint = e.ambiguous() ? " (give the scale in the grade_scale column: " + String.join(" or ",
-                    e.readings().stream().map(r -> r.scale().word()).toList()) + ")" : "";
+            String hint = e.ambiguous()
+                    ? " (give the scale in the grade_scale column: "
+                            + String.join(
+                                    " or ",
+                                    e.readings().stream()
+                                            .map(r -> r.scale().word())
+                                            .toList()) + ")"
+                    : "";
             c.problem("grade", e.getMessage() + hint);
             return null;
         }
@@ -194,13 +223,15 @@ public final class RowParser {
             try {
                 int d = Integer.parseInt(t.endsWith(".0") ? t.substring(0, t.length() - 2) : t);
                 if (d < 1 || d > 10) {
-                    c.problem("move_difficulty", d + " is out of range (expected numbers 1 to 10, one per hand move, "
-                            + "separated by ;)");
+                    c.problem(
+                            "move_difficulty",
+                            d + " is out of range (expected numbers 1 to 10, one per hand move, " + "separated by ;)");
                 }
                 out.add(d);
             } catch (NumberFormatException e) {
-                c.problem("move_difficulty", "'" + t + "' is not a whole number (expected numbers 1 to 10 "
-                        + "separated by ;)");
+                c.problem(
+                        "move_difficulty",
+                        "'" + t + "' is not a whole number (expected numbers 1 to 10 " + "separated by ;)");
             }
         }
         return out;
@@ -209,18 +240,26 @@ public final class RowParser {
     private String holdType(CellReader c) {
         String t = c.text("type");
         if (t == null) {
-            c.problem("type", "missing value (expected one of " + String.join(", ",
-                    vocabulary.terms(VocabularyField.HOLD_TYPES)) + ")");
+            c.problem(
+                    "type",
+                    "missing value (expected one of " + String.join(", ", vocabulary.terms(VocabularyField.HOLD_TYPES))
+                            + ")");
             return null;
         }
         var term = vocabulary.canonical(VocabularyField.HOLD_TYPES, t);
         if (term.isEmpty()) {
-            String near = Columns.nearest(t.toLowerCase(java.util.Locale.ROOT),
-                    new ArrayList<>(vocabulary.spellings(VocabularyField.HOLD_TYPES).keySet()));
-            String suggestion = near == null ? "" : "did you mean "
-                    + vocabulary.spellings(VocabularyField.HOLD_TYPES).get(near) + "? ";
-            c.problem("type", "unknown hold type '" + t + "' (" + suggestion + "expected one of "
-                    + String.join(", ", vocabulary.terms(VocabularyField.HOLD_TYPES)) + ")");
+            String near = Columns.nearest(
+                    t.toLowerCase(java.util.Locale.ROOT),
+                    new ArrayList<>(
+                            vocabulary.spellings(VocabularyField.HOLD_TYPES).keySet()));
+            String suggestion = near == null
+                    ? ""
+                    : "did you mean "
+                            + vocabulary.spellings(VocabularyField.HOLD_TYPES).get(near) + "? ";
+            c.problem(
+                    "type",
+                    "unknown hold type '" + t + "' (" + suggestion + "expected one of "
+                            + String.join(", ", vocabulary.terms(VocabularyField.HOLD_TYPES)) + ")");
             return null;
         }
         return term.get();
@@ -234,10 +273,12 @@ public final class RowParser {
         try {
             return HoldRole.parse(t);
         } catch (IllegalArgumentException e) {
-            String near = Columns.nearest(t.toLowerCase(java.util.Locale.ROOT),
-                    List.of("hand", "foot", "start", "finish"));
-            c.problem("role", "unknown hold role '" + t + "' (" + (near == null ? "" : "did you mean " + near + "? ")
-                    + "expected hand, foot, start or finish)");
+            String near =
+                    Columns.nearest(t.toLowerCase(java.util.Locale.ROOT), List.of("hand", "foot", "start", "finish"));
+            c.problem(
+                    "role",
+                    "unknown hold role '" + t + "' (" + (near == null ? "" : "did you mean " + near + "? ")
+                            + "expected hand, foot, start or finish)");
             return null;
         }
     }

@@ -17,6 +17,14 @@ import org.variset.archive.gym.WallDiscipline;
  * @param cycleDays reset cycle, or null
  * @param extraFields extra columns in file order
  */
-public record WallRow(String file, int line, String gym, String wall, WallDiscipline discipline, Double angleDeg,
-        Double heightM, Double widthM, Integer cycleDays, Map<String, String> extraFields) {
-}
+public record WallRow(
+        String file,
+        int line,
+        String gym,
+        String wall,
+        WallDiscipline discipline,
+        Double angleDeg,
+        Double heightM,
+        Double widthM,
+        Integer cycleDays,
+        Map<String, String> extraFields) {}

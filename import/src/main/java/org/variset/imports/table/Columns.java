@@ -5,8 +5,7 @@ import java.util.Locale;
 
 /** Column names: how they are compared, and the nearest known name for a near miss. */
 public final class Columns {
-    private Columns() {
-    }
+    private Columns() {}
 
     /** A header cell as compared with the spec's names: stripped and lower case. */
     public static String normalise(String header) {

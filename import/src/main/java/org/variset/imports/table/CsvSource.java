@@ -44,10 +44,12 @@ public final class CsvSource implements RowSource {
         this.file = file;
         this.delimiter = delimiter;
         this.header = header;
-        this.kind = TableKind.detect(path.getFileName().toString(),
+        this.kind = TableKind.detect(
+                path.getFileName().toString(),
                 header.stream().map(Columns::normalise).collect(Collectors.toSet()));
-        this.keys = header.stream().map(name -> kind.knows(Columns.normalise(name)) ? Columns.normalise(name)
-                : name.strip()).toArray(String[]::new);
+        this.keys = header.stream()
+                .map(name -> kind.knows(Columns.normalise(name)) ? Columns.normalise(name) : name.strip())
+                .toArray(String[]::new);
     }
 
     /**
@@ -61,8 +63,14 @@ public final class CsvSource implements RowSource {
         try (BufferedReader r = reader(path)) {
             String first = r.readLine();
             if (first == null || first.isBlank()) {
-                throw new InputFileException(new Problem(file, 0, "", "the file is empty (expected a header row, "
-                        + "for example gym,wall,route,set_on,discipline,grade)"), null);
+                throw new InputFileException(
+                        new Problem(
+                                file,
+                                0,
+                                "",
+                                "the file is empty (expected a header row, "
+                                        + "for example gym,wall,route,set_on,discipline,grade)"),
+                        null);
             }
             delimiter = delimiterOf(first);
         } catch (CharacterCodingException e) {
@@ -124,7 +132,11 @@ public final class CsvSource implements RowSource {
     }
 
     private CSVParser parser() throws IOException {
-        CSVFormat format = CSVFormat.RFC4180.builder().setDelimiter(delimiter).setIgnoreEmptyLines(true).get();
+        CSVFormat format = CSVFormat.RFC4180
+                .builder()
+                .setDelimiter(delimiter)
+                .setIgnoreEmptyLines(true)
+                .get();
         return CSVParser.builder().setReader(reader(path)).setFormat(format).get();
     }
 
@@ -135,7 +147,9 @@ public final class CsvSource implements RowSource {
         if (!(bom.length == 3 && (bom[0] & 0xff) == 0xEF && (bom[1] & 0xff) == 0xBB && (bom[2] & 0xff) == 0xBF)) {
             in.reset();
         }
-        CharsetDecoder strict = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+        CharsetDecoder strict = StandardCharsets.UTF_8
+                .newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT)
                 .onUnmappableCharacter(CodingErrorAction.REPORT);
         return new BufferedReader(new InputStreamReader(in, strict));
     }
@@ -167,8 +181,9 @@ public final class CsvSource implements RowSource {
             return new InputFileException(new Problem(file, (int) line, "", NOT_UTF8), e);
         }
         String why = cause == null || cause.getMessage() == null ? e.toString() : cause.getMessage();
-        return new InputFileException(new Problem(file, (int) line, "", "cannot be read as CSV: " + why
-                + " (check for an unclosed quote)"), e);
+        return new InputFileException(
+                new Problem(file, (int) line, "", "cannot be read as CSV: " + why + " (check for an unclosed quote)"),
+                e);
     }
 
     private final class Cursor implements RowCursor {

@@ -23,8 +23,7 @@ import org.variset.imports.Problem;
 public final class JsonDocument {
     private static final ObjectMapper MAPPER = new ObjectMapper();
 
-    private JsonDocument() {
-    }
+    private JsonDocument() {}
 
     /**
      * Reads the tables of a JSON document.
@@ -45,21 +44,14 @@ public final class JsonDocument {
                 JsonToken value = p.nextToken();
                 if ("gym".equals(field) && value.isScalarValue()) {
                     gym = p.getValueAsString();
-                } else if (("routes".equals(field) || "walls".equals(field)) && value == JsonToken.START_ARRAY) {
-                    int index = 0;
-                    for (JsonToken t = p.nextToken(); t != JsonToken.END_ARRAY; t = p.nextToken()) {
-                        int line = p.currentLocation().getLineNr();
-                        if (t != JsonToken.START_OBJECT) {
-                            throw shape(file, line, field + "[" + index + "] is not an object");
-                        }
-                        JsonNode node = MAPPER.readTree(p);
-                        if ("routes".equals(field)) {
-                            route(file, line, index, node, routes, holds);
-                        } else {
-                            walls.add(new TableRow(file, line, cells(node, false), false));
-                        }
-                        index++;
-                    }
+                } else if ("routes".equals(field) && value == JsonToken.START_ARRAY) {
+                    array(p, file, field, (line, index, node) -> route(file, line, index, node, routes, holds));
+                } else if ("walls".equals(field) && value == JsonToken.START_ARRAY) {
+                    array(
+                            p,
+                            file,
+                            field,
+                            (line, index, node) -> walls.add(new TableRow(file, line, cells(node, false), false)));
                 } else {
                     p.skipChildren();
                 }
@@ -68,13 +60,19 @@ public final class JsonDocument {
                 throw shape(file, p.currentLocation().getLineNr(), "the document does not end where its object ends");
             }
         } catch (com.fasterxml.jackson.core.exc.StreamConstraintsException e) {
-            throw new InputFileException(new Problem(file, 0, "", "is not a document Variset reads: it nests "
-                    + "deeper, or holds longer values, than any interchange document needs: " + e.getOriginalMessage()
-                    .replaceAll(", from `[^`]*`", "")), e);
+            throw new InputFileException(
+                    new Problem(
+                            file,
+                            0,
+                            "",
+                            "is not a document Variset reads: it nests "
+                                    + "deeper, or holds longer values, than any interchange document needs: "
+                                    + e.getOriginalMessage().replaceAll(", from `[^`]*`", "")),
+                    e);
         } catch (JsonProcessingException e) {
             int line = e.getLocation() == null ? 0 : e.getLocation().getLineNr();
-            throw new InputFileException(new Problem(file, line, "", "is not valid JSON: "
-                    + e.getOriginalMessage()), e);
+            throw new InputFileException(
+                    new Problem(file, line, "", "is not valid JSON: " + e.getOriginalMessage()), e);
         } catch (IOException e) {
             throw new InputFileException(new Problem(file, 0, "", "cannot be read: " + e.getMessage()), e);
         }
@@ -90,8 +88,27 @@ public final class JsonDocument {
                 new ListSource(file, TableKind.HOLDS, TableKind.HOLDS.columns(), 1, holds));
     }
 
-    private static void route(String file, int line, int index, JsonNode node, List<TableRow> routes,
-            List<TableRow> holds) {
+    /** What is done with each object of an array. */
+    @FunctionalInterface
+    private interface Element {
+        void accept(int line, int index, JsonNode node);
+    }
+
+    /** Reads the objects of the array the parser stands at, refusing anything else. */
+    private static void array(JsonParser p, String file, String field, Element element) throws IOException {
+        int index = 0;
+        for (JsonToken t = p.nextToken(); t != JsonToken.END_ARRAY; t = p.nextToken()) {
+            int line = p.currentLocation().getLineNr();
+            if (t != JsonToken.START_OBJECT) {
+                throw shape(file, line, field + "[" + index + "] is not an object");
+            }
+            element.accept(line, index, MAPPER.readTree(p));
+            index++;
+        }
+    }
+
+    private static void route(
+            String file, int line, int index, JsonNode node, List<TableRow> routes, List<TableRow> holds) {
         Map<String, Object> cells = cells(node, true);
         routes.add(new TableRow(file, line, cells, false));
         JsonNode hs = node.get("holds");
@@ -143,7 +160,7 @@ public final class JsonDocument {
     }
 
     private static InputFileException shape(String file, int line, String what) {
-        return new InputFileException(new Problem(file, line, "", what + " (expected {\"gym\": ..., \"routes\": "
-                + "[...]})"), null);
+        return new InputFileException(
+                new Problem(file, line, "", what + " (expected {\"gym\": ..., \"routes\": " + "[...]})"), null);
     }
 }

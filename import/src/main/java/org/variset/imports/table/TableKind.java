@@ -11,11 +11,24 @@ import java.util.stream.Stream;
 /** The three tables of the interchange formats, with their columns (docs/spec/interchange.md). */
 public enum TableKind {
     /** routes.csv: one row per route or boulder problem. */
-    ROUTES("routes", List.of("gym", "wall", "route", "set_on", "discipline", "grade"),
-            List.of("grade_scale", "stripped_on", "reset", "setters", "color", "angle_deg", "moves", "styles",
-                "move_difficulty", "notes")),
+    ROUTES(
+            "routes",
+            List.of("gym", "wall", "route", "set_on", "discipline", "grade"),
+            List.of(
+                    "grade_scale",
+                    "stripped_on",
+                    "reset",
+                    "setters",
+                    "color",
+                    "angle_deg",
+                    "moves",
+                    "styles",
+                    "move_difficulty",
+                    "notes")),
     /** holds.csv: one row per hold placement. */
-    HOLDS("holds", List.of("gym", "route", "set_on", "type"),
+    HOLDS(
+            "holds",
+            List.of("gym", "route", "set_on", "type"),
             List.of("wall", "seq", "role", "size", "grip", "hold_ref", "x_m", "y_m")),
     /** walls.csv: one row per wall. */
     WALLS("walls", List.of("gym", "wall"), List.of("discipline", "angle_deg", "height_m", "width_m", "cycle_days"));

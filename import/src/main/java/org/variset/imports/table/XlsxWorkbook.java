@@ -25,8 +25,7 @@ import org.variset.imports.Problem;
  * cells (a setter typing 4:30 in the grip column) as clock positions.
  */
 public final class XlsxWorkbook {
-    private XlsxWorkbook() {
-    }
+    private XlsxWorkbook() {}
 
     /**
      * Reads the tables of a workbook.
@@ -45,19 +44,30 @@ public final class XlsxWorkbook {
                 }
             }
             if (out.isEmpty()) {
-                throw new InputFileException(new Problem(file, 0, "", "the workbook has no sheet named routes, "
-                        + "holds or walls (expected those sheet names, with the CSV columns)"), null);
+                throw new InputFileException(
+                        new Problem(
+                                file,
+                                0,
+                                "",
+                                "the workbook has no sheet named routes, "
+                                        + "holds or walls (expected those sheet names, with the CSV columns)"),
+                        null);
             }
             return out;
         } catch (NotOfficeXmlFileException | InvalidFormatException e) {
-            throw new InputFileException(new Problem(file, 0, "", "is not an XLSX workbook (expected a file saved "
-                    + "as Excel Workbook .xlsx)"), e);
+            throw new InputFileException(
+                    new Problem(
+                            file,
+                            0,
+                            "",
+                            "is not an XLSX workbook (expected a file saved " + "as Excel Workbook .xlsx)"),
+                    e);
         } catch (IOException | RuntimeException e) {
             if (e instanceof InputFileException ife) {
                 throw ife;
             }
-            throw new InputFileException(new Problem(file, 0, "", "cannot be read as an XLSX workbook: "
-                    + e.getMessage()), e);
+            throw new InputFileException(
+                    new Problem(file, 0, "", "cannot be read as an XLSX workbook: " + e.getMessage()), e);
         }
     }
 
@@ -72,8 +82,8 @@ public final class XlsxWorkbook {
                     String v = value(row.getCell(c));
                     header.add(v == null ? "" : v);
                 }
-                header.forEach(name -> keys.add(kind.knows(Columns.normalise(name)) ? Columns.normalise(name)
-                        : name.strip()));
+                header.forEach(
+                        name -> keys.add(kind.knows(Columns.normalise(name)) ? Columns.normalise(name) : name.strip()));
                 headerLine = row.getRowNum() + 1;
                 continue;
             }
@@ -97,8 +107,7 @@ public final class XlsxWorkbook {
         if (cell == null) {
             return null;
         }
-        CellType type = cell.getCellType() == CellType.FORMULA ? cell.getCachedFormulaResultType()
-                : cell.getCellType();
+        CellType type = cell.getCellType() == CellType.FORMULA ? cell.getCachedFormulaResultType() : cell.getCellType();
         return switch (type) {
             case STRING -> cell.getStringCellValue();
             case BOOLEAN -> String.valueOf(cell.getBooleanCellValue());

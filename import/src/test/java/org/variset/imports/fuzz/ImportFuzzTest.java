@@ -44,6 +44,7 @@ class ImportFuzzTest {
 
     @TempDir
     Path dir;
+
     private Archive archive;
     private final List<String> crashes = new ArrayList<>();
 
@@ -63,7 +64,9 @@ class ImportFuzzTest {
             new ArchiveImporter(archive).run(List.of(file), ImportOptions.defaults(), ImportProgress.NONE);
             return true;
         } catch (ImportException userError) {
-            assertThat(userError.problems()).as("a user error lists its problems").isNotEmpty();
+            assertThat(userError.problems())
+                    .as("a user error lists its problems")
+                    .isNotEmpty();
             return true;
         } catch (RuntimeException | Error crash) {
             Path saved = Path.of("target", "fuzz-crashes");
@@ -79,8 +82,10 @@ class ImportFuzzTest {
 
     @Test
     void everyMutatedFileImportsOrGivesAUserError() throws IOException {
-        List<Path> seeds = new ArrayList<>(List.of(ImportFiles.specExample("routes.csv"),
-                ImportFiles.specExample("holds.csv"), ImportFiles.specExample("reset.json")));
+        List<Path> seeds = new ArrayList<>(List.of(
+                ImportFiles.specExample("routes.csv"),
+                ImportFiles.specExample("holds.csv"),
+                ImportFiles.specExample("reset.json")));
         seeds.addAll(TemplateWriter.write(ExportFormat.XLSX, dir.resolve("template"), false));
         Random r = new Random(SEED);
         int imported = 0;
@@ -93,8 +98,8 @@ class ImportFuzzTest {
             imported++;
             Files.delete(input);
         }
-        System.out.println("ImportFuzzTest: " + imported + " mutated inputs (seed " + SEED + "), " + crashes.size()
-                + " crashes");
+        System.out.println(
+                "ImportFuzzTest: " + imported + " mutated inputs (seed " + SEED + "), " + crashes.size() + " crashes");
         assertThat(crashes).as("crashing inputs (kept in target/fuzz-crashes)").isEmpty();
     }
 
@@ -107,6 +112,8 @@ class ImportFuzzTest {
 
     Stream<Path> regressions() throws IOException {
         Path d = Path.of("src/test/resources/fuzz-regressions");
-        return Files.list(d).filter(p -> !p.getFileName().toString().equals("README.md")).sorted();
+        return Files.list(d)
+                .filter(p -> !p.getFileName().toString().equals("README.md"))
+                .sorted();
     }
 }

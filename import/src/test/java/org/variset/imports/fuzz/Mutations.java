@@ -7,12 +7,36 @@ import java.util.Random;
 
 /** Random damage to a file's bytes, one to four mutations per input, all from one seeded {@link Random}. */
 final class Mutations {
-    private static final String[] INSERTS = {"\"", ",", ";", "\t", "\n", "\r\n", "\uFEFF", "\u0000", "-1", "9999",
-        "2026-02-30", "V99", "@@", "{", "}", "[", "]", ":", "null", "1e309", "NaN", "é", "\uD83E\uDDD7", "..",
-        "../../etc/passwd", "=cmd()"};
+    private static final String[] INSERTS = {
+        "\"",
+        ",",
+        ";",
+        "\t",
+        "\n",
+        "\r\n",
+        "\uFEFF",
+        "\u0000",
+        "-1",
+        "9999",
+        "2026-02-30",
+        "V99",
+        "@@",
+        "{",
+        "}",
+        "[",
+        "]",
+        ":",
+        "null",
+        "1e309",
+        "NaN",
+        "é",
+        "\uD83E\uDDD7",
+        "..",
+        "../../etc/passwd",
+        "=cmd()"
+    };
 
-    private Mutations() {
-    }
+    private Mutations() {}
 
     static byte[] mutate(byte[] in, Random r) {
         byte[] b = in.clone();

@@ -17,8 +17,14 @@ import org.variset.archive.settings.GymSettings;
  * @param windowMoveShares for reset audits, the share of the look-back window's routes listing each move
  * @param findings what matters most, in plain words, most important first
  */
-public record Audit(Subject subject, GymSettings settings, SetResult audited, SetResult previous,
-        SetResult reference, Map<String, Double> windowMoveShares, List<Finding> findings) {
+public record Audit(
+        Subject subject,
+        GymSettings settings,
+        SetResult audited,
+        SetResult previous,
+        SetResult reference,
+        Map<String, Double> windowMoveShares,
+        List<Finding> findings) {
 
     /** The sets shown side by side: the audited one, then the previous reset and the reference where there are. */
     public List<SetResult> columns() {

@@ -18,17 +18,21 @@ import org.variset.reports.scoring.repetition.RepetitionFigures;
 public final class AuditJson {
     private static final ObjectMapper MAPPER = new ObjectMapper();
 
-    private AuditJson() {
-    }
+    private AuditJson() {}
 
     /** The audit as a JSON tree. */
     public static ObjectNode of(Audit a) {
         ObjectNode o = MAPPER.createObjectNode();
         Subject s = a.subject();
         ObjectNode subject = o.putObject("subject");
-        subject.put("kind", s.kind().key()).put("title", s.title()).put("gym", s.gym()).put("wall", s.wall())
-                .put("reset", s.reset()).put("on", s.on().toString())
-                .put("from", s.from() == null ? null : s.from().toString()).put("setter", s.setter());
+        subject.put("kind", s.kind().key())
+                .put("title", s.title())
+                .put("gym", s.gym())
+                .put("wall", s.wall())
+                .put("reset", s.reset())
+                .put("on", s.on().toString())
+                .put("from", s.from() == null ? null : s.from().toString())
+                .put("setter", s.setter());
         settings(o.putObject("settings_used"), a);
         set(o, a.audited());
         context(o.putObject("context"), a);
@@ -76,8 +80,11 @@ public final class AuditJson {
 
     private static void pairs(ArrayNode a, List<RepetitionFigures.Pair> pairs) {
         for (RepetitionFigures.Pair p : pairs) {
-            ObjectNode x = a.addObject().put("route", p.route()).put("other", p.other())
-                    .put("jaccard", p.similarity().jaccard()).put("shared_count", p.similarity().shared())
+            ObjectNode x = a.addObject()
+                    .put("route", p.route())
+                    .put("other", p.other())
+                    .put("jaccard", p.similarity().jaccard())
+                    .put("shared_count", p.similarity().shared())
                     .put("union_count", p.similarity().union());
             ArrayNode shared = x.putArray("shared");
             p.similarity().sharedFeatures().forEach(shared::add);
@@ -87,7 +94,8 @@ public final class AuditJson {
     private static void context(ObjectNode o, Audit a) {
         List<SetResult> columns = a.columns();
         ArrayNode cols = o.putArray("columns");
-        columns.forEach(c -> cols.addObject().put("name", c.name()).put("routes", c.routes().size()));
+        columns.forEach(c ->
+                cols.addObject().put("name", c.name()).put("routes", c.routes().size()));
         ObjectNode figures = o.putObject("figures");
         List<Map<String, Double>> values = columns.stream().map(Headline::of).toList();
         for (String key : Headline.LABELS.keySet()) {

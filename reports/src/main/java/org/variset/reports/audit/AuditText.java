@@ -18,8 +18,7 @@ import org.variset.reports.scoring.variety.VarietyFigures;
 public final class AuditText {
     private final StringBuilder b = new StringBuilder();
 
-    private AuditText() {
-    }
+    private AuditText() {}
 
     /** The audit as text; {@code findings} limits how many findings are shown (all are in the JSON). */
     public static String of(Audit a, int findings) {
@@ -30,7 +29,8 @@ public final class AuditText {
 
     private void write(Audit a, int shown) {
         SetResult s = a.audited();
-        line(a.subject().title() + " · " + a.subject().gym() + " · " + s.routes().size() + " routes");
+        line(a.subject().title() + " · " + a.subject().gym() + " · "
+                + s.routes().size() + " routes");
         line(score(s));
         line("");
         line("What stands out");
@@ -51,11 +51,14 @@ public final class AuditText {
         if (s.score().score() == null) {
             return "Score: none (" + s.undefined().getOrDefault("score", "too few parts") + ")";
         }
-        String parts = s.score().weightsUsed().keySet().stream().map(k -> k + " " + FigureFormat.round(
-                s.score().parts().get(k), 2)).collect(Collectors.joining(", "));
+        String parts = s.score().weightsUsed().keySet().stream()
+                .map(k -> k + " " + FigureFormat.round(s.score().parts().get(k), 2))
+                .collect(Collectors.joining(", "));
         return "Score " + FigureFormat.of("score", s.score().score()) + " of 100 (a heuristic: weighted mean of "
-                + parts + (s.score().dropped().isEmpty() ? "" : "; not measured: " + String.join(", ",
-                        s.score().dropped())) + ")";
+                + parts
+                + (s.score().dropped().isEmpty()
+                        ? ""
+                        : "; not measured: " + String.join(", ", s.score().dropped())) + ")";
     }
 
     private void table(Audit a) {
@@ -80,8 +83,10 @@ public final class AuditText {
                     boolean pct = k.getKey().endsWith("_share") || k.getKey().endsWith("_rate");
                     Double now = values.get(0).get(k.getKey());
                     Double before = values.get(1).get(k.getKey());
-                    row.add(pct && now != null && before != null ? FigureFormat.change("score", 100 * now,
-                            100 * before) + " pts" : FigureFormat.change(k.getKey(), now, before));
+                    row.add(
+                            pct && now != null && before != null
+                                    ? FigureFormat.change("score", 100 * now, 100 * before) + " pts"
+                                    : FigureFormat.change(k.getKey(), now, before));
                 }
             }
             rows.add(row);
@@ -109,9 +114,10 @@ public final class AuditText {
             sectors.add(CircularStatistics.sectorWord(i) + " " + g.sectors().get(i));
         }
         line("Grip directions  " + g.n() + " hand grips (" + g.undirected() + " holds without a direction): "
-                + String.join(", ", sectors) + "; mean direction " + FigureFormat.of("mean_direction_deg",
-                        g.meanDirectionDeg()) + "°, resultant length " + FigureFormat.of("resultant_length",
-                        g.resultantLength()) + ", Rayleigh p " + FigureFormat.of("rayleigh_p", g.rayleighP())
+                + String.join(", ", sectors) + "; mean direction "
+                + FigureFormat.of("mean_direction_deg", g.meanDirectionDeg()) + "°, resultant length "
+                + FigureFormat.of("resultant_length", g.resultantLength()) + ", Rayleigh p "
+                + FigureFormat.of("rayleigh_p", g.rayleighP())
                 + " (small on most walls: gravity favours up-facing holds)");
         line("Hold types       " + variety(f.holds()));
         line("Hold shapes      " + variety(f.holdShapes()));
@@ -124,10 +130,13 @@ public final class AuditText {
         }
         line("Profiles         " + profiles(f));
         line("Repetition       " + repetition(s));
-        line("Route lines      " + f.line().withGie() + " routes with a full line: GIE mean " + FigureFormat.of(
-                "gie_mean", f.line().gieMean()) + " (min " + FigureFormat.of("gie_min", f.line().gieMin()) + ", max "
-                + FigureFormat.of("gie_max", f.line().gieMax()) + "); " + f.line().flagged().size()
-                + " routes with a span over " + FigureFormat.round(f.line().reachK() * f.line().reachHeightM(), 2)
+        line("Route lines      " + f.line().withGie() + " routes with a full line: GIE mean "
+                + FigureFormat.of("gie_mean", f.line().gieMean()) + " (min "
+                + FigureFormat.of("gie_min", f.line().gieMin()) + ", max "
+                + FigureFormat.of("gie_max", f.line().gieMax()) + "); "
+                + f.line().flagged().size()
+                + " routes with a span over "
+                + FigureFormat.round(f.line().reachK() * f.line().reachHeightM(), 2)
                 + " m (heuristic)");
     }
 
@@ -135,30 +144,41 @@ public final class AuditText {
         if (v.n() == 0) {
             return "none recorded" + (v.missing() > 0 ? " (" + v.missing() + " without a value)" : "");
         }
-        String counts = v.counts().entrySet().stream().sorted(Map.Entry.<String, Long>comparingByValue().reversed()
-                .thenComparing(Map.Entry.comparingByKey())).limit(10).map(e -> e.getKey() + " " + e.getValue())
+        String counts = v.counts().entrySet().stream()
+                .sorted(Map.Entry.<String, Long>comparingByValue().reversed().thenComparing(Map.Entry.comparingByKey()))
+                .limit(10)
+                .map(e -> e.getKey() + " " + e.getValue())
                 .collect(Collectors.joining(", "));
-        return counts + (v.richness() > 10 ? ", ..." : "") + "; effective number " + FigureFormat.of("hill_n1",
-                v.hillN1()) + (v.coverage() == null ? "" : ", coverage " + FigureFormat.of("coverage", v.coverage()))
+        return counts + (v.richness() > 10 ? ", ..." : "") + "; effective number "
+                + FigureFormat.of("hill_n1", v.hillN1())
+                + (v.coverage() == null ? "" : ", coverage " + FigureFormat.of("coverage", v.coverage()))
                 + (v.missing() > 0 ? "; " + v.missing() + " without a value" : "");
     }
 
     private static String grades(GradeFigures g) {
-        String h = g.histogram().entrySet().stream().filter(e -> e.getValue() > 0 || g.target() != null
-                && g.target().getOrDefault(e.getKey(), 0.0) > 0).map(e -> e.getKey() + " " + e.getValue()
-                + (g.target() == null || !g.target().containsKey(e.getKey()) ? "" : " (target "
-                        + FigureFormat.percent(g.target().get(e.getKey())) + ")")).collect(Collectors.joining(", "));
-        return h + (g.emdToTarget() == null ? "; no target" : "; " + FigureFormat.of("emd_to_target",
-                g.emdToTarget()) + " bands from target") + (g.outsideTarget() > 0 ? "; " + g.outsideTarget()
-                        + " outside the target's bands" : "");
+        String h = g.histogram().entrySet().stream()
+                .filter(e ->
+                        e.getValue() > 0 || g.target() != null && g.target().getOrDefault(e.getKey(), 0.0) > 0)
+                .map(e -> e.getKey() + " " + e.getValue()
+                        + (g.target() == null || !g.target().containsKey(e.getKey())
+                                ? ""
+                                : " (target " + FigureFormat.percent(g.target().get(e.getKey())) + ")"))
+                .collect(Collectors.joining(", "));
+        return h
+                + (g.emdToTarget() == null
+                        ? "; no target"
+                        : "; " + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands from target")
+                + (g.outsideTarget() > 0 ? "; " + g.outsideTarget() + " outside the target's bands" : "");
     }
 
     private static String profiles(SetFigures f) {
-        String c = f.profiles().counts().entrySet().stream().map(e -> e.getKey().key().replace('_', ' ') + " "
-                + e.getValue()).collect(Collectors.joining(", "));
+        String c = f.profiles().counts().entrySet().stream()
+                .map(e -> e.getKey().key().replace('_', ' ') + " " + e.getValue())
+                .collect(Collectors.joining(", "));
         return c + "; spread " + FigureFormat.of("split_entropy", f.profiles().splitEntropy())
-                + (f.profiles().counts().get(ProfileClass.UNCLASSIFIED) > 0 ? " (unclassified: fewer than three "
-                        + "move difficulties)" : "");
+                + (f.profiles().counts().get(ProfileClass.UNCLASSIFIED) > 0
+                        ? " (unclassified: fewer than three " + "move difficulties)"
+                        : "");
     }
 
     private static String repetition(SetResult s) {
@@ -168,21 +188,33 @@ public final class AuditText {
         int near = s.repetition().nearRepeats().size();
         int inside = s.repetition().internalRepeats().size();
         String window = s.windowRoutes() > 0 || s.repetition().novelty() != null
-                ? near + " near-repeats of the " + s.windowRoutes() + " routes set in the look-back window; " : "";
-        return window + inside + " inside this set; novelty " + FigureFormat.of("novelty", s.repetition().novelty())
+                ? near + " near-repeats of the " + s.windowRoutes() + " routes set in the look-back window; "
+                : "";
+        return window + inside + " inside this set; novelty "
+                + FigureFormat.of("novelty", s.repetition().novelty())
                 + "; hold reuse " + FigureFormat.percent(s.holdReuseRate())
-                + (s.repetition().notEnoughDetail().isEmpty() ? "" : "; " + s.repetition().notEnoughDetail().size()
-                        + " routes with too little detail to compare");
+                + (s.repetition().notEnoughDetail().isEmpty()
+                        ? ""
+                        : "; " + s.repetition().notEnoughDetail().size() + " routes with too little detail to compare");
     }
 
     private static String settings(Audit a) {
-        StringBuilder x = new StringBuilder("Settings: look-back " + a.settings().lookbackDays()
-                + " days, near-repeat threshold " + a.settings().nearRepeatThreshold().toPlainString() + ", reach "
-                + FigureFormat.round(a.settings().reachFactor(), 2) + " × " + FigureFormat.round(
-                        a.settings().reachHeightM(), 2) + " m");
+        StringBuilder x =
+                new StringBuilder("Settings: look-back " + a.settings().lookbackDays()
+                        + " days, near-repeat threshold "
+                        + a.settings().nearRepeatThreshold().toPlainString() + ", reach "
+                        + FigureFormat.round(a.settings().reachFactor(), 2) + " × "
+                        + FigureFormat.round(a.settings().reachHeightM(), 2) + " m");
         for (Discipline d : Discipline.values()) {
-            x.append(", ").append(d.word()).append(" target: ").append(a.settings().target(d) == null ? "none"
-                    : a.settings().targetIsDefault(d) ? "the example pyramid (common practice)" : "the gym's own");
+            x.append(", ")
+                    .append(d.word())
+                    .append(" target: ")
+                    .append(
+                            a.settings().target(d) == null
+                                    ? "none"
+                                    : a.settings().targetIsDefault(d)
+                                            ? "the example pyramid (common practice)"
+                                            : "the gym's own");
         }
         return x.toString();
     }

@@ -53,8 +53,8 @@ public final class Auditor {
         }
         if (target instanceof AuditTarget.LatestReset l) {
             WallRecord wall = catalog.wall(gym, l.wall());
-            ResetRecord reset = catalog.latestResetOnOrBefore(wall.id(), l.on()).orElseThrow(() -> noReset(wall,
-                    l.on()));
+            ResetRecord reset =
+                    catalog.latestResetOnOrBefore(wall.id(), l.on()).orElseThrow(() -> noReset(wall, l.on()));
             return auditReset(gym, reset);
         }
         if (target instanceof AuditTarget.Standing s) {
@@ -73,8 +73,10 @@ public final class Auditor {
     private IllegalArgumentException noReset(WallRecord wall, LocalDate on) {
         List<ResetRecord> all = catalog.resetsOfWall(wall.id());
         return new IllegalArgumentException("wall " + wall.name() + " has no reset on or before " + on
-                + (all.isEmpty() ? " (it has none yet)" : " (its first is " + all.get(0).label() + " on "
-                        + all.get(0).resetOn() + ")"));
+                + (all.isEmpty()
+                        ? " (it has none yet)"
+                        : " (its first is " + all.get(0).label() + " on "
+                                + all.get(0).resetOn() + ")"));
     }
 
     private Audit auditReset(GymRecord gym, ResetRecord reset) {
@@ -85,34 +87,48 @@ public final class Auditor {
         SetFigures standingFigures = SetFigures.of(standing, settings);
         List<RouteRecord> window = window(gym, reset, settings);
         SetResult audited = resetResult("this reset", reset, routes, window, standingFigures, settings);
-        SetResult previous = catalog.resetsBefore(reset, 1).stream().findFirst().map(p -> {
-            GymSettings s = settingsReader.inEffectOn(gym.id(), p.resetOn());
-            SetFigures pStanding = SetFigures.of(reader.read(RouteFilter.gym(gym.id()).standingOn(p.resetOn())), s);
-            return resetResult("previous reset " + p.label(), p, reader.read(RouteFilter.reset(p.id())),
-                    window(gym, p, s), pStanding, s);
-        }).orElse(null);
+        SetResult previous = catalog.resetsBefore(reset, 1).stream()
+                .findFirst()
+                .map(p -> {
+                    GymSettings s = settingsReader.inEffectOn(gym.id(), p.resetOn());
+                    SetFigures pStanding =
+                            SetFigures.of(reader.read(RouteFilter.gym(gym.id()).standingOn(p.resetOn())), s);
+                    return resetResult(
+                            "previous reset " + p.label(),
+                            p,
+                            reader.read(RouteFilter.reset(p.id())),
+                            window(gym, p, s),
+                            pStanding,
+                            s);
+                })
+                .orElse(null);
         SetResult reference = SetResults.context("gym, routes up on " + day, standing, standingFigures, settings);
         Subject subject = new Subject(Subject.Kind.RESET, gym.name(), reset.wall(), reset.label(), day, null, null);
         Map<String, Double> moveShares = moveShares(window, SetResults.mainDiscipline(routes));
         return Findings.complete(new Audit(subject, settings, audited, previous, reference, moveShares, List.of()));
     }
 
-    private SetResult resetResult(String name, ResetRecord reset, List<RouteRecord> routes,
-            List<RouteRecord> window, SetFigures standing, GymSettings settings) {
+    private SetResult resetResult(
+            String name,
+            ResetRecord reset,
+            List<RouteRecord> routes,
+            List<RouteRecord> window,
+            SetFigures standing,
+            GymSettings settings) {
         RouteFeatureMapper m = new RouteFeatureMapper(settings);
         RepetitionFigures rep = Repetition.of(m.features(routes), m.features(window), settings.nearRepeatThreshold());
         List<ResetRecord> before = catalog.resetsBefore(reset, 3);
         Set<String> previousKeys = new HashSet<>();
         before.forEach(b -> RouteFeatureMapper.reuseKeys(reader.read(RouteFilter.reset(b.id())))
                 .forEach(previousKeys::addAll));
-        return SetResults.reset(name, routes, window.size(), rep, before.isEmpty(), previousKeys, standing,
-                settings);
+        return SetResults.reset(name, routes, window.size(), rep, before.isEmpty(), previousKeys, standing, settings);
     }
 
     /** The gym's routes set in [day − look-back, day), not of the reset (docs/spec/metrics.md section 5). */
     private List<RouteRecord> window(GymRecord gym, ResetRecord reset, GymSettings settings) {
         LocalDate day = reset.resetOn();
-        return reader.read(RouteFilter.gym(gym.id()).withoutReset(reset.id())
+        return reader.read(RouteFilter.gym(gym.id())
+                .withoutReset(reset.id())
                 .setBetween(day.minusDays(settings.lookbackDays()), day));
     }
 
@@ -128,7 +144,8 @@ public final class Auditor {
             audited = SetResults.standing("routes up", gymRoutes, gymFigures, gymFigures, settings);
         } else {
             subject = new Subject(Subject.Kind.WALL_STANDING, gym.name(), wall.name(), null, day, null, null);
-            List<RouteRecord> onWall = gymRoutes.stream().filter(r -> r.wall().equals(wall.name())).toList();
+            List<RouteRecord> onWall =
+                    gymRoutes.stream().filter(r -> r.wall().equals(wall.name())).toList();
             audited = SetResults.standing("routes up", onWall, SetFigures.of(onWall, settings), gymFigures, settings);
             reference = SetResults.context("gym, routes up on " + day, gymRoutes, gymFigures, settings);
         }
@@ -140,20 +157,24 @@ public final class Auditor {
         GymSettings settings = settingsReader.inEffectOn(gym.id(), p.to());
         List<RouteRecord> period = reader.read(RouteFilter.gym(gym.id()).setBetween(p.from(), p.to().plusDays(1)));
         String name = p.setter().strip();
-        List<RouteRecord> mine = period.stream().filter(r -> r.setters().contains(name)).toList();
-        List<RouteRecord> others = period.stream().filter(r -> !r.setters().contains(name)).toList();
-        SetFigures standing = SetFigures.of(reader.read(RouteFilter.gym(gym.id()).standingOn(p.to())), settings);
-        SetResult audited = SetResults.standing("routes of " + name, mine, SetFigures.of(mine, settings), standing,
-                settings);
-        SetResult reference = SetResults.context("other setters, same period", others,
-                SetFigures.of(others, settings), settings);
+        List<RouteRecord> mine =
+                period.stream().filter(r -> r.setters().contains(name)).toList();
+        List<RouteRecord> others =
+                period.stream().filter(r -> !r.setters().contains(name)).toList();
+        SetFigures standing =
+                SetFigures.of(reader.read(RouteFilter.gym(gym.id()).standingOn(p.to())), settings);
+        SetResult audited =
+                SetResults.standing("routes of " + name, mine, SetFigures.of(mine, settings), standing, settings);
+        SetResult reference =
+                SetResults.context("other setters, same period", others, SetFigures.of(others, settings), settings);
         Subject subject = new Subject(Subject.Kind.SETTER, gym.name(), null, null, p.to(), p.from(), name);
         return Findings.complete(new Audit(subject, settings, audited, null, reference, Map.of(), List.of()));
     }
 
     /** The share of the window's routes of a discipline that list each move. */
     private static Map<String, Double> moveShares(List<RouteRecord> window, Discipline d) {
-        List<RouteRecord> same = window.stream().filter(r -> r.discipline() == d).toList();
+        List<RouteRecord> same =
+                window.stream().filter(r -> r.discipline() == d).toList();
         Map<String, Double> out = new LinkedHashMap<>();
         for (RouteRecord r : same) {
             for (String m : new HashSet<>(r.moves())) {

@@ -7,5 +7,4 @@ package org.variset.reports.audit;
  * @param weight how much it matters, for ordering (higher first)
  * @param text the sentence
  */
-public record Finding(String kind, double weight, String text) {
-}
+public record Finding(String kind, double weight, String text) {}

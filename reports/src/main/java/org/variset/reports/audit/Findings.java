@@ -42,9 +42,11 @@ final class Findings {
     static Audit complete(Audit a) {
         Findings x = new Findings(a);
         x.find();
-        List<Finding> sorted = x.out.stream().sorted(Comparator.comparingDouble(Finding::weight).reversed()).toList();
-        return new Audit(a.subject(), a.settings(), a.audited(), a.previous(), a.reference(), a.windowMoveShares(),
-                sorted);
+        List<Finding> sorted = x.out.stream()
+                .sorted(Comparator.comparingDouble(Finding::weight).reversed())
+                .toList();
+        return new Audit(
+                a.subject(), a.settings(), a.audited(), a.previous(), a.reference(), a.windowMoveShares(), sorted);
     }
 
     private void find() {
@@ -53,8 +55,11 @@ final class Findings {
             return;
         }
         if (f.holds().n() == 0) {
-            out.add(new Finding("no_holds", 6, "No hold placements are recorded for these routes: the grip and "
-                    + "hold figures are empty. Import a holds file to measure them."));
+            out.add(new Finding(
+                    "no_holds",
+                    6,
+                    "No hold placements are recorded for these routes: the grip and "
+                            + "hold figures are empty. Import a holds file to measure them."));
         }
         grip();
         RepeatFindings.add(audit, out);
@@ -78,8 +83,9 @@ final class Findings {
             top = g.sectors().get(s) > g.sectors().get(top) ? s : top;
         }
         int k = g.sectors().get(top);
-        boolean downFacing = g.sectors().get(3) + g.sectors().get(4) + g.sectors().get(5) > 0
-                || f.moves().counts().containsKey("undercling");
+        boolean downFacing =
+                g.sectors().get(3) + g.sectors().get(4) + g.sectors().get(5) > 0
+                        || f.moves().counts().containsKey("undercling");
         boolean gaston = f.moves().counts().containsKey("gaston");
         List<String> missing = new ArrayList<>();
         if (!downFacing) {
@@ -90,8 +96,10 @@ final class Findings {
         }
         String none = missing.isEmpty() ? "" : "; no " + String.join(" or ", missing) + " in this set";
         if (k >= DOMINANT_SECTOR * g.n()) {
-            out.add(new Finding("grip", 8 + k / (double) g.n(), k + " of " + g.n() + " hand grips face "
-                    + CircularStatistics.sectorWord(top) + none + "."));
+            out.add(new Finding(
+                    "grip",
+                    8 + k / (double) g.n(),
+                    k + " of " + g.n() + " hand grips face " + CircularStatistics.sectorWord(top) + none + "."));
         } else if (!missing.isEmpty()) {
             out.add(new Finding("grip", 5, "No " + String.join(" or ", missing) + " in this set."));
         }
@@ -100,29 +108,42 @@ final class Findings {
     private void missingMoves() {
         List<String> usual = audit.windowMoveShares().entrySet().stream()
                 .filter(e -> e.getValue() >= USUAL_MOVE && !f.moves().counts().containsKey(e.getKey()))
-                .sorted(Map.Entry.<String, Double>comparingByValue().reversed()).limit(4)
-                .map(e -> e.getKey() + " (" + FigureFormat.percent(e.getValue()) + ")").toList();
+                .sorted(Map.Entry.<String, Double>comparingByValue().reversed())
+                .limit(4)
+                .map(e -> e.getKey() + " (" + FigureFormat.percent(e.getValue()) + ")")
+                .toList();
         if (!usual.isEmpty()) {
-            out.add(new Finding("missing_moves", 6, "Not on this reset, though usual before it: " + String.join(", ",
-                    usual) + " of the gym's routes over the last " + audit.settings().lookbackDays() + " days."));
+            out.add(new Finding(
+                    "missing_moves",
+                    6,
+                    "Not on this reset, though usual before it: " + String.join(", ", usual)
+                            + " of the gym's routes over the last "
+                            + audit.settings().lookbackDays() + " days."));
         }
     }
 
     private void holdReuse() {
         Double r = audit.audited().holdReuseRate();
         if (r != null && r >= HIGH_REUSE) {
-            out.add(new Finding("hold_reuse", 6 + r, FigureFormat.percent(r) + " of this reset's placements put a "
-                    + "hold shape back in the orientation it had on this wall in its last three resets."));
+            out.add(new Finding(
+                    "hold_reuse",
+                    6 + r,
+                    FigureFormat.percent(r) + " of this reset's placements put a "
+                            + "hold shape back in the orientation it had on this wall in its last three resets."));
         }
     }
 
     private void holdTypes() {
         VarietyFigures h = f.holds();
         if (h.n() >= 20 && h.richness() <= 3) {
-            String types = h.counts().entrySet().stream().filter(e -> e.getValue() > 0).map(Map.Entry::getKey)
+            String types = h.counts().entrySet().stream()
+                    .filter(e -> e.getValue() > 0)
+                    .map(Map.Entry::getKey)
                     .collect(Collectors.joining(", "));
-            out.add(new Finding("hold_types", 5, "Only " + h.richness() + " hold types (" + types + ") across "
-                    + h.n() + " placements."));
+            out.add(new Finding(
+                    "hold_types",
+                    5,
+                    "Only " + h.richness() + " hold types (" + types + ") across " + h.n() + " placements."));
         }
     }
 
@@ -131,8 +152,11 @@ final class Findings {
         long classified = p.classified();
         for (ProfileClass c : ProfileClass.values()) {
             if (c != ProfileClass.UNCLASSIFIED && classified >= 3 && p.counts().get(c) == classified) {
-                out.add(new Finding("profiles", 4, "All " + classified + " routes with move difficulties are "
-                        + c.key().replace('_', ' ') + ": the set trains one kind of effort."));
+                out.add(new Finding(
+                        "profiles",
+                        4,
+                        "All " + classified + " routes with move difficulties are "
+                                + c.key().replace('_', ' ') + ": the set trains one kind of effort."));
             }
         }
     }
@@ -143,15 +167,31 @@ final class Findings {
         String caveat = " (longer than " + FigureFormat.round(limit, 2) + " m; a heuristic, not a measurement of any "
                 + "climber)";
         if (flagged.size() > 2) {
-            out.add(new Finding("reach", 3, flagged.size() + " routes have a span between hand holds" + caveat
-                    + ": " + FeatureText.list(flagged.stream().map(r -> r.route() + " " + FigureFormat.round(
-                            r.spans().get(r.longSpans().get(0)), 2) + " m").toList(), 4) + "."));
+            out.add(new Finding(
+                    "reach",
+                    3,
+                    flagged.size() + " routes have a span between hand holds" + caveat
+                            + ": "
+                            + FeatureText.list(
+                                    flagged.stream()
+                                            .map(r -> r.route() + " "
+                                                    + FigureFormat.round(
+                                                            r.spans()
+                                                                    .get(r.longSpans()
+                                                                            .get(0)),
+                                                            2) + " m")
+                                            .toList(),
+                                    4)
+                            + "."));
             return;
         }
         for (RouteLineFigures r : flagged) {
             int i = r.longSpans().get(0);
-            out.add(new Finding("reach", 3, r.route() + ": a " + FigureFormat.round(r.spans().get(i), 2)
-                    + " m span between hand holds " + (i + 1) + " and " + (i + 2) + caveat + "."));
+            out.add(new Finding(
+                    "reach",
+                    3,
+                    r.route() + ": a " + FigureFormat.round(r.spans().get(i), 2) + " m span between hand holds "
+                            + (i + 1) + " and " + (i + 2) + caveat + "."));
         }
     }
 
@@ -163,14 +203,18 @@ final class Findings {
         Double now = f.grip().sectorEntropy();
         Double before = p.figures().grip().sectorEntropy();
         if (now != null && before != null && Math.abs(now - before) >= 0.1) {
-            out.add(new Finding("change", 4, "Grip variety (sector entropy) " + (now < before ? "fell" : "rose")
-                    + " from " + FigureFormat.of("sector_entropy", before) + " to "
-                    + FigureFormat.of("sector_entropy", now) + " since the " + p.name() + "."));
+            out.add(new Finding(
+                    "change",
+                    4,
+                    "Grip variety (sector entropy) " + (now < before ? "fell" : "rose")
+                            + " from " + FigureFormat.of("sector_entropy", before) + " to "
+                            + FigureFormat.of("sector_entropy", now) + " since the " + p.name() + "."));
         }
     }
 
     /** The grade figures of the main discipline of a set, or null. */
     static GradeFigures mainGrades(SetFigures figures) {
-        return figures.grades().getOrDefault(Discipline.BOULDER, figures.grades().get(Discipline.ROPE));
+        return figures.grades()
+                .getOrDefault(Discipline.BOULDER, figures.grades().get(Discipline.ROPE));
     }
 }

@@ -18,8 +18,7 @@ final class GradeFindings {
     /** A distance to target of at least this many bands is worth a sentence (a heuristic of ours). */
     private static final double FAR = 0.5;
 
-    private GradeFindings() {
-    }
+    private GradeFindings() {}
 
     static void add(Audit audit, List<Finding> out) {
         Subject.Kind k = audit.subject().kind();
@@ -27,7 +26,8 @@ final class GradeFindings {
             return;
         }
         boolean whole = k == Subject.Kind.GYM_STANDING;
-        SetFigures standing = whole ? audit.audited().figures() : audit.reference().figures();
+        SetFigures standing =
+                whole ? audit.audited().figures() : audit.reference().figures();
         // A reset or a wall is not meant to cover the target itself: the gym's grades weigh less in its audit.
         double weight = whole ? 7 : 4;
         String where = "the gym's " + "%s up on " + audit.subject().on();
@@ -39,32 +39,45 @@ final class GradeFindings {
             GradeFigures g = e.getValue();
             String whose = String.format(where, d == Discipline.BOULDER ? "boulders" : "rope routes");
             if (g.target() == null) {
-                out.add(new Finding("no_target", 2, "No grade target for " + d.word() + " routes yet: set one with "
-                        + "'variset settings set target ... --discipline " + d.word() + "'."));
+                out.add(new Finding(
+                        "no_target",
+                        2,
+                        "No grade target for " + d.word() + " routes yet: set one with "
+                                + "'variset settings set target ... --discipline " + d.word() + "'."));
                 continue;
             }
-            String example = audit.settings().targetIsDefault(d) ? " (against the example pyramid; set the gym's "
-                    + "own with 'variset settings set target')" : "";
+            String example = audit.settings().targetIsDefault(d)
+                    ? " (against the example pyramid; set the gym's " + "own with 'variset settings set target')"
+                    : "";
             long inside = GradeGaps.routesInTarget(g);
             List<String> gaps = GradeGaps.notable(g);
             if (!gaps.isEmpty()) {
                 List<String> wanted = new ArrayList<>();
                 gaps.forEach(b -> wanted.add(FigureFormat.round(g.target().get(b) * inside, 1)));
-                out.add(new Finding("grade_gap", weight + gaps.size() * 0.1, "No " + FeatureText.list(gaps, 5)
-                        .replace(" and ", " or ") + " among " + whose + ", where the target expects "
-                        + FeatureText.list(wanted, 5) + example + "."));
+                out.add(new Finding(
+                        "grade_gap",
+                        weight + gaps.size() * 0.1,
+                        "No " + FeatureText.list(gaps, 5).replace(" and ", " or ") + " among " + whose
+                                + ", where the target expects "
+                                + FeatureText.list(wanted, 5) + example + "."));
             }
             if (g.emdToTarget() != null && g.emdToTarget() >= FAR) {
-                out.add(new Finding("grade_distance", weight - 1.5 + g.emdToTarget(), capitalised(whose)
-                        + " sit on average " + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands from the "
-                        + "target" + skew(g) + (gaps.isEmpty() ? example : "") + "."));
+                out.add(new Finding(
+                        "grade_distance",
+                        weight - 1.5 + g.emdToTarget(),
+                        capitalised(whose)
+                                + " sit on average " + FigureFormat.of("emd_to_target", g.emdToTarget())
+                                + " bands from the "
+                                + "target" + skew(g) + (gaps.isEmpty() ? example : "") + "."));
             }
         }
     }
 
     /** ": more V3 than aimed at (12 against 7), fewer V6 (1 against 5)". */
     private static String skew(GradeFigures g) {
-        long inside = g.target().keySet().stream().mapToLong(b -> g.histogram().getOrDefault(b, 0L)).sum();
+        long inside = g.target().keySet().stream()
+                .mapToLong(b -> g.histogram().getOrDefault(b, 0L))
+                .sum();
         String over = null;
         String under = null;
         double most = 0;

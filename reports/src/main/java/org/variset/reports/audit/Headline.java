@@ -30,8 +30,7 @@ public final class Headline {
         LABELS.put("line.gie_mean", "route line wander (mean GIE)");
     }
 
-    private Headline() {
-    }
+    private Headline() {}
 
     /** The headline figures of a set (null where undefined), in {@link #LABELS} order. */
     public static Map<String, Double> of(SetResult s) {
@@ -47,7 +46,9 @@ public final class Headline {
         m.put("styles.hill_n1", f.styles().hillN1());
         GradeFigures g = Findings.mainGrades(f);
         m.put("grades.emd_to_target", g == null ? null : g.emdToTarget());
-        m.put("repetition.novelty", s.repetition() == null ? null : s.repetition().novelty());
+        m.put(
+                "repetition.novelty",
+                s.repetition() == null ? null : s.repetition().novelty());
         m.put("repetition.hold_reuse_rate", s.holdReuseRate());
         m.put("profiles.split_entropy", f.profiles().splitEntropy());
         m.put("line.gie_mean", f.line().gieMean());

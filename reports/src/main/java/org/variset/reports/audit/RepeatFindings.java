@@ -10,8 +10,7 @@ import org.variset.reports.scoring.repetition.RepetitionFigures;
 final class RepeatFindings {
     private static final int SHOWN = 3;
 
-    private RepeatFindings() {
-    }
+    private RepeatFindings() {}
 
     static void add(Audit audit, List<Finding> out) {
         RepetitionFigures rep = audit.audited().repetition();
@@ -21,28 +20,38 @@ final class RepeatFindings {
         List<RepetitionFigures.Pair> near = byJaccard(rep.nearRepeats());
         for (int i = 0; i < Math.min(SHOWN, near.size()); i++) {
             RepetitionFigures.Pair p = near.get(i);
-            out.add(new Finding("near_repeat", 9 - i * 0.01, p.route() + " repeats " + p.other() + ": "
-                    + FeatureText.shared(p.similarity().sharedFeatures()) + " (Jaccard "
-                    + FigureFormat.of("jaccard", p.similarity().jaccard()) + ")."));
+            out.add(new Finding(
+                    "near_repeat",
+                    9 - i * 0.01,
+                    p.route() + " repeats " + p.other() + ": "
+                            + FeatureText.shared(p.similarity().sharedFeatures()) + " (Jaccard "
+                            + FigureFormat.of("jaccard", p.similarity().jaccard()) + ")."));
         }
         if (near.size() > SHOWN) {
-            out.add(new Finding("near_repeat", 8.9, (near.size() - SHOWN) + " more near-repeats of earlier routes"
-                    + " (listed in the repetition table)."));
+            out.add(new Finding(
+                    "near_repeat",
+                    8.9,
+                    (near.size() - SHOWN) + " more near-repeats of earlier routes"
+                            + " (listed in the repetition table)."));
         }
         List<RepetitionFigures.Pair> inside = byJaccard(rep.internalRepeats());
         for (int i = 0; i < Math.min(SHOWN, inside.size()); i++) {
             RepetitionFigures.Pair p = inside.get(i);
-            out.add(new Finding("internal_repeat", 8.5 - i * 0.01, p.route() + " and " + p.other()
-                    + " are near-repeats of each other in this set: "
-                    + FeatureText.shared(p.similarity().sharedFeatures()) + " (Jaccard "
-                    + FigureFormat.of("jaccard", p.similarity().jaccard()) + ")."));
+            out.add(new Finding(
+                    "internal_repeat",
+                    8.5 - i * 0.01,
+                    p.route() + " and " + p.other()
+                            + " are near-repeats of each other in this set: "
+                            + FeatureText.shared(p.similarity().sharedFeatures()) + " (Jaccard "
+                            + FigureFormat.of("jaccard", p.similarity().jaccard()) + ")."));
         }
     }
 
     /** Most similar first (stable for equal indexes). */
     static List<RepetitionFigures.Pair> byJaccard(List<RepetitionFigures.Pair> pairs) {
         List<RepetitionFigures.Pair> out = new ArrayList<>(pairs);
-        out.sort((a, b) -> Double.compare(b.similarity().jaccard(), a.similarity().jaccard()));
+        out.sort((a, b) ->
+                Double.compare(b.similarity().jaccard(), a.similarity().jaccard()));
         return out;
     }
 }

@@ -19,6 +19,12 @@ import org.variset.reports.scoring.score.CompositeScore;
  * @param score the composite score
  * @param undefined for each null figure of this level (novelty, hold reuse, score), its key and why
  */
-public record SetResult(String name, List<RouteRecord> routes, SetFigures figures, RepetitionFigures repetition,
-        int windowRoutes, Double holdReuseRate, CompositeScore score, Map<String, String> undefined) {
-}
+public record SetResult(
+        String name,
+        List<RouteRecord> routes,
+        SetFigures figures,
+        RepetitionFigures repetition,
+        int windowRoutes,
+        Double holdReuseRate,
+        CompositeScore score,
+        Map<String, String> undefined) {}

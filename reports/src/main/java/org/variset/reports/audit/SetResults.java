@@ -16,15 +16,21 @@ import org.variset.reports.scoring.score.CompositeScore;
 
 /** Builds {@link SetResult}s from routes already read: repetition, hold reuse and the score; pure. */
 public final class SetResults {
-    private SetResults() {
-    }
+    private SetResults() {}
 
     /**
      * A reset compared with its look-back window, with hold reuse against the wall's previous resets
      * ({@code previousKeys} null: hold reuse not measured).
      */
-    public static SetResult reset(String name, List<RouteRecord> routes, int windowRoutes, RepetitionFigures rep,
-            boolean firstOnWall, Set<String> previousKeys, SetFigures standing, GymSettings settings) {
+    public static SetResult reset(
+            String name,
+            List<RouteRecord> routes,
+            int windowRoutes,
+            RepetitionFigures rep,
+            boolean firstOnWall,
+            Set<String> previousKeys,
+            SetFigures standing,
+            GymSettings settings) {
         SetFigures f = SetFigures.of(routes, settings);
         Map<String, String> why = new LinkedHashMap<>();
         List<Set<String>> keys = RouteFeatureMapper.reuseKeys(routes);
@@ -46,12 +52,12 @@ public final class SetResults {
     }
 
     /** A standing set or a setter's routes: repeats inside the set, no novelty (nothing before it to compare). */
-    public static SetResult standing(String name, List<RouteRecord> routes, SetFigures f, SetFigures gymStanding,
-            GymSettings settings) {
+    public static SetResult standing(
+            String name, List<RouteRecord> routes, SetFigures f, SetFigures gymStanding, GymSettings settings) {
         RouteFeatureMapper m = new RouteFeatureMapper(settings);
         RepetitionFigures inside = Repetition.of(m.features(routes), List.of(), settings.nearRepeatThreshold());
-        RepetitionFigures rep = new RepetitionFigures(List.of(), inside.internalRepeats(), null,
-                inside.notEnoughDetail());
+        RepetitionFigures rep =
+                new RepetitionFigures(List.of(), inside.internalRepeats(), null, inside.notEnoughDetail());
         Map<String, String> why = new LinkedHashMap<>();
         why.put("novelty", "novelty compares a reset with the routes set before it; this set is not one reset");
         why.put("hold_reuse_rate", "hold reuse compares a reset with the wall's previous resets");
@@ -71,8 +77,13 @@ public final class SetResults {
      * The composite score (docs/spec/metrics.md section 7). Coverage can exceed 1 when a set uses terms outside the
      * vocabulary (its richness is then above K); the part is capped at 1.
      */
-    static CompositeScore score(SetFigures f, SetFigures gradesFrom, Discipline main, Double novelty,
-            GymSettings settings, Map<String, String> why) {
+    static CompositeScore score(
+            SetFigures f,
+            SetFigures gradesFrom,
+            Discipline main,
+            Double novelty,
+            GymSettings settings,
+            Map<String, String> why) {
         Map<String, Double> parts = new LinkedHashMap<>();
         parts.put("grip", f.grip().sectorEntropy());
         parts.put("holds", cap(f.holds().coverage()));
@@ -82,15 +93,19 @@ public final class SetResults {
         parts.put("novelty", novelty);
         CompositeScore s = CompositeScore.of(parts, settings.scoreWeights());
         if (s.score() == null) {
-            why.put("score", "fewer than three of its parts could be measured (missing: " + String.join(", ",
-                    s.dropped()) + ")");
+            why.put(
+                    "score",
+                    "fewer than three of its parts could be measured (missing: " + String.join(", ", s.dropped())
+                            + ")");
         }
         return s;
     }
 
     /** The discipline most of the routes have (boulder on a tie), or null for none. */
     public static Discipline mainDiscipline(List<RouteRecord> routes) {
-        long boulders = routes.stream().filter(r -> r.discipline() == Discipline.BOULDER).count();
+        long boulders = routes.stream()
+                .filter(r -> r.discipline() == Discipline.BOULDER)
+                .count();
         if (routes.isEmpty()) {
             return null;
         }

@@ -18,18 +18,25 @@ final class SetterHabits {
     private static final double MIN_SHARE = 0.2;
     private static final double MIN_LEAD = 0.15;
 
-    private SetterHabits() {
-    }
+    private SetterHabits() {}
 
     static void add(Audit audit, List<Finding> out) {
         if (audit.subject().kind() != Subject.Kind.SETTER || audit.reference() == null) {
             return;
         }
         String who = audit.subject().setter();
-        habit(gripShares(audit.audited().routes()), gripShares(audit.reference().routes()), 8.5, out,
+        habit(
+                gripShares(audit.audited().routes()),
+                gripShares(audit.reference().routes()),
+                8.5,
+                out,
                 (key, mine, theirs) -> mine + " of " + who + "'s hand grips are " + describeGrip(key) + " (" + key
                         + "), against " + theirs + " for the other setters in the same period.");
-        habit(moveShares(audit.audited().routes()), moveShares(audit.reference().routes()), 7.5, out,
+        habit(
+                moveShares(audit.audited().routes()),
+                moveShares(audit.reference().routes()),
+                7.5,
+                out,
                 (key, mine, theirs) -> mine + " of " + who + "'s routes ask for a " + key + ", against " + theirs
                         + " of the other setters' routes.");
     }
@@ -39,8 +46,8 @@ final class SetterHabits {
         String of(String key, String mine, String theirs);
     }
 
-    private static void habit(Map<String, Double> mine, Map<String, Double> theirs, double weight, List<Finding> out,
-            Sentence sentence) {
+    private static void habit(
+            Map<String, Double> mine, Map<String, Double> theirs, double weight, List<Finding> out, Sentence sentence) {
         String best = null;
         double lead = 0;
         for (Map.Entry<String, Double> e : mine.entrySet()) {
@@ -51,8 +58,13 @@ final class SetterHabits {
             }
         }
         if (best != null) {
-            out.add(new Finding("setter_habit", weight + lead, sentence.of(best,
-                    FigureFormat.percent(mine.get(best)), FigureFormat.percent(theirs.getOrDefault(best, 0.0)))));
+            out.add(new Finding(
+                    "setter_habit",
+                    weight + lead,
+                    sentence.of(
+                            best,
+                            FigureFormat.percent(mine.get(best)),
+                            FigureFormat.percent(theirs.getOrDefault(best, 0.0)))));
         }
     }
 
@@ -66,7 +78,9 @@ final class SetterHabits {
                     continue;
                 }
                 for (double g : h.grips()) {
-                    counts.merge(h.type() + "@" + RouteFeatures.sectorDegrees(CircularStatistics.sector(g)), 1.0,
+                    counts.merge(
+                            h.type() + "@" + RouteFeatures.sectorDegrees(CircularStatistics.sector(g)),
+                            1.0,
                             Double::sum);
                     n++;
                 }

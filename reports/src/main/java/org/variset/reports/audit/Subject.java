@@ -13,8 +13,7 @@ import java.time.LocalDate;
  * @param from for a setter, the first day; otherwise null
  * @param setter the setter's name, or null
  */
-public record Subject(Kind kind, String gym, String wall, String reset, LocalDate on, LocalDate from,
-        String setter) {
+public record Subject(Kind kind, String gym, String wall, String reset, LocalDate on, LocalDate from, String setter) {
 
     /** The kinds of set an audit looks at. */
     public enum Kind {

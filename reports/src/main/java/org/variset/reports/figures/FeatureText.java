@@ -6,8 +6,7 @@ import java.util.Set;
 
 /** Feature sets (docs/spec/metrics.md section 5) in words: "same crimp@0 and pinch@90 holds, same heel hook > dyno". */
 public final class FeatureText {
-    private FeatureText() {
-    }
+    private FeatureText() {}
 
     /** "same crimp@0 and pinch@90 holds, same heel hook > dyno" from the shared features. */
     public static String shared(Set<String> features) {

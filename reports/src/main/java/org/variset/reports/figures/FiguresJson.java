@@ -15,8 +15,7 @@ import org.variset.reports.scoring.variety.VarietyFigures;
  * unrounded; the reason for each null figure goes under {@code undefined} as {@code block.key}.
  */
 public final class FiguresJson {
-    private FiguresJson() {
-    }
+    private FiguresJson() {}
 
     /** Writes every block of the figures into o, reasons into undefined. */
     public static void write(ObjectNode o, SetFigures f, ObjectNode undefined) {
@@ -48,21 +47,33 @@ public final class FiguresJson {
     }
 
     private static void grip(ObjectNode o, GripStatistics g, ObjectNode undefined) {
-        o.put("n", g.n()).put("undirected", g.undirected()).put("resultant_length", g.resultantLength())
-                .put("mean_direction_deg", g.meanDirectionDeg()).put("circular_variance", g.circularVariance())
-                .put("circular_sd_deg", g.circularSdDeg()).put("rayleigh_z", g.rayleighZ())
-                .put("rayleigh_p", g.rayleighP()).put("axial_resultant_length", g.axialResultantLength());
+        o.put("n", g.n())
+                .put("undirected", g.undirected())
+                .put("resultant_length", g.resultantLength())
+                .put("mean_direction_deg", g.meanDirectionDeg())
+                .put("circular_variance", g.circularVariance())
+                .put("circular_sd_deg", g.circularSdDeg())
+                .put("rayleigh_z", g.rayleighZ())
+                .put("rayleigh_p", g.rayleighP())
+                .put("axial_resultant_length", g.axialResultantLength());
         ArrayNode sectors = o.putArray("sectors");
         g.sectors().forEach(sectors::add);
-        o.put("sector_entropy", g.sectorEntropy()).put("horizontal_edge_share", g.horizontalEdgeShare())
+        o.put("sector_entropy", g.sectorEntropy())
+                .put("horizontal_edge_share", g.horizontalEdgeShare())
                 .put("vertical_edge_share", g.verticalEdgeShare());
         g.undefined().forEach((k, why) -> undefined.put("grip." + k, why));
     }
 
     private static void variety(ObjectNode o, String block, VarietyFigures v, ObjectNode undefined) {
-        o.put("n", v.n()).put("missing", v.missing()).put("richness", v.richness()).put("shannon", v.shannon())
-                .put("pielou", v.pielou()).put("gini_simpson", v.giniSimpson()).put("hill_n1", v.hillN1())
-                .put("hill_n2", v.hillN2()).put("coverage", v.coverage());
+        o.put("n", v.n())
+                .put("missing", v.missing())
+                .put("richness", v.richness())
+                .put("shannon", v.shannon())
+                .put("pielou", v.pielou())
+                .put("gini_simpson", v.giniSimpson())
+                .put("hill_n1", v.hillN1())
+                .put("hill_n2", v.hillN2())
+                .put("coverage", v.coverage());
         ObjectNode counts = o.putObject("counts");
         v.counts().forEach(counts::put);
         v.undefined().forEach((k, why) -> undefined.put(block + "." + k, why));
@@ -76,24 +87,35 @@ public final class FiguresJson {
         } else {
             map(o.putObject("target"), g.target());
         }
-        o.put("outside_target", g.outsideTarget()).put("emd_to_target", g.emdToTarget())
-                .put("chi_square", g.chiSquare()).put("chi_square_df", g.chiSquareDf())
-                .put("chi_square_p", g.chiSquareP()).put("chi_square_reliable", g.chiSquareReliable());
+        o.put("outside_target", g.outsideTarget())
+                .put("emd_to_target", g.emdToTarget())
+                .put("chi_square", g.chiSquare())
+                .put("chi_square_df", g.chiSquareDf())
+                .put("chi_square_p", g.chiSquareP())
+                .put("chi_square_reliable", g.chiSquareReliable());
         ArrayNode gaps = o.putArray("gaps");
         g.gaps().forEach(gaps::add);
         g.undefined().forEach((k, why) -> undefined.put(block + "." + k, why));
     }
 
     private static void line(ObjectNode o, LineFigures l, ObjectNode undefined) {
-        o.put("routes_with_gie", l.withGie()).put("gie_mean", l.gieMean()).put("gie_min", l.gieMin())
-                .put("gie_max", l.gieMax()).put("reach_height_m", l.reachHeightM()).put("reach_factor", l.reachK());
+        o.put("routes_with_gie", l.withGie())
+                .put("gie_mean", l.gieMean())
+                .put("gie_min", l.gieMin())
+                .put("gie_max", l.gieMax())
+                .put("reach_height_m", l.reachHeightM())
+                .put("reach_factor", l.reachK());
         if (l.gieMean() == null) {
             undefined.put("line.gie_mean", "no route has three or more hand holds, all with positions");
         }
         ArrayNode routes = o.putArray("routes");
         for (RouteLineFigures r : l.routes()) {
-            ObjectNode x = routes.addObject().put("route", r.route()).put("hand_holds", r.handHolds())
-                    .put("path_length", r.pathLength()).put("hull_perimeter", r.hullPerimeter()).put("gie", r.gie());
+            ObjectNode x = routes.addObject()
+                    .put("route", r.route())
+                    .put("hand_holds", r.handHolds())
+                    .put("path_length", r.pathLength())
+                    .put("hull_perimeter", r.hullPerimeter())
+                    .put("gie", r.gie());
             ArrayNode spans = x.putArray("move_spans");
             r.spans().forEach(spans::add);
             ArrayNode flagged = x.putArray("long_spans");

@@ -11,8 +11,7 @@ public final class GradeGaps {
     /** The least number of routes the target must expect in a band for its gap to count. */
     public static final double EXPECTED_ROUTES = 2;
 
-    private GradeGaps() {
-    }
+    private GradeGaps() {}
 
     /** The notable gaps of a grade block, in band order; empty without a target. */
     public static List<String> notable(GradeFigures g) {
@@ -20,11 +19,15 @@ public final class GradeGaps {
             return List.of();
         }
         long inside = routesInTarget(g);
-        return g.gaps().stream().filter(b -> g.target().get(b) * inside >= EXPECTED_ROUTES).toList();
+        return g.gaps().stream()
+                .filter(b -> g.target().get(b) * inside >= EXPECTED_ROUTES)
+                .toList();
     }
 
     /** How many routes fall in the target's bands. */
     public static long routesInTarget(GradeFigures g) {
-        return g.target().keySet().stream().mapToLong(b -> g.histogram().getOrDefault(b, 0L)).sum();
+        return g.target().keySet().stream()
+                .mapToLong(b -> g.histogram().getOrDefault(b, 0L))
+                .sum();
     }
 }

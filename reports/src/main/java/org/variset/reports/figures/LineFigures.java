@@ -16,17 +16,33 @@ import org.variset.archive.read.RouteRecord;
  * @param reachK the span factor k used
  * @param reachHeightM the climber height used
  */
-public record LineFigures(List<RouteLineFigures> routes, int withGie, Double gieMean, Double gieMin, Double gieMax,
-        double reachK, double reachHeightM) {
+public record LineFigures(
+        List<RouteLineFigures> routes,
+        int withGie,
+        Double gieMean,
+        Double gieMin,
+        Double gieMax,
+        double reachK,
+        double reachHeightM) {
 
     /** The lines of the routes, spans checked against k × height. */
     public static LineFigures of(List<RouteRecord> set, double k, double heightM) {
-        List<RouteLineFigures> lines = set.stream().map(r -> RouteLineFigures.of(r, k, heightM)).toList();
-        DoubleSummaryStatistics s = lines.stream().map(RouteLineFigures::gie).filter(Objects::nonNull)
-                .mapToDouble(Double::doubleValue).summaryStatistics();
+        List<RouteLineFigures> lines =
+                set.stream().map(r -> RouteLineFigures.of(r, k, heightM)).toList();
+        DoubleSummaryStatistics s = lines.stream()
+                .map(RouteLineFigures::gie)
+                .filter(Objects::nonNull)
+                .mapToDouble(Double::doubleValue)
+                .summaryStatistics();
         boolean any = s.getCount() > 0;
-        return new LineFigures(lines, (int) s.getCount(), any ? s.getAverage() : null, any ? s.getMin() : null,
-                any ? s.getMax() : null, k, heightM);
+        return new LineFigures(
+                lines,
+                (int) s.getCount(),
+                any ? s.getAverage() : null,
+                any ? s.getMin() : null,
+                any ? s.getMax() : null,
+                k,
+                heightM);
     }
 
     /** The routes with at least one span flagged. */

@@ -16,14 +16,16 @@ public record ProfileFigures(Map<ProfileClass, Long> counts, Double splitEntropy
 
     /** The profiles of the routes' move difficulties. */
     public static ProfileFigures of(List<RouteRecord> routes) {
-        Map<ProfileClass, Long> counts = DifficultyProfile.counts(routes.stream()
-                .map(RouteRecord::moveDifficulty).toList());
+        Map<ProfileClass, Long> counts = DifficultyProfile.counts(
+                routes.stream().map(RouteRecord::moveDifficulty).toList());
         return new ProfileFigures(counts, DifficultyProfile.splitEntropy(counts));
     }
 
     /** Routes with a class other than unclassified. */
     public long classified() {
-        return counts.entrySet().stream().filter(e -> e.getKey() != ProfileClass.UNCLASSIFIED)
-                .mapToLong(Map.Entry::getValue).sum();
+        return counts.entrySet().stream()
+                .filter(e -> e.getKey() != ProfileClass.UNCLASSIFIED)
+                .mapToLong(Map.Entry::getValue)
+                .sum();
     }
 }

@@ -28,11 +28,18 @@ public final class RouteFeatureMapper {
     public RouteFeatures features(RouteRecord r) {
         List<RouteFeatures.HandHold> hand = new ArrayList<>();
         for (HoldRecord h : r.handHoldsInOrder()) {
-            hand.add(new RouteFeatures.HandHold(h.type(), h.grips().stream().map(CircularStatistics::sector)
-                    .distinct().toList()));
+            hand.add(new RouteFeatures.HandHold(
+                    h.type(),
+                    h.grips().stream()
+                            .map(CircularStatistics::sector)
+                            .distinct()
+                            .toList()));
         }
         String angle = r.angleDeg() == null ? null : AngleBand.label(AngleBand.of(r.angleDeg()));
-        String grade = settings.bands(r.discipline()).bandOf(r.ircra()).map(Band::label).orElse(null);
+        String grade = settings.bands(r.discipline())
+                .bandOf(r.ircra())
+                .map(Band::label)
+                .orElse(null);
         return RouteFeatures.of(r.name(), r.discipline().word(), hand, r.moves(), angle, grade);
     }
 
@@ -54,8 +61,9 @@ public final class RouteFeatureMapper {
                     if (h.grips().isEmpty()) {
                         keys.add(h.holdRef() + "@none");
                     }
-                    h.grips().forEach(g -> keys.add(h.holdRef() + "@"
-                            + RouteFeatures.sectorDegrees(CircularStatistics.sector(g))));
+                    h.grips()
+                            .forEach(g -> keys.add(
+                                    h.holdRef() + "@" + RouteFeatures.sectorDegrees(CircularStatistics.sector(g))));
                 }
                 out.add(keys);
             }

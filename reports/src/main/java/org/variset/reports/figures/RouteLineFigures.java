@@ -19,8 +19,15 @@ import org.variset.reports.scoring.line.RouteLine;
  * @param spans distances between consecutive hand holds in metres; empty without positions
  * @param longSpans indexes into spans of those longer than k × climber height (span i joins holds i+1 and i+2)
  */
-public record RouteLineFigures(String route, int handHolds, List<Point> points, Double pathLength,
-        Double hullPerimeter, Double gie, List<Double> spans, List<Integer> longSpans) {
+public record RouteLineFigures(
+        String route,
+        int handHolds,
+        List<Point> points,
+        Double pathLength,
+        Double hullPerimeter,
+        Double gie,
+        List<Double> spans,
+        List<Integer> longSpans) {
 
     /** The line of a route, with spans checked against k × height. */
     public static RouteLineFigures of(RouteRecord r, double k, double heightM) {
@@ -35,8 +42,14 @@ public record RouteLineFigures(String route, int handHolds, List<Point> points, 
         if (points.isEmpty()) {
             return new RouteLineFigures(r.name(), 0, List.of(), null, null, null, List.of(), List.of());
         }
-        return new RouteLineFigures(r.name(), hand.size(), List.copyOf(points), RouteLine.pathLength(points),
-                RouteLine.hullPerimeter(points), RouteLine.gie(points), RouteLine.spans(points),
+        return new RouteLineFigures(
+                r.name(),
+                hand.size(),
+                List.copyOf(points),
+                RouteLine.pathLength(points),
+                RouteLine.hullPerimeter(points),
+                RouteLine.gie(points),
+                RouteLine.spans(points),
                 RouteLine.longSpans(points, k, heightM));
     }
 }

@@ -36,24 +36,48 @@ import org.variset.reports.scoring.variety.VarietyFigures;
  * @param profiles difficulty profiles [{@code profiles}]
  * @param line route lines [{@code line}]
  */
-public record SetFigures(int routes, GripStatistics grip, VarietyFigures holds, VarietyFigures holdShapes,
-        VarietyFigures sizes, VarietyFigures moves, VarietyFigures styles, VarietyFigures angles,
-        Map<Discipline, GradeFigures> grades, ProfileFigures profiles, LineFigures line) {
+public record SetFigures(
+        int routes,
+        GripStatistics grip,
+        VarietyFigures holds,
+        VarietyFigures holdShapes,
+        VarietyFigures sizes,
+        VarietyFigures moves,
+        VarietyFigures styles,
+        VarietyFigures angles,
+        Map<Discipline, GradeFigures> grades,
+        ProfileFigures profiles,
+        LineFigures line) {
 
     /** The figures of a set under the gym's settings. */
     public static SetFigures of(List<RouteRecord> set, GymSettings settings) {
         Vocabulary v = settings.vocabulary();
         List<HoldRecord> all = set.stream().flatMap(r -> r.holds().stream()).toList();
-        return new SetFigures(set.size(), grip(all), count(all.stream().map(HoldRecord::type).toList(),
-                v.terms(VocabularyField.HOLD_TYPES).size()),
+        return new SetFigures(
+                set.size(),
+                grip(all),
+                count(
+                        all.stream().map(HoldRecord::type).toList(),
+                        v.terms(VocabularyField.HOLD_TYPES).size()),
                 count(all.stream().map(HoldRecord::holdRef).toList(), null),
-                count(all.stream().map(h -> h.size() == null ? null : h.size().word()).toList(),
+                count(
+                        all.stream()
+                                .map(h -> h.size() == null ? null : h.size().word())
+                                .toList(),
                         HoldSize.values().length),
-                count(set.stream().flatMap(r -> r.moves().stream()).toList(), v.terms(VocabularyField.MOVES).size()),
-                count(set.stream().flatMap(r -> r.styles().stream()).toList(), v.terms(VocabularyField.STYLES).size()),
-                count(set.stream().map(r -> r.angleDeg() == null ? null : AngleBand.label(AngleBand.of(r.angleDeg())))
-                        .toList(), null),
-                grades(set, settings), ProfileFigures.of(set),
+                count(
+                        set.stream().flatMap(r -> r.moves().stream()).toList(),
+                        v.terms(VocabularyField.MOVES).size()),
+                count(
+                        set.stream().flatMap(r -> r.styles().stream()).toList(),
+                        v.terms(VocabularyField.STYLES).size()),
+                count(
+                        set.stream()
+                                .map(r -> r.angleDeg() == null ? null : AngleBand.label(AngleBand.of(r.angleDeg())))
+                                .toList(),
+                        null),
+                grades(set, settings),
+                ProfileFigures.of(set),
                 LineFigures.of(set, settings.reachFactor(), settings.reachHeightM()));
     }
 
@@ -70,7 +94,8 @@ public record SetFigures(int routes, GripStatistics grip, VarietyFigures holds, 
             }
             degrees.addAll(h.grips());
         }
-        return CircularStatistics.of(degrees.stream().mapToDouble(Double::doubleValue).toArray(), undirected);
+        return CircularStatistics.of(
+                degrees.stream().mapToDouble(Double::doubleValue).toArray(), undirected);
     }
 
     /** Counts values per category, first seen first; nulls are missing. */
@@ -91,7 +116,10 @@ public record SetFigures(int routes, GripStatistics grip, VarietyFigures holds, 
     private static Map<Discipline, GradeFigures> grades(List<RouteRecord> set, GymSettings settings) {
         Map<Discipline, GradeFigures> out = new EnumMap<>(Discipline.class);
         for (Discipline d : Discipline.values()) {
-            double[] values = set.stream().filter(r -> r.discipline() == d).mapToDouble(RouteRecord::ircra).toArray();
+            double[] values = set.stream()
+                    .filter(r -> r.discipline() == d)
+                    .mapToDouble(RouteRecord::ircra)
+                    .toArray();
             if (values.length > 0) {
                 out.put(d, GradeDistribution.of(values, settings.bands(d), settings.target(d)));
             }

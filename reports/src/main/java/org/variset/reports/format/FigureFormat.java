@@ -12,6 +12,7 @@ import java.util.Map;
 public final class FigureFormat {
     /** How an undefined (null) figure reads. */
     public static final String NONE = "–";
+
     private static final Map<String, Integer> DECIMALS = new LinkedHashMap<>();
 
     static {
@@ -21,14 +22,13 @@ public final class FigureFormat {
         for (String k : new String[] {"hill_n1", "hill_n2", "path_length", "hull_perimeter", "change_score"}) {
             DECIMALS.put(k, 1);
         }
-        for (String k : new String[] {"rayleigh_p", "chi_square_p", "gie", "gie_mean", "gie_min", "gie_max",
-            "jaccard"}) {
+        for (String k :
+                new String[] {"rayleigh_p", "chi_square_p", "gie", "gie_mean", "gie_min", "gie_max", "jaccard"}) {
             DECIMALS.put(k, 3);
         }
     }
 
-    private FigureFormat() {
-    }
+    private FigureFormat() {}
 
     /** The decimals a key is shown with: those listed above, else 2. */
     public static int decimals(String key) {
@@ -55,7 +55,9 @@ public final class FigureFormat {
         if (Double.isNaN(value) || Double.isInfinite(value)) {
             throw new IllegalArgumentException("not a finite figure: " + value);
         }
-        return new BigDecimal(Double.toString(value)).setScale(decimals, RoundingMode.HALF_UP).toPlainString();
+        return new BigDecimal(Double.toString(value))
+                .setScale(decimals, RoundingMode.HALF_UP)
+                .toPlainString();
     }
 
     /** A share in [0, 1] as a whole percentage ({@code 62%}), or {@link #NONE}. */

@@ -52,7 +52,8 @@ public final class AuditPdf {
             case SETTER -> "Setter audit";
             default -> "Standing-set audit";
         };
-        try (PdfDoc doc = new PdfDoc(out, options, kind, a.subject().title() + " · " + a.subject().gym())) {
+        try (PdfDoc doc = new PdfDoc(
+                out, options, kind, a.subject().title() + " · " + a.subject().gym())) {
             new AuditPdf(a, plan, doc).write();
             return Set.copyOf(doc.missingCharacters());
         }
@@ -77,20 +78,35 @@ public final class AuditPdf {
 
     private void firstPage() {
         SetResult s = a.audited();
-        doc.paragraph(s.routes().size() + " routes · " + (a.subject().kind() == Subject.Kind.SETTER
-                ? "set " + a.subject().period() : "on " + a.subject().on()), PdfDoc.BODY, false, Palette.MUTED);
+        doc.paragraph(
+                s.routes().size() + " routes · "
+                        + (a.subject().kind() == Subject.Kind.SETTER
+                                ? "set " + a.subject().period()
+                                : "on " + a.subject().on()),
+                PdfDoc.BODY,
+                false,
+                Palette.MUTED);
         doc.paragraph("Score " + FigureFormat.of("score", s.score().score()) + " of 100", 22, true, Palette.BLUE);
         if (s.score().score() == null) {
             doc.paragraph(s.undefined().getOrDefault("score", "too few of its parts could be measured"));
         }
         List<List<String>> rows = new ArrayList<>();
-        s.score().parts().forEach((part, v) -> rows.add(List.of(part, v == null ? FigureFormat.NONE
-                : FigureFormat.round(v, 2), s.score().weightsUsed().containsKey(part)
-                        ? FigureFormat.round(s.score().weightsUsed().get(part), 2) : "not measured")));
+        s.score()
+                .parts()
+                .forEach((part, v) -> rows.add(List.of(
+                        part,
+                        v == null ? FigureFormat.NONE : FigureFormat.round(v, 2),
+                        s.score().weightsUsed().containsKey(part)
+                                ? FigureFormat.round(s.score().weightsUsed().get(part), 2)
+                                : "not measured")));
         doc.table(List.of("part of the score", "value (0-1)", "weight used"), rows, new float[] {3, 1.3f, 1.3f});
-        doc.paragraph("The score is a heuristic of ours: a weighted mean of its parts (grip-direction spread, "
-                + "hold-type and move coverage, the gym's grades against the target, novelty). Read the parts "
-                + "beside it.", 7.5f, false, Palette.MUTED);
+        doc.paragraph(
+                "The score is a heuristic of ours: a weighted mean of its parts (grip-direction spread, "
+                        + "hold-type and move coverage, the gym's grades against the target, novelty). Read the parts "
+                        + "beside it.",
+                7.5f,
+                false,
+                Palette.MUTED);
         if (a.previous() != null) {
             doc.heading("Since the " + a.previous().name(), false);
             doc.bullets(changes());
@@ -117,9 +133,11 @@ public final class AuditPdf {
         List<String> out = new ArrayList<>();
         out.add("score: " + Headline.text("score.score", before.get("score.score")) + " → "
                 + Headline.text("score.score", now.get("score.score")));
-        moved.stream().limit(4).forEach(e -> out.add(Headline.LABELS.get(e.getKey()) + ": "
-                + Headline.text(e.getKey(), before.get(e.getKey())) + " → " + Headline.text(e.getKey(),
-                        now.get(e.getKey()))));
+        moved.stream()
+                .limit(4)
+                .forEach(e -> out.add(Headline.LABELS.get(e.getKey()) + ": "
+                        + Headline.text(e.getKey(), before.get(e.getKey())) + " → "
+                        + Headline.text(e.getKey(), now.get(e.getKey()))));
         return out;
     }
 
@@ -148,8 +166,8 @@ public final class AuditPdf {
         GripStatistics g = a.audited().figures().grip();
         doc.heading("Grip directions", false);
         if (g.n() == 0) {
-            doc.paragraph("No hand hold with a grip direction is recorded" + (g.undirected() > 0 ? " (" + g.undirected()
-                    + " hand holds have none)." : "."));
+            doc.paragraph("No hand hold with a grip direction is recorded"
+                    + (g.undirected() > 0 ? " (" + g.undirected() + " hand holds have none)." : "."));
             return;
         }
         doc.drawing(300, 250, (gr, size) -> Drawings.rose(gr, size[0], size[1], g, doc.fonts()));
@@ -157,8 +175,9 @@ public final class AuditPdf {
                 + "length " + FigureFormat.of("resultant_length", g.resultantLength()) + " (0 spread, 1 all one way); "
                 + "circular standard deviation " + FigureFormat.of("circular_sd_deg", g.circularSdDeg()) + "°; "
                 + "sector entropy " + FigureFormat.of("sector_entropy", g.sectorEntropy()) + "; edges horizontal "
-                + FigureFormat.percent(g.horizontalEdgeShare()) + ", vertical " + FigureFormat.percent(
-                        g.verticalEdgeShare()) + "; Rayleigh test p " + FigureFormat.of("rayleigh_p", g.rayleighP())
+                + FigureFormat.percent(g.horizontalEdgeShare()) + ", vertical "
+                + FigureFormat.percent(g.verticalEdgeShare()) + "; Rayleigh test p "
+                + FigureFormat.of("rayleigh_p", g.rayleighP())
                 + ". Gravity favours up-facing holds, so a small p is expected on most walls and is no finding on "
                 + "its own.");
     }
@@ -178,8 +197,8 @@ public final class AuditPdf {
                 sizes.put(s, f.sizes().counts().getOrDefault(s, 0L));
             }
             doc.chart(Charts.bars(doc.fonts(), "placements", sizes, false), doc.width() * 0.6f, 110);
-            doc.paragraph("Sizes: " + summary(f.sizes()) + (f.sizes().missing() > 0 ? "; " + f.sizes().missing()
-                    + " placements without a size" : "") + ".");
+            doc.paragraph("Sizes: " + summary(f.sizes())
+                    + (f.sizes().missing() > 0 ? "; " + f.sizes().missing() + " placements without a size" : "") + ".");
         }
     }
 
@@ -193,11 +212,16 @@ public final class AuditPdf {
             }
             doc.paragraph(d.word() + " routes of this set", PdfDoc.BODY, true, Palette.INK);
             grade(mine, d);
-            GradeFigures ref = reference == null || reference == a.audited() ? null
+            GradeFigures ref = reference == null || reference == a.audited()
+                    ? null
                     : reference.figures().grades().get(d);
             if (ref != null) {
-                doc.paragraph(d.word() + " routes of the " + reference.name() + " (what the score's grades part "
-                        + "measures)", PdfDoc.BODY, true, Palette.INK);
+                doc.paragraph(
+                        d.word() + " routes of the " + reference.name() + " (what the score's grades part "
+                                + "measures)",
+                        PdfDoc.BODY,
+                        true,
+                        Palette.INK);
                 grade(ref, d);
             }
         }
@@ -216,21 +240,28 @@ public final class AuditPdf {
                     + "--discipline " + d.word() + "'.");
             return;
         }
-        long inside = g.target().keySet().stream().mapToLong(b -> g.histogram().getOrDefault(b, 0L)).sum();
+        long inside = g.target().keySet().stream()
+                .mapToLong(b -> g.histogram().getOrDefault(b, 0L))
+                .sum();
         Map<String, Double> observed = new LinkedHashMap<>();
-        g.target().keySet().forEach(b -> observed.put(b, inside == 0 ? 0 : g.histogram().getOrDefault(b, 0L)
-                / (double) inside));
+        g.target()
+                .keySet()
+                .forEach(b -> observed.put(b, inside == 0 ? 0 : g.histogram().getOrDefault(b, 0L) / (double) inside));
         doc.chart(Charts.barsAgainstTarget(doc.fonts(), observed, g.target()), doc.width(), 140);
         boolean example = a.settings().targetIsDefault(d);
         doc.paragraph("Distance to target " + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands "
                 + "(Wasserstein-1); chi-square " + FigureFormat.of("chi_square", g.chiSquare()) + " on "
-                + (g.chiSquareDf() == null ? FigureFormat.NONE : g.chiSquareDf()) + " df, p " + FigureFormat.of(
-                        "chi_square_p", g.chiSquareP()) + (Boolean.FALSE.equals(g.chiSquareReliable())
-                                ? " (too few routes for the test to be reliable: Cochran's rule)" : "")
-                + (g.gaps().isEmpty() ? "" : "; no route in " + String.join(", ", g.gaps())) + (g.outsideTarget() > 0
-                        ? "; " + g.outsideTarget() + " routes outside the target's bands" : "") + "."
-                + (example ? " The target is an example pyramid (common practice), not the gym's own: a heuristic "
-                        + "to replace with 'variset settings set target'." : ""));
+                + (g.chiSquareDf() == null ? FigureFormat.NONE : g.chiSquareDf()) + " df, p "
+                + FigureFormat.of("chi_square_p", g.chiSquareP())
+                + (Boolean.FALSE.equals(g.chiSquareReliable())
+                        ? " (too few routes for the test to be reliable: Cochran's rule)"
+                        : "")
+                + (g.gaps().isEmpty() ? "" : "; no route in " + String.join(", ", g.gaps()))
+                + (g.outsideTarget() > 0 ? "; " + g.outsideTarget() + " routes outside the target's bands" : "") + "."
+                + (example
+                        ? " The target is an example pyramid (common practice), not the gym's own: a heuristic "
+                                + "to replace with 'variset settings set target'."
+                        : ""));
     }
 
     private void moves() {
@@ -248,10 +279,11 @@ public final class AuditPdf {
         Map<String, Long> c = new LinkedHashMap<>();
         f.profiles().counts().forEach((k, v) -> c.put(k.key().replace('_', ' '), v));
         doc.chart(Charts.bars(doc.fonts(), "routes", c, false), doc.width() * 0.7f, 110);
-        doc.paragraph("Split entropy " + FigureFormat.of("split_entropy", f.profiles().splitEntropy()) + " (0: every "
-                + "classified route alike; 1: an even spread over steady, sustained, single crux and multi crux). "
-                + f.profiles().counts().get(ProfileClass.UNCLASSIFIED) + " routes have fewer than three move "
-                + "difficulties and are unclassified.");
+        doc.paragraph(
+                "Split entropy " + FigureFormat.of("split_entropy", f.profiles().splitEntropy()) + " (0: every "
+                        + "classified route alike; 1: an even spread over steady, sustained, single crux and multi crux). "
+                        + f.profiles().counts().get(ProfileClass.UNCLASSIFIED) + " routes have fewer than three move "
+                        + "difficulties and are unclassified.");
     }
 
     private void repetition() {
@@ -262,10 +294,12 @@ public final class AuditPdf {
             doc.paragraph("Not measured.");
             return;
         }
-        doc.paragraph("Novelty " + FigureFormat.of("novelty", r.novelty()) + (r.novelty() == null ? " ("
-                + s.undefined().getOrDefault("novelty", "") + ")" : "") + "; hold reuse " + FigureFormat.percent(
-                        s.holdReuseRate()) + "; compared with " + s.windowRoutes() + " routes of the look-back "
-                + "window; near-repeat threshold " + a.settings().nearRepeatThreshold().toPlainString() + ".");
+        doc.paragraph("Novelty " + FigureFormat.of("novelty", r.novelty())
+                + (r.novelty() == null ? " (" + s.undefined().getOrDefault("novelty", "") + ")" : "") + "; hold reuse "
+                + FigureFormat.percent(s.holdReuseRate()) + "; compared with " + s.windowRoutes()
+                + " routes of the look-back "
+                + "window; near-repeat threshold "
+                + a.settings().nearRepeatThreshold().toPlainString() + ".");
         pairs("Near-repeats of earlier routes", r.nearRepeats());
         pairs("Near-repeats inside this set", r.internalRepeats());
     }
@@ -277,7 +311,10 @@ public final class AuditPdf {
         }
         List<List<String>> rows = new ArrayList<>();
         for (RepetitionFigures.Pair p : pairs) {
-            rows.add(List.of(p.route(), p.other(), FigureFormat.of("jaccard", p.similarity().jaccard()),
+            rows.add(List.of(
+                    p.route(),
+                    p.other(),
+                    FigureFormat.of("jaccard", p.similarity().jaccard()),
                     FeatureText.shared(p.similarity().sharedFeatures())));
         }
         doc.table(List.of("route", "repeats", "Jaccard", "shared"), rows, new float[] {2.2f, 2.2f, 0.8f, 4.5f});
@@ -286,20 +323,28 @@ public final class AuditPdf {
     private void lines() {
         SetFigures f = a.audited().figures();
         doc.heading("Route lines and reach", false);
-        doc.paragraph("Geometric index of entropy (0 straight, larger wandering): mean " + FigureFormat.of("gie_mean",
-                f.line().gieMean()) + " over " + f.line().withGie() + " routes. A span longer than "
-                + FigureFormat.round(f.line().reachK(), 2) + " × " + FigureFormat.round(f.line().reachHeightM(), 2)
+        doc.paragraph("Geometric index of entropy (0 straight, larger wandering): mean "
+                + FigureFormat.of("gie_mean", f.line().gieMean()) + " over "
+                + f.line().withGie() + " routes. A span longer than "
+                + FigureFormat.round(f.line().reachK(), 2) + " × "
+                + FigureFormat.round(f.line().reachHeightM(), 2)
                 + " m is flagged: a heuristic (arm span is close to height in most adults), not a measurement of any "
                 + "climber.");
         List<List<String>> rows = new ArrayList<>();
         for (RouteLineFigures r : f.line().routes()) {
-            rows.add(List.of(r.route(), String.valueOf(r.handHolds()), r.pathLength() == null ? FigureFormat.NONE
-                    : FigureFormat.round(r.pathLength(), 2), FigureFormat.of("gie", r.gie()),
+            rows.add(List.of(
+                    r.route(),
+                    String.valueOf(r.handHolds()),
+                    r.pathLength() == null ? FigureFormat.NONE : FigureFormat.round(r.pathLength(), 2),
+                    FigureFormat.of("gie", r.gie()),
                     r.longSpans().isEmpty() ? "" : r.longSpans().size() + " long"));
         }
-        doc.table(List.of("route", "hand holds", "path (m)", "GIE", "spans flagged"), rows,
-                new float[] {3.5f, 1, 1, 1, 1.3f});
-        List<RouteLineFigures> drawn = f.line().routes().stream().filter(r -> r.points().size() >= 2).limit(8)
+        doc.table(List.of("route", "hand holds", "path (m)", "GIE", "spans flagged"), rows, new float[] {
+            3.5f, 1, 1, 1, 1.3f
+        });
+        List<RouteLineFigures> drawn = f.line().routes().stream()
+                .filter(r -> r.points().size() >= 2)
+                .limit(8)
                 .toList();
         if (!drawn.isEmpty()) {
             float cell = Math.min(120, doc.width() / Math.min(4, drawn.size()));
@@ -310,7 +355,12 @@ public final class AuditPdf {
                     for (int k = 0; k < row.size(); k++) {
                         java.awt.Graphics2D sub = (java.awt.Graphics2D) g.create();
                         sub.translate(k * cell, 0);
-                        Drawings.line(sub, cell - 8, cell - 4, row.get(k).points(), row.get(k).longSpans(),
+                        Drawings.line(
+                                sub,
+                                cell - 8,
+                                cell - 4,
+                                row.get(k).points(),
+                                row.get(k).longSpans(),
                                 doc.fonts());
                         sub.setColor(Palette.INK);
                         sub.setFont(doc.fonts().awt(6.5f, false));
@@ -325,20 +375,32 @@ public final class AuditPdf {
     private void settings() {
         doc.heading("Settings used", false);
         doc.paragraph("Look-back " + a.settings().lookbackDays() + " days; near-repeat threshold "
-                + a.settings().nearRepeatThreshold().toPlainString() + "; reach " + FigureFormat.round(
-                        a.settings().reachFactor(), 2) + " × " + FigureFormat.round(a.settings().reachHeightM(), 2)
-                + " m; score weights " + String.join(", ", a.settings().scoreWeights().entrySet().stream()
-                        .map(e -> e.getKey() + " " + FigureFormat.round(e.getValue(), 2)).toList()) + ".");
-        doc.paragraph("Heuristics in this document: the composite score, the reach flags, the default grade pyramid "
-                + "(where the gym has not set its own target) and the thresholds behind the findings. The figures "
-                + "themselves follow published methods: Shannon entropy, Hill numbers, the Rayleigh test, the "
-                + "Wasserstein distance, Pearson's chi-square and the Jaccard index.", 7.5f, false, Palette.MUTED);
+                + a.settings().nearRepeatThreshold().toPlainString() + "; reach "
+                + FigureFormat.round(a.settings().reachFactor(), 2) + " × "
+                + FigureFormat.round(a.settings().reachHeightM(), 2)
+                + " m; score weights "
+                + String.join(
+                        ", ",
+                        a.settings().scoreWeights().entrySet().stream()
+                                .map(e -> e.getKey() + " " + FigureFormat.round(e.getValue(), 2))
+                                .toList())
+                + ".");
+        doc.paragraph(
+                "Heuristics in this document: the composite score, the reach flags, the default grade pyramid "
+                        + "(where the gym has not set its own target) and the thresholds behind the findings. The figures "
+                        + "themselves follow published methods: Shannon entropy, Hill numbers, the Rayleigh test, the "
+                        + "Wasserstein distance, Pearson's chi-square and the Jaccard index.",
+                7.5f,
+                false,
+                Palette.MUTED);
     }
 
     private static Map<String, Long> sortedCounts(VarietyFigures v) {
         Map<String, Long> out = new LinkedHashMap<>();
-        v.counts().entrySet().stream().sorted(Map.Entry.<String, Long>comparingByValue().reversed()
-                .thenComparing(Map.Entry.comparingByKey())).limit(14).forEach(e -> out.put(e.getKey(), e.getValue()));
+        v.counts().entrySet().stream()
+                .sorted(Map.Entry.<String, Long>comparingByValue().reversed().thenComparing(Map.Entry.comparingByKey()))
+                .limit(14)
+                .forEach(e -> out.put(e.getKey(), e.getValue()));
         return out;
     }
 
@@ -346,7 +408,8 @@ public final class AuditPdf {
         if (v.n() == 0) {
             return "none recorded";
         }
-        return v.richness() + " kinds in " + v.n() + "; effective number (Hill N1) " + FigureFormat.of("hill_n1",
-                v.hillN1()) + (v.coverage() == null ? "" : ", coverage " + FigureFormat.of("coverage", v.coverage()));
+        return v.richness() + " kinds in " + v.n() + "; effective number (Hill N1) "
+                + FigureFormat.of("hill_n1", v.hillN1())
+                + (v.coverage() == null ? "" : ", coverage " + FigureFormat.of("coverage", v.coverage()));
     }
 }

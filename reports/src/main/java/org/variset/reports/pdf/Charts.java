@@ -30,12 +30,15 @@ import org.jfree.data.time.TimeSeriesCollection;
 
 /** Bar and line charts in the document's fonts and palette, every bar labelled with its value. */
 final class Charts {
-    private static final Shape[] MARKERS = {new Ellipse2D.Double(-3, -3, 6, 6), new Rectangle2D.Double(-3, -3, 6, 6),
-        new java.awt.Polygon(new int[] {0, 3, -3}, new int[] {-4, 3, 3}, 3), new Rectangle2D.Double(-2, -4, 4, 8)};
+    private static final Shape[] MARKERS = {
+        new Ellipse2D.Double(-3, -3, 6, 6),
+        new Rectangle2D.Double(-3, -3, 6, 6),
+        new java.awt.Polygon(new int[] {0, 3, -3}, new int[] {-4, 3, 3}, 3),
+        new Rectangle2D.Double(-2, -4, 4, 8)
+    };
     private static final float[][] DASHES = {null, {5f, 3f}, {1.5f, 2.5f}, {7f, 2f, 1.5f, 2f}};
 
-    private Charts() {
-    }
+    private Charts() {}
 
     /** Bars of one series: category to value, labelled; {@code percent} formats the axis and labels as shares. */
     static JFreeChart bars(PdfFonts f, String valueAxis, Map<String, ? extends Number> values, boolean percent) {
@@ -67,17 +70,23 @@ final class Charts {
         });
         DateAxis x = new DateAxis();
         x.setDateFormatOverride(new java.text.SimpleDateFormat("MMM yy", java.util.Locale.ENGLISH));
-        long months = series.values().stream().flatMap(m -> m.keySet().stream()).distinct().count();
-        x.setTickUnit(new org.jfree.chart.axis.DateTickUnit(org.jfree.chart.axis.DateTickUnitType.MONTH,
-                (int) Math.max(1, (months + 11) / 12)));
+        long months = series.values().stream()
+                .flatMap(m -> m.keySet().stream())
+                .distinct()
+                .count();
+        x.setTickUnit(new org.jfree.chart.axis.DateTickUnit(
+                org.jfree.chart.axis.DateTickUnitType.MONTH, (int) Math.max(1, (months + 11) / 12)));
         NumberAxis y = new NumberAxis(valueAxis);
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, true);
         for (int i = 0; i < series.size(); i++) {
             r.setSeriesPaint(i, Palette.SERIES[i % Palette.SERIES.length]);
             r.setSeriesShape(i, MARKERS[i % MARKERS.length]);
             float[] dash = DASHES[i % DASHES.length];
-            r.setSeriesStroke(i, dash == null ? new BasicStroke(1.4f) : new BasicStroke(1.4f, BasicStroke.CAP_BUTT,
-                    BasicStroke.JOIN_MITER, 10f, dash, 0f));
+            r.setSeriesStroke(
+                    i,
+                    dash == null
+                            ? new BasicStroke(1.4f)
+                            : new BasicStroke(1.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, dash, 0f));
         }
         XYPlot plot = new XYPlot(data, x, y, r);
         axes(f, x, y);
@@ -89,8 +98,8 @@ final class Charts {
 
     private static CategoryPlot plot(PdfFonts f, DefaultCategoryDataset d, String valueAxis, boolean percent) {
         CategoryAxis x = new CategoryAxis();
-        x.setCategoryLabelPositions(d.getColumnCount() > 8 ? CategoryLabelPositions.UP_45
-                : CategoryLabelPositions.STANDARD);
+        x.setCategoryLabelPositions(
+                d.getColumnCount() > 8 ? CategoryLabelPositions.UP_45 : CategoryLabelPositions.STANDARD);
         NumberAxis y = new NumberAxis(valueAxis);
         if (percent) {
             y.setNumberFormatOverride(new DecimalFormat("0%"));
@@ -102,8 +111,8 @@ final class Charts {
         r.setBarPainter(new StandardBarPainter());
         r.setShadowVisible(false);
         r.setItemMargin(0.05);
-        r.setDefaultItemLabelGenerator(new StandardCategoryItemLabelGenerator("{2}", percent
-                ? new DecimalFormat("0%") : new DecimalFormat("0.##")));
+        r.setDefaultItemLabelGenerator(new StandardCategoryItemLabelGenerator(
+                "{2}", percent ? new DecimalFormat("0%") : new DecimalFormat("0.##")));
         r.setDefaultItemLabelsVisible(true);
         r.setDefaultItemLabelFont(f.awt(6.5f, false));
         r.setSeriesPaint(0, Palette.BLUE);

@@ -15,8 +15,7 @@ import org.variset.reports.scoring.line.Point;
 
 /** Drawings no chart library makes: the grip-direction rose and the sketch of a route's line. */
 final class Drawings {
-    private Drawings() {
-    }
+    private Drawings() {}
 
     /**
      * A rose of the eight grip sectors (docs/spec/metrics.md section 1): each wedge 45° wide, centred on its direction (up at the
@@ -35,7 +34,10 @@ final class Drawings {
         g.setStroke(new BasicStroke(0.5f));
         g.setColor(Palette.SHADE);
         for (double q : new double[] {0.25, 0.5, 0.75, 1.0}) {
-            g.draw(new Ellipse2D.Double(cx - rMax * Math.sqrt(q), cy - rMax * Math.sqrt(q), 2 * rMax * Math.sqrt(q),
+            g.draw(new Ellipse2D.Double(
+                    cx - rMax * Math.sqrt(q),
+                    cy - rMax * Math.sqrt(q),
+                    2 * rMax * Math.sqrt(q),
                     2 * rMax * Math.sqrt(q)));
         }
         g.setFont(f.awt(7f, false));
@@ -73,8 +75,11 @@ final class Drawings {
             head.closePath();
             g.fill(head);
             g.setColor(Palette.INK);
-            g.drawString("arrow: mean direction " + FigureFormat.of("mean_direction_deg", s.meanDirectionDeg())
-                    + "°, length R̄ = " + FigureFormat.of("resultant_length", s.resultantLength()), 2, 9);
+            g.drawString(
+                    "arrow: mean direction " + FigureFormat.of("mean_direction_deg", s.meanDirectionDeg())
+                            + "°, length R̄ = " + FigureFormat.of("resultant_length", s.resultantLength()),
+                    2,
+                    9);
         }
     }
 
@@ -95,16 +100,22 @@ final class Drawings {
         for (int i = 1; i < points.size(); i++) {
             boolean flagged = longSpans.contains(i - 1);
             g.setColor(flagged ? Palette.VERMILLION : Palette.INK);
-            g.setStroke(flagged ? new BasicStroke(1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
-                    new float[] {3f, 2f}, 0f) : new BasicStroke(1f));
+            g.setStroke(
+                    flagged
+                            ? new BasicStroke(
+                                    1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {3f, 2f}, 0f)
+                            : new BasicStroke(1f));
             Point a = points.get(i - 1);
             Point b = points.get(i);
-            g.draw(new Line2D.Double(px.applyAsDouble(a.x()), py.applyAsDouble(a.y()), px.applyAsDouble(b.x()),
+            g.draw(new Line2D.Double(
+                    px.applyAsDouble(a.x()),
+                    py.applyAsDouble(a.y()),
+                    px.applyAsDouble(b.x()),
                     py.applyAsDouble(b.y())));
             if (flagged) {
                 g.setFont(f.awt(6f, true));
-                g.drawString("long", (float) px.applyAsDouble((a.x() + b.x()) / 2) + 3,
-                        (float) py.applyAsDouble((a.y() + b.y()) / 2));
+                g.drawString("long", (float) px.applyAsDouble((a.x() + b.x()) / 2) + 3, (float)
+                        py.applyAsDouble((a.y() + b.y()) / 2));
             }
         }
         g.setFont(f.awt(5.5f, false));

@@ -32,6 +32,5 @@ public final class Palette {
     /** Series colours in order. */
     static final Color[] SERIES = {BLUE, ORANGE, GREEN, VERMILLION, PURPLE, SKY};
 
-    private Palette() {
-    }
+    private Palette() {}
 }

@@ -45,8 +45,8 @@ final class PdfDoc implements AutoCloseable {
             throw new IllegalStateException("cannot start the PDF", e);
         }
         writer.setStrictImageSequence(true);
-        writer.setPageEvent(new Frame(title + " · " + subject, "Generated " + options.generatedOn() + " by Variset "
-                + options.version()));
+        writer.setPageEvent(new Frame(
+                title + " · " + subject, "Generated " + options.generatedOn() + " by Variset " + options.version()));
         document.addTitle(title + " · " + subject);
         document.addCreator("Variset " + options.version());
         document.open();
@@ -157,8 +157,10 @@ final class PdfDoc implements AutoCloseable {
 
     /** A JFreeChart chart as vector graphics, in the document's fonts. */
     void chart(JFreeChart chart, float width, float height) {
-        drawing(width, height, (g, size) -> chart.draw(g, new java.awt.geom.Rectangle2D.Double(0, 0, size[0],
-                size[1])));
+        drawing(
+                width,
+                height,
+                (g, size) -> chart.draw(g, new java.awt.geom.Rectangle2D.Double(0, 0, size[0], size[1])));
     }
 
     /** A drawing of the given size (points), made on a Graphics2D that writes PDF vector graphics. */
@@ -231,16 +233,21 @@ final class PdfDoc implements AutoCloseable {
             float left = d.left();
             float right = d.right();
             if (w.getPageNumber() > 1) {
-                ColumnText.showTextAligned(cb, Element.ALIGN_LEFT, fonts.phrase(header, 7.5f, false, Palette.MUTED),
-                        left, page.getTop() - 28, 0);
+                ColumnText.showTextAligned(
+                        cb,
+                        Element.ALIGN_LEFT,
+                        fonts.phrase(header, 7.5f, false, Palette.MUTED),
+                        left,
+                        page.getTop() - 28,
+                        0);
             }
             cb.setColorStroke(Palette.SHADE);
             cb.setLineWidth(0.5f);
             cb.moveTo(left, d.bottom() - 12);
             cb.lineTo(right, d.bottom() - 12);
             cb.stroke();
-            ColumnText.showTextAligned(cb, Element.ALIGN_LEFT, fonts.phrase(footer, 7.5f, false, Palette.MUTED),
-                    left, d.bottom() - 24, 0);
+            ColumnText.showTextAligned(
+                    cb, Element.ALIGN_LEFT, fonts.phrase(footer, 7.5f, false, Palette.MUTED), left, d.bottom() - 24, 0);
             Phrase p = fonts.phrase("page " + w.getPageNumber() + " of", 7.5f, false, Palette.MUTED);
             float textWidth = ColumnText.getWidth(p);
             // The total is a template filled in at the end; leave a word space before it.
@@ -250,8 +257,13 @@ final class PdfDoc implements AutoCloseable {
 
         @Override
         public void onCloseDocument(PdfWriter w, Document d) {
-            ColumnText.showTextAligned(total, Element.ALIGN_LEFT, fonts.phrase(String.valueOf(w.getPageNumber() - 1),
-                    7.5f, false, Palette.MUTED), 0, 0, 0);
+            ColumnText.showTextAligned(
+                    total,
+                    Element.ALIGN_LEFT,
+                    fonts.phrase(String.valueOf(w.getPageNumber() - 1), 7.5f, false, Palette.MUTED),
+                    0,
+                    0,
+                    0);
         }
     }
 

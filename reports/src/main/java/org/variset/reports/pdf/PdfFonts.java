@@ -23,9 +23,14 @@ import java.util.stream.Stream;
  * covers are collected so the caller can say so.
  */
 final class PdfFonts {
-    private static final List<String> SYSTEM_FONT_DIRS = List.of("/usr/share/fonts", "/usr/local/share/fonts",
-            System.getProperty("user.home") + "/.fonts", System.getProperty("user.home") + "/.local/share/fonts",
-            "/Library/Fonts", "/System/Library/Fonts", "C:\\Windows\\Fonts");
+    private static final List<String> SYSTEM_FONT_DIRS = List.of(
+            "/usr/share/fonts",
+            "/usr/local/share/fonts",
+            System.getProperty("user.home") + "/.fonts",
+            System.getProperty("user.home") + "/.local/share/fonts",
+            "/Library/Fonts",
+            "/System/Library/Fonts",
+            "C:\\Windows\\Fonts");
 
     private final BaseFont regular;
     private final BaseFont bold;
@@ -72,8 +77,10 @@ final class PdfFonts {
         for (BaseFont f : fallbacks(t)) {
             s.addFont(new Font(f, size, Font.NORMAL, color));
         }
-        t.codePoints().filter(c -> c >= 0x20 && !main.charExists(c) && fallbacks.stream().noneMatch(
-                f -> f.charExists(c))).forEach(c -> missing.add(new String(Character.toChars(c))));
+        t.codePoints()
+                .filter(c ->
+                        c >= 0x20 && !main.charExists(c) && fallbacks.stream().noneMatch(f -> f.charExists(c)))
+                .forEach(c -> missing.add(new String(Character.toChars(c))));
         return s.process(t);
     }
 
@@ -111,8 +118,11 @@ final class PdfFonts {
                     continue;
                 }
                 try (Stream<Path> s = Files.walk(d, 4)) {
-                    s.filter(p -> p.toString().toLowerCase(java.util.Locale.ROOT).matches(".*\\.(ttf|otf|ttc)"))
-                            .filter(p -> !p.getFileName().toString().startsWith("DejaVu")).limit(200)
+                    s.filter(p -> p.toString()
+                                    .toLowerCase(java.util.Locale.ROOT)
+                                    .matches(".*\\.(ttf|otf|ttc)"))
+                            .filter(p -> !p.getFileName().toString().startsWith("DejaVu"))
+                            .limit(200)
                             .forEach(this::tryFont);
                 } catch (IOException | UncheckedIOException e) {
                     // An unreadable font folder only means one fewer fallback.
@@ -123,7 +133,8 @@ final class PdfFonts {
     }
 
     private void tryFont(Path p) {
-        String name = p.toString() + (p.toString().toLowerCase(java.util.Locale.ROOT).endsWith(".ttc") ? ",0" : "");
+        String name =
+                p.toString() + (p.toString().toLowerCase(java.util.Locale.ROOT).endsWith(".ttc") ? ",0" : "");
         try {
             fallbacks.add(BaseFont.createFont(name, BaseFont.IDENTITY_H, BaseFont.EMBEDDED));
         } catch (IOException | RuntimeException e) {

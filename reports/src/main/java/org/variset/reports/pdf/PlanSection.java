@@ -9,34 +9,51 @@ import org.variset.reports.plan.VarietyGaps;
 
 /** The plan for a wall's next reset, as a section of the audit. */
 final class PlanSection {
-    private PlanSection() {
-    }
+    private PlanSection() {}
 
     static void write(PdfDoc doc, ResetPlan p) {
-        doc.heading("Next reset of " + p.wall() + ": " + p.routes() + " " + p.discipline().word() + " routes", true);
-        if (p.slots() == null) {
+        doc.heading(
+                "Next reset of " + p.wall() + ": " + p.routes() + " "
+                        + p.discipline().word() + " routes",
+                true);
+        if (p.grades() == null) {
             doc.paragraph("Grade slots: none proposed: " + p.undefined().get("slots") + ".");
         } else {
-            long restTotal = java.util.Arrays.stream(p.rest()).sum();
+            ResetPlan.GradeSlots gs = p.grades();
+            long restTotal = java.util.Arrays.stream(gs.rest()).sum();
             List<List<String>> rows = new ArrayList<>();
-            for (int i = 0; i < p.bands().size(); i++) {
-                rows.add(List.of(p.bands().get(i), String.valueOf(p.rest()[i]), FigureFormat.round(
-                        p.targetShares()[i] * (restTotal + p.routes()), 1), String.valueOf(p.slots()[i])));
+            for (int i = 0; i < gs.bands().size(); i++) {
+                rows.add(List.of(
+                        gs.bands().get(i),
+                        String.valueOf(gs.rest()[i]),
+                        FigureFormat.round(gs.targetShares()[i] * (restTotal + p.routes()), 1),
+                        String.valueOf(gs.slots()[i])));
             }
-            doc.table(List.of("band", "up elsewhere", "routes the target wants", "proposed"), rows,
-                    new float[] {1.2f, 1.4f, 1.6f, 1.2f});
-            doc.paragraph("With these slots in place of " + p.wall() + "'s current routes, the gym's " + p.discipline()
-                    .word() + " routes move from " + FigureFormat.of("emd_to_target", p.distanceNow()) + " to "
-                    + FigureFormat.of("emd_to_target", p.distanceAfter()) + " bands from the target (the least any "
-                    + p.routes() + " slots can give; ties go to the wall's previous mix)" + (p.targetIsDefault()
-                            ? "; the target is the example pyramid" : "") + ".");
+            doc.table(List.of("band", "up elsewhere", "routes the target wants", "proposed"), rows, new float[] {
+                1.2f, 1.4f, 1.6f, 1.2f
+            });
+            doc.paragraph("With these slots in place of " + p.wall() + "'s current routes, the gym's "
+                    + p.discipline().word() + " routes move from " + FigureFormat.of("emd_to_target", gs.distanceNow())
+                    + " to "
+                    + FigureFormat.of("emd_to_target", gs.distanceAfter()) + " bands from the target (the least any "
+                    + p.routes() + " slots can give; ties go to the wall's previous mix)"
+                    + (gs.targetIsDefault() ? "; the target is the example pyramid" : "") + ".");
         }
-        doc.paragraph("Bring back (share now below the last twelve months by " + FigureFormat.percent(p.margin())
-                + " or more): " + (p.gaps().isEmpty() ? "nothing." : ""), PdfDoc.BODY, true, Palette.INK);
+        doc.paragraph(
+                "Bring back (share now below the last twelve months by " + FigureFormat.percent(p.margin())
+                        + " or more): " + (p.gaps().isEmpty() ? "nothing." : ""),
+                PdfDoc.BODY,
+                true,
+                Palette.INK);
         doc.bullets(p.gaps().stream().limit(12).map(PlanSection::gap).toList());
-        doc.paragraph("Hold shapes to rest (used on " + p.wall() + " in its last three resets): " + (p.shapesToRest()
-                .isEmpty() ? "none recorded." : p.shapesToRest().entrySet().stream().limit(40).map(e -> e.getKey()
-                        + " (" + e.getValue() + ")").collect(Collectors.joining(", ")) + "."));
+        doc.paragraph("Hold shapes to rest (used on " + p.wall() + " in its last three resets): "
+                + (p.shapesToRest().isEmpty()
+                        ? "none recorded."
+                        : p.shapesToRest().entrySet().stream()
+                                        .limit(40)
+                                        .map(e -> e.getKey() + " (" + e.getValue() + ")")
+                                        .collect(Collectors.joining(", "))
+                                + "."));
     }
 
     private static String gap(VarietyGaps.Gap g) {

@@ -20,8 +20,7 @@ import org.variset.reports.trend.Trend;
  * period's notable repeats.
  */
 public final class TrendPdf {
-    private TrendPdf() {
-    }
+    private TrendPdf() {}
 
     /**
      * Writes the report.
@@ -29,7 +28,8 @@ public final class TrendPdf {
      * @return characters no font could print
      */
     public static Set<String> write(Trend t, PdfOptions options, OutputStream out) {
-        boolean year = t.from().getDayOfYear() == 1 && t.to().equals(t.from().withDayOfYear(t.from().lengthOfYear()));
+        boolean year = t.from().getDayOfYear() == 1
+                && t.to().equals(t.from().withDayOfYear(t.from().lengthOfYear()));
         String title = year ? "Annual report " + t.from().getYear() : "Trend report";
         try (PdfDoc doc = new PdfDoc(out, options, title, t.gym() + " · " + t.from() + " to " + t.to())) {
             walls(doc, t);
@@ -49,41 +49,33 @@ public final class TrendPdf {
      * @return characters no font could print
      */
     public static Set<String> write(ChainComparison c, List<Trend> trends, PdfOptions options, OutputStream out) {
-        boolean year = c.from().getDayOfYear() == 1 && c.to().equals(c.from().withDayOfYear(c.from().lengthOfYear()));
+        boolean year = c.from().getDayOfYear() == 1
+                && c.to().equals(c.from().withDayOfYear(c.from().lengthOfYear()));
         String title = (year ? "Chain report " + c.from().getYear() : "Chain trend report");
         try (PdfDoc doc = new PdfDoc(out, options, title, c.rows().size() + " gyms · " + c.from() + " to " + c.to())) {
-            doc.heading("Gyms side by side", false);
-            List<List<String>> rows = new ArrayList<>();
-            for (ChainComparison.Row r : c.rows()) {
-                List<String> row = new ArrayList<>(List.of(r.gym(), String.valueOf(r.routesSet()),
-                        String.valueOf(r.resets()), FigureFormat.of("score", r.meanResetScore()),
-                        String.valueOf(r.routesUp())));
-                ChainComparison.FIGURES.forEach(k -> row.add(Headline.text(k, r.figures().get(k))));
-                row.add(r.wallsOverdue() + "/" + r.walls());
-                row.add(String.valueOf(r.nearRepeats()));
-                rows.add(row);
-            }
-            List<String> header = new ArrayList<>(List.of("gym", "set", "resets", "mean score", "up"));
-            ChainComparison.FIGURES.forEach(k -> header.add(ChainComparison.label(k)));
-            header.add("overdue");
-            header.add("repeats");
-            doc.table(header, rows, new float[] {2.2f, 0.75f, 1.05f, 0.95f, 0.7f, 0.9f, 0.9f, 0.95f, 1.05f,
-                1.15f, 1.05f, 1.35f, 1.35f});
-            doc.paragraph("Score: the composite score at the last month end. Grip sprd: grip-direction spread (sector"
-                    + " entropy). Up share: share of hand grips facing up. Hold types: effective number of hold types. "
-                    + "Moves cov: share of the move vocabulary used. Grade dist: bands from the grade target.",
-                    7.5f, false, Palette.MUTED);
+            sideBySide(doc, c);
+            doc.paragraph(
+                    "Score: the composite score at the last month end. Grip sprd: grip-direction spread (sector"
+                            + " entropy). Up share: share of hand grips facing up. Hold types: effective number of hold types. "
+                            + "Moves cov: share of the move vocabulary used. Grade dist: bands from the grade target.",
+                    7.5f,
+                    false,
+                    Palette.MUTED);
             doc.paragraph("Set: routes set in the period. Mean score: of its resets. Up: routes up at the last month "
                     + "end, where the figures are taken. Overdue: walls past their reset cycle of all walls. Each "
                     + "figure means what it means in the gym's own report; scores and thresholds are heuristics.");
             Map<String, Map<LocalDate, Double>> score = new LinkedHashMap<>();
             for (Trend t : trends) {
                 Map<LocalDate, Double> line = score.computeIfAbsent(t.gym(), k -> new LinkedHashMap<>());
-                t.months().stream().filter(p -> p.scope().equals("gym")).forEach(p -> line.put(p.day(),
-                        p.figures().get("score.score")));
+                t.months().stream()
+                        .filter(p -> p.scope().equals("gym"))
+                        .forEach(p -> line.put(p.day(), p.figures().get("score.score")));
             }
-            doc.paragraph("Month-end score of each gym's routes up (a heuristic, without novelty here)", PdfDoc.BODY,
-                    true, Palette.INK);
+            doc.paragraph(
+                    "Month-end score of each gym's routes up (a heuristic, without novelty here)",
+                    PdfDoc.BODY,
+                    true,
+                    Palette.INK);
             doc.chart(Charts.lines(doc.fonts(), "score", score), doc.width(), 200);
             doc.safety();
             for (Trend t : trends) {
@@ -98,22 +90,59 @@ public final class TrendPdf {
         }
     }
 
+    /** The gyms' rows, one per gym. */
+    private static void sideBySide(PdfDoc doc, ChainComparison c) {
+        doc.heading("Gyms side by side", false);
+        List<List<String>> rows = new ArrayList<>();
+        for (ChainComparison.Row r : c.rows()) {
+            List<String> row = new ArrayList<>(List.of(
+                    r.gym(),
+                    String.valueOf(r.routesSet()),
+                    String.valueOf(r.resets()),
+                    FigureFormat.of("score", r.meanResetScore()),
+                    String.valueOf(r.routesUp())));
+            ChainComparison.FIGURES.forEach(
+                    k -> row.add(Headline.text(k, r.figures().get(k))));
+            row.add(r.wallsOverdue() + "/" + r.walls());
+            row.add(String.valueOf(r.nearRepeats()));
+            rows.add(row);
+        }
+        List<String> header = new ArrayList<>(List.of("gym", "set", "resets", "mean score", "up"));
+        ChainComparison.FIGURES.forEach(k -> header.add(ChainComparison.label(k)));
+        header.add("overdue");
+        header.add("repeats");
+        doc.table(header, rows, new float[] {
+            2.2f, 0.75f, 1.05f, 0.95f, 0.7f, 0.9f, 0.9f, 0.95f, 1.05f, 1.15f, 1.05f, 1.35f, 1.35f
+        });
+    }
+
     private static void walls(PdfDoc doc, Trend t) {
         doc.heading("Walls (status on " + t.asOf() + ")", false);
         List<List<String>> rows = new ArrayList<>();
         for (Trend.WallStatus w : t.walls()) {
-            rows.add(List.of(w.wall(), String.valueOf(w.resets().size()), FigureFormat.of("score", w.meanScore()),
-                    w.lastReset() == null ? FigureFormat.NONE : w.lastReset().toString(), w.daysSince() == null
-                            ? FigureFormat.NONE : w.daysSince().toString(), String.valueOf(w.cycleDays()), w.status(),
-                    w.daysPastDue() == null ? FigureFormat.NONE : w.daysPastDue().toString()));
+            rows.add(List.of(
+                    w.wall(),
+                    String.valueOf(w.resets().size()),
+                    FigureFormat.of("score", w.meanScore()),
+                    w.lastReset() == null ? FigureFormat.NONE : w.lastReset().toString(),
+                    w.daysSince() == null ? FigureFormat.NONE : w.daysSince().toString(),
+                    String.valueOf(w.cycleDays()),
+                    w.status(),
+                    w.daysPastDue() == null
+                            ? FigureFormat.NONE
+                            : w.daysPastDue().toString()));
         }
-        doc.table(List.of("wall", "resets", "mean score", "last reset", "days up", "cycle", "status",
-                "days past due"), rows, new float[] {2.2f, 1, 1.1f, 1.6f, 1, 1, 1.2f, 1.2f});
+        doc.table(
+                List.of("wall", "resets", "mean score", "last reset", "days up", "cycle", "status", "days past due"),
+                rows,
+                new float[] {2.2f, 1, 1.1f, 1.6f, 1, 1, 1.2f, 1.2f});
         Trend.Lifetime l = t.lifetime();
-        doc.paragraph(l.stripped() + " routes came down in the period after a median of " + (l.medianDays() == null
-                ? FigureFormat.NONE : FigureFormat.round(l.medianDays(), 1)) + " days up; " + l.stillUp() + " were up "
-                + "on " + t.to() + ". A wall is due after its cycle and overdue " + (t.walls().isEmpty() ? 14
-                        : t.walls().get(0).overdueAfterDays()) + " days later (common practice: boulders due at four "
+        doc.paragraph(l.stripped() + " routes came down in the period after a median of "
+                + (l.medianDays() == null ? FigureFormat.NONE : FigureFormat.round(l.medianDays(), 1)) + " days up; "
+                + l.stillUp() + " were up "
+                + "on " + t.to() + ". A wall is due after its cycle and overdue "
+                + (t.walls().isEmpty() ? 14 : t.walls().get(0).overdueAfterDays())
+                + " days later (common practice: boulders due at four "
                 + "weeks and overdue at six, rope routes at eight and ten). The mean score is a heuristic.");
     }
 
@@ -124,8 +153,12 @@ public final class TrendPdf {
             return;
         }
         List<List<String>> rows = new ArrayList<>();
-        t.repeats().stream().limit(12).forEach(r -> rows.add(List.of(r.pair().route(), r.pair().other(),
-                FigureFormat.of("jaccard", r.pair().similarity().jaccard()))));
+        t.repeats().stream()
+                .limit(12)
+                .forEach(r -> rows.add(List.of(
+                        r.pair().route(),
+                        r.pair().other(),
+                        FigureFormat.of("jaccard", r.pair().similarity().jaccard()))));
         doc.table(List.of("route", "repeats", "Jaccard"), rows, new float[] {3, 3, 1});
         if (t.repeats().size() > 12) {
             doc.paragraph((t.repeats().size() - 12) + " more in 'variset trend --format json'.");
@@ -147,24 +180,39 @@ public final class TrendPdf {
                 for (String k : List.of("grip.sector_entropy", "holds.coverage", "moves.coverage")) {
                     variety.get(Headline.LABELS.get(k)).put(p.day(), p.figures().get(k));
                 }
-                grades.computeIfAbsent("bands from target", k -> new LinkedHashMap<>()).put(p.day(),
-                        p.figures().get("grades.emd_to_target"));
+                grades.computeIfAbsent("bands from target", k -> new LinkedHashMap<>())
+                        .put(p.day(), p.figures().get("grades.emd_to_target"));
             }
         }
-        doc.paragraph("Score of the whole gym and of each wall (a heuristic, without novelty here)", PdfDoc.BODY,
-                true, Palette.INK);
+        doc.paragraph(
+                "Score of the whole gym and of each wall (a heuristic, without novelty here)",
+                PdfDoc.BODY,
+                true,
+                Palette.INK);
         doc.chart(Charts.lines(doc.fonts(), "score", score), doc.width(), 190);
         doc.paragraph("Variety of the whole gym (0 to 1)", PdfDoc.BODY, true, Palette.INK);
         doc.chart(Charts.lines(doc.fonts(), "value", variety), doc.width(), 170);
-        doc.paragraph("Grades of the whole gym: distance to the target in bands (0 on target)", PdfDoc.BODY, true,
+        doc.paragraph(
+                "Grades of the whole gym: distance to the target in bands (0 on target)",
+                PdfDoc.BODY,
+                true,
                 Palette.INK);
         doc.chart(Charts.lines(doc.fonts(), "bands", grades), doc.width(), 130);
-        List<String> gaps = t.months().stream().filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
-                .map(p -> p.day() + ": no " + String.join("; ", p.gradeGaps().entrySet().stream().map(e -> e.getKey()
-                        + " " + String.join(", ", e.getValue())).toList())).toList();
-        doc.paragraph(gaps.isEmpty() ? "No grade gap at any month end (a band the target expects two or more routes "
-                + "in, with none)." : "Grade gaps at month ends (bands the target expects two or more routes in, "
-                        + "with none): " + String.join("; ", gaps) + ".");
+        List<String> gaps = t.months().stream()
+                .filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
+                .map(p -> p.day() + ": no "
+                        + String.join(
+                                "; ",
+                                p.gradeGaps().entrySet().stream()
+                                        .map(e -> e.getKey() + " " + String.join(", ", e.getValue()))
+                                        .toList()))
+                .toList();
+        doc.paragraph(
+                gaps.isEmpty()
+                        ? "No grade gap at any month end (a band the target expects two or more routes "
+                                + "in, with none)."
+                        : "Grade gaps at month ends (bands the target expects two or more routes in, " + "with none): "
+                                + String.join("; ", gaps) + ".");
     }
 
     private static void grades(PdfDoc doc, Trend t) {
@@ -183,14 +231,21 @@ public final class TrendPdf {
                 doc.paragraph("No target for " + e.getKey().word() + " routes.");
                 continue;
             }
-            long inside = g.target().keySet().stream().mapToLong(b -> g.histogram().getOrDefault(b, 0L)).sum();
+            long inside = g.target().keySet().stream()
+                    .mapToLong(b -> g.histogram().getOrDefault(b, 0L))
+                    .sum();
             Map<String, Double> observed = new LinkedHashMap<>();
-            g.target().keySet().forEach(b -> observed.put(b, inside == 0 ? 0 : g.histogram().getOrDefault(b, 0L)
-                    / (double) inside));
+            g.target()
+                    .keySet()
+                    .forEach(b ->
+                            observed.put(b, inside == 0 ? 0 : g.histogram().getOrDefault(b, 0L) / (double) inside));
             doc.chart(Charts.barsAgainstTarget(doc.fonts(), observed, g.target()), doc.width(), 140);
             doc.paragraph("Distance to target " + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands"
-                    + (Boolean.TRUE.equals(t.targetIsExample().get(e.getKey())) ? "; the target is an example "
-                            + "pyramid (common practice, a heuristic), not the gym's own" : "") + ".");
+                    + (Boolean.TRUE.equals(t.targetIsExample().get(e.getKey()))
+                            ? "; the target is an example "
+                                    + "pyramid (common practice, a heuristic), not the gym's own"
+                            : "")
+                    + ".");
         }
     }
 
@@ -198,18 +253,33 @@ public final class TrendPdf {
         doc.heading("Setters", false);
         List<List<String>> rows = new ArrayList<>();
         for (Trend.SetterProfile s : t.setters()) {
-            rows.add(List.of(s.setter(), String.valueOf(s.routes()), FigureFormat.percent(s.share()),
-                    top(s.gripShares()), top(s.holdShares()), top(s.moveShares())));
+            rows.add(List.of(
+                    s.setter(),
+                    String.valueOf(s.routes()),
+                    FigureFormat.percent(s.share()),
+                    top(s.gripShares()),
+                    top(s.holdShares()),
+                    top(s.moveShares())));
         }
-        doc.table(List.of("setter", "routes", "share", "grips face", "holds", "moves"), rows,
-                new float[] {2, 0.8f, 0.8f, 2.4f, 2.4f, 2.4f});
-        doc.paragraph("A route set by two setters counts for both. Shares: of each setter's hand grips, placements "
-                + "and routes.", 7.5f, false, Palette.MUTED);
+        doc.table(List.of("setter", "routes", "share", "grips face", "holds", "moves"), rows, new float[] {
+            2, 0.8f, 0.8f, 2.4f, 2.4f, 2.4f
+        });
+        doc.paragraph(
+                "A route set by two setters counts for both. Shares: of each setter's hand grips, placements "
+                        + "and routes.",
+                7.5f,
+                false,
+                Palette.MUTED);
     }
 
     private static String top(Map<String, Double> shares) {
-        return String.join(", ", shares.entrySet().stream().filter(e -> e.getValue() > 0)
-                .sorted(Map.Entry.<String, Double>comparingByValue().reversed()).limit(3)
-                .map(e -> e.getKey() + " " + FigureFormat.percent(e.getValue())).toList());
+        return String.join(
+                ", ",
+                shares.entrySet().stream()
+                        .filter(e -> e.getValue() > 0)
+                        .sorted(Map.Entry.<String, Double>comparingByValue().reversed())
+                        .limit(3)
+                        .map(e -> e.getKey() + " " + FigureFormat.percent(e.getValue()))
+                        .toList());
     }
 }

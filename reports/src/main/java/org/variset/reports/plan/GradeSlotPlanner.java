@@ -21,8 +21,7 @@ import java.util.Arrays;
 public final class GradeSlotPlanner {
     private static final double TIE = 1e-12;
 
-    private GradeSlotPlanner() {
-    }
+    private GradeSlotPlanner() {}
 
     /**
      * The chosen slots.
@@ -31,8 +30,7 @@ public final class GradeSlotPlanner {
      * @param distanceAfter W of the standing set after the reset
      * @param distanceToPrevious the tie-break distance to the previous mix (0 without one)
      */
-    public record Result(int[] slots, double distanceAfter, double distanceToPrevious) {
-    }
+    public record Result(int[] slots, double distanceAfter, double distanceToPrevious) {}
 
     /**
      * Plans n slots.

@@ -7,64 +7,91 @@ import org.variset.reports.format.FigureFormat;
 
 /** A reset plan as text for people, with the reasons for each proposal. */
 public final class PlanText {
-    private PlanText() {
-    }
+    private PlanText() {}
 
     /** The plan as text. */
     public static String of(ResetPlan p) {
         StringBuilder b = new StringBuilder();
-        b.append("Plan for the next reset of ").append(p.wall()).append(" (").append(p.gym()).append(", ")
-                .append(p.on()).append("): ").append(p.routes()).append(' ').append(p.discipline().word())
-                .append(p.routes() == 1 ? " route" : " routes").append('\n').append('\n');
+        b.append("Plan for the next reset of ")
+                .append(p.wall())
+                .append(" (")
+                .append(p.gym())
+                .append(", ")
+                .append(p.on())
+                .append("): ")
+                .append(p.routes())
+                .append(' ')
+                .append(p.discipline().word())
+                .append(p.routes() == 1 ? " route" : " routes")
+                .append('\n')
+                .append('\n');
         for (String line : slotLines(p)) {
             b.append(line).append('\n');
         }
-        b.append('\n').append("Bring back (share now below the last twelve months by ")
-                .append(FigureFormat.percent(p.margin())).append(" or more):\n");
+        b.append('\n')
+                .append("Bring back (share now below the last twelve months by ")
+                .append(FigureFormat.percent(p.margin()))
+                .append(" or more):\n");
         if (p.gaps().isEmpty()) {
-            b.append("  nothing: ").append(p.undefined().getOrDefault("gaps", "every category is at or above its "
-                    + "twelve-month share")).append('\n');
+            b.append("  nothing: ")
+                    .append(p.undefined()
+                            .getOrDefault("gaps", "every category is at or above its " + "twelve-month share"))
+                    .append('\n');
         }
         for (VarietyGaps.Gap g : p.gaps()) {
-            b.append("  ").append(label(g)).append(": ").append(FigureFormat.percent(g.standingShare()))
-                    .append(" of the gym's ").append(unit(g.field())).append(" up now, ")
-                    .append(FigureFormat.percent(g.yearShare())).append(" over the last twelve months\n");
+            b.append("  ")
+                    .append(label(g))
+                    .append(": ")
+                    .append(FigureFormat.percent(g.standingShare()))
+                    .append(" of the gym's ")
+                    .append(unit(g.field()))
+                    .append(" up now, ")
+                    .append(FigureFormat.percent(g.yearShare()))
+                    .append(" over the last twelve months\n");
         }
-        b.append('\n').append("Hold shapes to rest (used on ").append(p.wall()).append(" in its last three resets):\n  ");
-        b.append(p.shapesToRest().isEmpty() ? "none: " + p.undefined().get("shapes_to_rest")
-                : p.shapesToRest().entrySet().stream().map(e -> e.getKey() + " (" + e.getValue() + ")")
-                        .collect(Collectors.joining(", ")));
+        b.append('\n')
+                .append("Hold shapes to rest (used on ")
+                .append(p.wall())
+                .append(" in its last three resets):\n  ");
+        b.append(
+                p.shapesToRest().isEmpty()
+                        ? "none: " + p.undefined().get("shapes_to_rest")
+                        : p.shapesToRest().entrySet().stream()
+                                .map(e -> e.getKey() + " (" + e.getValue() + ")")
+                                .collect(Collectors.joining(", ")));
         return b.append('\n').toString();
     }
 
     /** The proposed grade slots and why. */
     static List<String> slotLines(ResetPlan p) {
         List<String> out = new ArrayList<>();
-        if (p.slots() == null) {
+        if (p.grades() == null) {
             out.add("Grade slots: none proposed: " + p.undefined().get("slots") + ".");
             return out;
         }
+        ResetPlan.GradeSlots gs = p.grades();
         List<String> slots = new ArrayList<>();
-        for (int i = 0; i < p.bands().size(); i++) {
-            if (p.slots()[i] > 0) {
-                slots.add(p.slots()[i] + " × " + p.bands().get(i));
+        for (int i = 0; i < gs.bands().size(); i++) {
+            if (gs.slots()[i] > 0) {
+                slots.add(gs.slots()[i] + " × " + gs.bands().get(i));
             }
         }
         out.add("Grade slots: " + String.join(", ", slots));
         out.add("  The gym's " + p.discipline().word() + " routes up that day sit "
-                + FigureFormat.of("emd_to_target", p.distanceNow()) + " bands from the target; with these slots in "
-                + "place of " + p.wall() + "'s current routes, " + FigureFormat.of("emd_to_target",
-                        p.distanceAfter()) + " (Wasserstein-1 distance, the least any " + p.routes()
-                + " slots can give" + (p.targetIsDefault() ? "; against the example pyramid" : "") + ").");
-        long restTotal = java.util.Arrays.stream(p.rest()).sum();
+                + FigureFormat.of("emd_to_target", gs.distanceNow()) + " bands from the target; with these slots in "
+                + "place of " + p.wall() + "'s current routes, " + FigureFormat.of("emd_to_target", gs.distanceAfter())
+                + " (Wasserstein-1 distance, the least any " + p.routes()
+                + " slots can give" + (gs.targetIsDefault() ? "; against the example pyramid" : "") + ").");
+        long restTotal = java.util.Arrays.stream(gs.rest()).sum();
         out.add("  band   up elsewhere   routes the target wants   proposed");
-        for (int i = 0; i < p.bands().size(); i++) {
-            double wanted = p.targetShares()[i] * (restTotal + p.routes());
-            out.add(String.format("  %-5s  %12d   %23s   %8d", p.bands().get(i), p.rest()[i],
-                    FigureFormat.round(wanted, 1), p.slots()[i]));
+        for (int i = 0; i < gs.bands().size(); i++) {
+            double wanted = gs.targetShares()[i] * (restTotal + p.routes());
+            out.add(String.format(
+                    "  %-5s  %12d   %23s   %8d",
+                    gs.bands().get(i), gs.rest()[i], FigureFormat.round(wanted, 1), gs.slots()[i]));
         }
-        if (p.outsideTarget() > 0) {
-            out.add("  (" + p.outsideTarget() + " routes up elsewhere are outside the target's bands and left out.)");
+        if (gs.outsideTarget() > 0) {
+            out.add("  (" + gs.outsideTarget() + " routes up elsewhere are outside the target's bands and left out.)");
         }
         return out;
     }

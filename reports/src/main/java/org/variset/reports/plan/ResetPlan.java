@@ -13,22 +13,45 @@ import org.variset.archive.grade.Discipline;
  * @param on the day planned for
  * @param discipline the wall's discipline
  * @param routes how many routes the reset brings
- * @param bands the target's bands, easiest first
- * @param rest routes per band up in the rest of the gym that day (without the wall)
- * @param targetShares target shares per band, summing to 1; null without a target
- * @param slots proposed slots per band; null without a target
- * @param distanceNow distance to target of the gym's standing set that day (the wall's current routes included)
- * @param distanceAfter distance to target after the reset with the proposed slots
- * @param outsideTarget routes of the rest outside the target's bands, left out
- * @param targetIsDefault true when the target is the example pyramid
- * @param previousMix routes per band of the wall's latest reset (the tie-break)
+ * @param grades the proposed grade slots, or null without a target (see {@code undefined})
  * @param gaps categories whose standing share is below their twelve-month share by the margin
  * @param margin the margin, in share points
  * @param shapesToRest hold shapes (hold_ref) used on the wall in its last three resets, with how often
  * @param undefined for each part that could not be planned, why
  */
-public record ResetPlan(String gym, String wall, LocalDate on, Discipline discipline, int routes, List<String> bands,
-        long[] rest, double[] targetShares, int[] slots, Double distanceNow, Double distanceAfter, long outsideTarget,
-        boolean targetIsDefault, long[] previousMix, List<VarietyGaps.Gap> gaps, double margin,
-        Map<String, Long> shapesToRest, Map<String, String> undefined) {
+public record ResetPlan(
+        String gym,
+        String wall,
+        LocalDate on,
+        Discipline discipline,
+        int routes,
+        GradeSlots grades,
+        List<VarietyGaps.Gap> gaps,
+        double margin,
+        Map<String, Long> shapesToRest,
+        Map<String, String> undefined) {
+
+    /**
+     * The grade slots proposed for the reset, against the gym's target.
+     *
+     * @param bands the target's bands, easiest first
+     * @param rest routes per band up in the rest of the gym that day (without the wall)
+     * @param targetShares target shares per band, summing to 1
+     * @param slots proposed slots per band
+     * @param distanceNow distance to target of the gym's standing set that day (the wall's current routes included)
+     * @param distanceAfter distance to target after the reset with the proposed slots
+     * @param outsideTarget routes of the rest outside the target's bands, left out
+     * @param targetIsDefault true when the target is the example pyramid
+     * @param previousMix routes per band of the wall's latest reset (the tie-break)
+     */
+    public record GradeSlots(
+            List<String> bands,
+            long[] rest,
+            double[] targetShares,
+            int[] slots,
+            Double distanceNow,
+            Double distanceAfter,
+            long outsideTarget,
+            boolean targetIsDefault,
+            long[] previousMix) {}
 }

@@ -33,6 +33,7 @@ import org.variset.reports.scoring.grip.CircularStatistics;
 public final class ResetPlanner {
     /** The default margin for variety gaps: five share points (a heuristic of ours). */
     public static final double DEFAULT_MARGIN = 0.05;
+
     private static final int YEAR_DAYS = 365;
 
     private final ArchiveCatalog catalog;
@@ -59,48 +60,78 @@ public final class ResetPlanner {
         WallRecord wall = catalog.wall(gym, wallName);
         GymSettings settings = settingsReader.inEffectOn(gym.id(), on);
         List<RouteRecord> standing = reader.read(RouteFilter.gym(gym.id()).standingOn(on));
-        List<ResetRecord> recent = new ArrayList<>(catalog.latestResetOnOrBefore(wall.id(), on).stream().toList());
+        List<ResetRecord> recent = new ArrayList<>(
+                catalog.latestResetOnOrBefore(wall.id(), on).stream().toList());
         if (!recent.isEmpty()) {
             recent.addAll(catalog.resetsBefore(recent.get(0), 2));
         }
-        List<RouteRecord> latest = recent.isEmpty() ? List.of() : reader.read(RouteFilter.reset(recent.get(0).id()));
+        List<RouteRecord> latest = recent.isEmpty()
+                ? List.of()
+                : reader.read(RouteFilter.reset(recent.get(0).id()));
         Discipline d = discipline(wall, latest);
-        List<RouteRecord> sameStanding = standing.stream().filter(r -> r.discipline() == d).toList();
-        List<RouteRecord> rest = sameStanding.stream().filter(r -> !r.wall().equals(wall.name())).toList();
-        List<RouteRecord> year = reader.read(RouteFilter.gym(gym.id()).withDiscipline(d)
-                .setBetween(on.minusDays(YEAR_DAYS), on.plusDays(1)));
+        List<RouteRecord> sameStanding =
+                standing.stream().filter(r -> r.discipline() == d).toList();
+        List<RouteRecord> rest =
+                sameStanding.stream().filter(r -> !r.wall().equals(wall.name())).toList();
+        List<RouteRecord> year = reader.read(
+                RouteFilter.gym(gym.id()).withDiscipline(d).setBetween(on.minusDays(YEAR_DAYS), on.plusDays(1)));
         Map<String, String> why = new LinkedHashMap<>();
-        List<VarietyGaps.Gap> gaps = gaps(SetFigures.of(sameStanding, settings), SetFigures.of(year, settings),
-                margin);
+        List<VarietyGaps.Gap> gaps = gaps(SetFigures.of(sameStanding, settings), SetFigures.of(year, settings), margin);
         if (year.isEmpty()) {
             why.put("gaps", "no " + d.word() + " route was set in the twelve months before " + on);
         }
         Map<String, Long> shapes = shapes(recent);
         if (shapes.isEmpty()) {
-            why.put("shapes_to_rest", recent.isEmpty() ? "the wall has no reset yet" : "no hold_ref recorded on the "
-                    + "wall's last three resets");
+            why.put(
+                    "shapes_to_rest",
+                    recent.isEmpty()
+                            ? "the wall has no reset yet"
+                            : "no hold_ref recorded on the " + "wall's last three resets");
         }
+        ResetPlan.GradeSlots slots = slots(settings, d, n, sameStanding, rest, latest);
+        if (slots == null) {
+            why.put(
+                    "slots",
+                    "the gym has no grade target for " + d.word() + " routes; set one with 'variset settings"
+                            + " set target ... --discipline " + d.word() + "'");
+        }
+        return new ResetPlan(gym.name(), wall.name(), on, d, n, slots, gaps, margin, shapes, why);
+    }
+
+    /** The grade slots closest to the target once the wall's routes come down, or null without a target. */
+    private static ResetPlan.GradeSlots slots(
+            GymSettings settings,
+            Discipline d,
+            int n,
+            List<RouteRecord> sameStanding,
+            List<RouteRecord> rest,
+            List<RouteRecord> latest) {
         Map<String, Double> target = settings.target(d);
-        BandSet bandSet = settings.bands(d);
         if (target == null) {
-            why.put("slots", "the gym has no grade target for " + d.word() + " routes; set one with 'variset settings"
-                    + " set target ... --discipline " + d.word() + "'");
-            return new ResetPlan(gym.name(), wall.name(), on, d, n, List.of(), null, null, null, null, null, 0,
-                    false, null, gaps, margin, shapes, why);
+            return null;
         }
-        List<String> bands = bandSet.labels().stream().filter(target::containsKey).toList();
+        BandSet bandSet = settings.bands(d);
+        List<String> bands =
+                bandSet.labels().stream().filter(target::containsKey).toList();
         long[] restCounts = counts(rest, bandSet, bands);
         long[] prevCounts = counts(latest, bandSet, bands);
         double[] shares = bands.stream().mapToDouble(target::get).toArray();
         double sum = java.util.Arrays.stream(shares).sum();
         shares = java.util.Arrays.stream(shares).map(s -> s / sum).toArray();
         GradeSlotPlanner.Result r = GradeSlotPlanner.plan(restCounts, shares, n, prevCounts);
-        GradeFigures now = GradeDistribution.of(sameStanding.stream().mapToDouble(RouteRecord::ircra).toArray(),
-                bandSet, target);
+        GradeFigures now = GradeDistribution.of(
+                sameStanding.stream().mapToDouble(RouteRecord::ircra).toArray(), bandSet, target);
         long outside = rest.size() - java.util.Arrays.stream(restCounts).sum();
-        return new ResetPlan(gym.name(), wall.name(), on, d, n, bands, restCounts, shares, r.slots(),
-                now.emdToTarget(), r.distanceAfter(), outside, settings.targetIsDefault(d), prevCounts, gaps, margin,
-                shapes, why);
+        return new ResetPlan.GradeSlots(
+                bands,
+                restCounts,
+                shares,
+                r.slots(),
+                now.emdToTarget(),
+                r.distanceAfter(),
+                outside,
+                settings.targetIsDefault(d),
+                prevCounts);
     }
 
     /**
@@ -111,9 +142,9 @@ public final class ResetPlanner {
         GymRecord gym = catalog.gym(gymName);
         WallRecord wall = catalog.wall(gym, wallName);
         List<RouteRecord> routes = catalog.latestResetOnOrBefore(wall.id(), resetOn)
-                .map(r -> reader.read(RouteFilter.reset(r.id()))).orElse(List.of());
-        return resetOn.plusDays(settingsReader.inEffectOn(gym.id(), resetOn).cycleDays(wall, discipline(wall,
-                routes)));
+                .map(r -> reader.read(RouteFilter.reset(r.id())))
+                .orElse(List.of());
+        return resetOn.plusDays(settingsReader.inEffectOn(gym.id(), resetOn).cycleDays(wall, discipline(wall, routes)));
     }
 
     private static Discipline discipline(WallRecord wall, List<RouteRecord> latest) {
@@ -123,14 +154,18 @@ public final class ResetPlanner {
         if (wall.discipline() == WallDiscipline.BOULDER || latest.isEmpty()) {
             return Discipline.BOULDER;
         }
-        long rope = latest.stream().filter(r -> r.discipline() == Discipline.ROPE).count();
+        long rope =
+                latest.stream().filter(r -> r.discipline() == Discipline.ROPE).count();
         return rope * 2 > latest.size() ? Discipline.ROPE : Discipline.BOULDER;
     }
 
     private static long[] counts(List<RouteRecord> routes, BandSet bandSet, List<String> bands) {
         long[] c = new long[bands.size()];
         for (RouteRecord r : routes) {
-            int i = bandSet.bandOf(r.ircra()).map(Band::label).map(bands::indexOf).orElse(-1);
+            int i = bandSet.bandOf(r.ircra())
+                    .map(Band::label)
+                    .map(bands::indexOf)
+                    .orElse(-1);
             if (i >= 0) {
                 c[i]++;
             }
@@ -141,9 +176,12 @@ public final class ResetPlanner {
     private static List<VarietyGaps.Gap> gaps(SetFigures standing, SetFigures year, double margin) {
         List<VarietyGaps.Gap> out = new ArrayList<>();
         out.addAll(VarietyGaps.of("grip", sectors(standing), sectors(year), margin));
-        out.addAll(VarietyGaps.of("holds", standing.holds().counts(), year.holds().counts(), margin));
-        out.addAll(VarietyGaps.of("moves", standing.moves().counts(), year.moves().counts(), margin));
-        out.addAll(VarietyGaps.of("styles", standing.styles().counts(), year.styles().counts(), margin));
+        out.addAll(
+                VarietyGaps.of("holds", standing.holds().counts(), year.holds().counts(), margin));
+        out.addAll(
+                VarietyGaps.of("moves", standing.moves().counts(), year.moves().counts(), margin));
+        out.addAll(VarietyGaps.of(
+                "styles", standing.styles().counts(), year.styles().counts(), margin));
         return out;
     }
 

@@ -11,8 +11,7 @@ import java.util.Map;
  * next reset could bring back".
  */
 public final class VarietyGaps {
-    private VarietyGaps() {
-    }
+    private VarietyGaps() {}
 
     /**
      * One category behind.

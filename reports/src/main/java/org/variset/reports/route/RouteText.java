@@ -10,8 +10,7 @@ import org.variset.archive.route.GripDirection;
 
 /** A route in words: heading, moves and styles, holds by type with the directions their grips face. */
 public final class RouteText {
-    private RouteText() {
-    }
+    private RouteText() {}
 
     /** {@code C2 · V5 · Cave, Lantern Rock · set 2026-02-07, up · Ada Quill, Bo Renner}. */
     public static String heading(RouteRecord r) {
@@ -42,17 +41,29 @@ public final class RouteText {
         for (HoldRecord h : r.holds()) {
             count.merge(h.type(), 1, Integer::sum);
             for (double g : h.grips()) {
-                directions.computeIfAbsent(h.type(), k -> new LinkedHashMap<>())
+                directions
+                        .computeIfAbsent(h.type(), k -> new LinkedHashMap<>())
                         .merge(GripDirection.sectorWord(GripDirection.sector(g)), 1, Integer::sum);
             }
         }
         List<String> parts = new ArrayList<>();
-        count.entrySet().stream().sorted(Map.Entry.<String, Integer>comparingByValue().reversed()).forEach(e -> {
-            Map<String, Integer> d = directions.get(e.getKey());
-            String dirs = d == null ? "" : " (" + String.join(", ", d.entrySet().stream().map(x -> x.getValue() > 1
-                    ? x.getKey() + " " + x.getValue() : x.getKey()).toList()) + ")";
-            parts.add(e.getValue() + " " + e.getKey() + dirs);
-        });
+        count.entrySet().stream()
+                .sorted(Map.Entry.<String, Integer>comparingByValue().reversed())
+                .forEach(e -> {
+                    Map<String, Integer> d = directions.get(e.getKey());
+                    String dirs = d == null
+                            ? ""
+                            : " ("
+                                    + String.join(
+                                            ", ",
+                                            d.entrySet().stream()
+                                                    .map(x -> x.getValue() > 1
+                                                            ? x.getKey() + " " + x.getValue()
+                                                            : x.getKey())
+                                                    .toList())
+                                    + ")";
+                    parts.add(e.getValue() + " " + e.getKey() + dirs);
+                });
         return "holds: " + String.join(", ", parts);
     }
 }

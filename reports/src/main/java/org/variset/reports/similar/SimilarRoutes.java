@@ -40,8 +40,7 @@ public final class SimilarRoutes {
      * @param candidates how many routes were scored
      * @param matches the most similar, highest Jaccard first
      */
-    public record Result(RouteRecord route, boolean comparable, int candidates, List<Match> matches) {
-    }
+    public record Result(RouteRecord route, boolean comparable, int candidates, List<Match> matches) {}
 
     /**
      * One similar route.
@@ -49,8 +48,7 @@ public final class SimilarRoutes {
      * @param other the route
      * @param similarity its exact similarity, with the shared features
      */
-    public record Match(RouteRecord other, Similarity similarity) {
-    }
+    public record Match(RouteRecord other, Similarity similarity) {}
 
     /**
      * Finds a route by its label, narrowed by wall and set date when the label names several.
@@ -59,10 +57,12 @@ public final class SimilarRoutes {
      */
     public RouteRecord route(String gymName, String label, String wall, LocalDate setOn) {
         GymRecord gym = new ArchiveCatalog(connection).gym(gymName);
-        List<RouteRecord> found = new RouteReader(connection).read(RouteFilter.all().withIds(
-                new ArchiveCatalog(connection).routesLabelled(gym.id(), label))).stream()
-                .filter(r -> wall == null || r.wall().equalsIgnoreCase(wall.strip()))
-                .filter(r -> setOn == null || r.setOn().equals(setOn)).toList();
+        List<RouteRecord> found = new RouteReader(connection)
+                        .read(RouteFilter.all().withIds(new ArchiveCatalog(connection).routesLabelled(gym.id(), label)))
+                        .stream()
+                        .filter(r -> wall == null || r.wall().equalsIgnoreCase(wall.strip()))
+                        .filter(r -> setOn == null || r.setOn().equals(setOn))
+                        .toList();
         if (found.size() == 1) {
             return found.get(0);
         }
@@ -71,7 +71,8 @@ public final class SimilarRoutes {
                     + (setOn == null ? "" : " set on " + setOn) + " in " + gym.name());
         }
         throw new IllegalArgumentException("'" + label + "' names " + found.size() + " routes of " + gym.name() + ": "
-                + String.join(", ", found.stream().limit(8).map(RouteRecord::name).toList())
+                + String.join(
+                        ", ", found.stream().limit(8).map(RouteRecord::name).toList())
                 + (found.size() > 8 ? ", ..." : "") + "; say which with --wall and --set-on");
     }
 
@@ -85,13 +86,15 @@ public final class SimilarRoutes {
         }
         List<Long> ids = index.candidates(route, settings.vocabulary(), CANDIDATES);
         List<Match> matches = new ArrayList<>();
-        for (RouteRecord other : new RouteReader(connection).read(RouteFilter.all().withIds(ids))) {
+        for (RouteRecord other :
+                new RouteReader(connection).read(RouteFilter.all().withIds(ids))) {
             Similarity s = Similarity.of(mine, mapper.features(other));
             if (s != null && s.shared() > 0) {
                 matches.add(new Match(other, s));
             }
         }
-        matches.sort(Comparator.comparingDouble((Match m) -> m.similarity().jaccard()).reversed()
+        matches.sort(Comparator.comparingDouble((Match m) -> m.similarity().jaccard())
+                .reversed()
                 .thenComparing(m -> m.other().setOn(), Comparator.reverseOrder()));
         return new Result(route, true, ids.size(), matches.subList(0, Math.min(limit, matches.size())));
     }

@@ -18,8 +18,13 @@ import java.util.Map;
 public record ChainComparison(LocalDate from, LocalDate to, List<Row> rows) {
 
     /** The month-end figures compared, in column order (headline keys). */
-    public static final List<String> FIGURES = List.of("score.score", "grip.sector_entropy", "grip.up_share",
-            "holds.hill_n1", "moves.coverage", "grades.emd_to_target");
+    public static final List<String> FIGURES = List.of(
+            "score.score",
+            "grip.sector_entropy",
+            "grip.up_share",
+            "holds.hill_n1",
+            "moves.coverage",
+            "grades.emd_to_target");
 
     /** A short column label for a compared figure. */
     public static String label(String key) {
@@ -49,10 +54,18 @@ public record ChainComparison(LocalDate from, LocalDate to, List<Row> rows) {
      * @param medianLifetimeDays the median days up of routes stripped in the period, or null
      * @param nearRepeats near-repeats found in the period
      */
-    public record Row(String gym, int routesSet, int resets, Double meanResetScore, int routesUp,
-            Map<String, Double> figures, int walls, int wallsDue, int wallsOverdue, Double medianLifetimeDays,
-            int nearRepeats) {
-    }
+    public record Row(
+            String gym,
+            int routesSet,
+            int resets,
+            Double meanResetScore,
+            int routesUp,
+            Map<String, Double> figures,
+            int walls,
+            int wallsDue,
+            int wallsOverdue,
+            Double medianLifetimeDays,
+            int nearRepeats) {}
 
     /**
      * Compares trends of one period.
@@ -90,8 +103,19 @@ public record ChainComparison(LocalDate from, LocalDate to, List<Row> rows) {
         }
         int resets = t.walls().stream().mapToInt(w -> w.resets().size()).sum();
         int due = (int) t.walls().stream().filter(w -> w.status().equals("due")).count();
-        int overdue = (int) t.walls().stream().filter(w -> w.status().equals("overdue")).count();
-        return new Row(t.gym(), t.routesSet(), resets, t.meanResetScore(), last == null ? 0 : last.routes(), figures,
-                t.walls().size(), due, overdue, t.lifetime().medianDays(), t.repeats().size());
+        int overdue = (int)
+                t.walls().stream().filter(w -> w.status().equals("overdue")).count();
+        return new Row(
+                t.gym(),
+                t.routesSet(),
+                resets,
+                t.meanResetScore(),
+                last == null ? 0 : last.routes(),
+                figures,
+                t.walls().size(),
+                due,
+                overdue,
+                t.lifetime().medianDays(),
+                t.repeats().size());
     }
 }

@@ -24,9 +24,20 @@ import org.variset.reports.scoring.repetition.RepetitionFigures;
  * @param routesSet routes set in the period
  * @param meanResetScore the mean composite score of the period's scored resets, or null without any
  */
-public record Trend(String gym, LocalDate from, LocalDate to, LocalDate asOf, List<MonthPoint> months,
-        List<WallStatus> walls, Lifetime lifetime, List<SetterProfile> setters, Map<Discipline, GradeFigures> grades,
-        Map<Discipline, Boolean> targetIsExample, List<Repeat> repeats, int routesSet, Double meanResetScore) {
+public record Trend(
+        String gym,
+        LocalDate from,
+        LocalDate to,
+        LocalDate asOf,
+        List<MonthPoint> months,
+        List<WallStatus> walls,
+        Lifetime lifetime,
+        List<SetterProfile> setters,
+        Map<Discipline, GradeFigures> grades,
+        Map<Discipline, Boolean> targetIsExample,
+        List<Repeat> repeats,
+        int routesSet,
+        Double meanResetScore) {
 
     /**
      * The standing set of the gym or one wall on a month's last day (or the period's last day).
@@ -38,9 +49,12 @@ public record Trend(String gym, LocalDate from, LocalDate to, LocalDate asOf, Li
      * @param gradeGaps the notable grade gaps per discipline word, empty when none
      *     ({@link org.variset.reports.figures.GradeGaps})
      */
-    public record MonthPoint(LocalDate day, String scope, int routes, Map<String, Double> figures,
-            Map<String, List<String>> gradeGaps) {
-    }
+    public record MonthPoint(
+            LocalDate day,
+            String scope,
+            int routes,
+            Map<String, Double> figures,
+            Map<String, List<String>> gradeGaps) {}
 
     /**
      * A wall over the period.
@@ -55,8 +69,15 @@ public record Trend(String gym, LocalDate from, LocalDate to, LocalDate asOf, Li
      * @param overdueAfterDays days past the cycle before it is overdue
      * @param status {@code ok}, {@code due}, {@code overdue}, or {@code never reset}
      */
-    public record WallStatus(String wall, Discipline discipline, List<Map.Entry<String, LocalDate>> resets,
-            Double meanScore, LocalDate lastReset, Long daysSince, int cycleDays, int overdueAfterDays,
+    public record WallStatus(
+            String wall,
+            Discipline discipline,
+            List<Map.Entry<String, LocalDate>> resets,
+            Double meanScore,
+            LocalDate lastReset,
+            Long daysSince,
+            int cycleDays,
+            int overdueAfterDays,
             String status) {
 
         /** Days past the cycle, 0 when not due yet, null when never reset. */
@@ -72,8 +93,7 @@ public record Trend(String gym, LocalDate from, LocalDate to, LocalDate asOf, Li
      * @param medianDays their median lifetime in days, or null when none
      * @param stillUp routes up on the period's last day
      */
-    public record Lifetime(int stripped, Double medianDays, int stillUp) {
-    }
+    public record Lifetime(int stripped, Double medianDays, int stillUp) {}
 
     /**
      * One setter's routes in the period and their profile.
@@ -85,9 +105,13 @@ public record Trend(String gym, LocalDate from, LocalDate to, LocalDate asOf, Li
      * @param holdShares share of their placements per hold type, most first
      * @param moveShares share of their routes listing each move, most first
      */
-    public record SetterProfile(String setter, int routes, double share, Map<String, Double> gripShares,
-            Map<String, Double> holdShares, Map<String, Double> moveShares) {
-    }
+    public record SetterProfile(
+            String setter,
+            int routes,
+            double share,
+            Map<String, Double> gripShares,
+            Map<String, Double> holdShares,
+            Map<String, Double> moveShares) {}
 
     /**
      * A near-repeat found in the period.
@@ -95,6 +119,5 @@ public record Trend(String gym, LocalDate from, LocalDate to, LocalDate asOf, Li
      * @param reset the reset of the later route
      * @param pair the pair, with its exact similarity
      */
-    public record Repeat(String reset, RepetitionFigures.Pair pair) {
-    }
+    public record Repeat(String reset, RepetitionFigures.Pair pair) {}
 }

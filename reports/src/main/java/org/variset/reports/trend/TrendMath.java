@@ -12,8 +12,7 @@ import org.variset.reports.scoring.grip.CircularStatistics;
 
 /** The pure parts of a trend: lifetimes and setter profiles. */
 final class TrendMath {
-    private TrendMath() {
-    }
+    private TrendMath() {}
 
     /** Lifetimes of the routes stripped in [from, to], and the routes up on {@code to}. */
     static Trend.Lifetime lifetime(List<RouteRecord> routes, LocalDate from, LocalDate to) {
@@ -42,12 +41,19 @@ final class TrendMath {
     static List<Trend.SetterProfile> setters(List<RouteRecord> routes) {
         Map<String, List<RouteRecord>> by = new LinkedHashMap<>();
         for (RouteRecord r : routes) {
-            r.setters().forEach(s -> by.computeIfAbsent(s, k -> new ArrayList<>()).add(r));
+            r.setters()
+                    .forEach(s -> by.computeIfAbsent(s, k -> new ArrayList<>()).add(r));
         }
         List<Trend.SetterProfile> out = new ArrayList<>();
-        by.forEach((s, mine) -> out.add(new Trend.SetterProfile(s, mine.size(),
-                routes.isEmpty() ? 0 : mine.size() / (double) routes.size(), grips(mine), holds(mine), moves(mine))));
-        out.sort((a, b) -> a.routes() != b.routes() ? Integer.compare(b.routes(), a.routes())
+        by.forEach((s, mine) -> out.add(new Trend.SetterProfile(
+                s,
+                mine.size(),
+                routes.isEmpty() ? 0 : mine.size() / (double) routes.size(),
+                grips(mine),
+                holds(mine),
+                moves(mine))));
+        out.sort((a, b) -> a.routes() != b.routes()
+                ? Integer.compare(b.routes(), a.routes())
                 : a.setter().compareTo(b.setter()));
         return out;
     }
@@ -86,9 +92,9 @@ final class TrendMath {
 
     private static Map<String, Double> sortedShares(Map<String, Long> counts, long total) {
         Map<String, Double> out = new LinkedHashMap<>();
-        counts.entrySet().stream().sorted(Map.Entry.<String, Long>comparingByValue().reversed()
-                .thenComparing(Map.Entry.comparingByKey())).forEach(e -> out.put(e.getKey(),
-                        total == 0 ? 0 : e.getValue() / (double) total));
+        counts.entrySet().stream()
+                .sorted(Map.Entry.<String, Long>comparingByValue().reversed().thenComparing(Map.Entry.comparingByKey()))
+                .forEach(e -> out.put(e.getKey(), total == 0 ? 0 : e.getValue() / (double) total));
         return out;
     }
 }

@@ -59,28 +59,48 @@ public final class TrendReport {
         GymRecord gym = catalog.gym(gymName);
         LocalDate asOf = today.isBefore(to) && !today.isBefore(from) ? today : to;
         GymSettings endSettings = settingsReader.inEffectOn(gym.id(), to);
-        int lookback = Math.max(endSettings.lookbackDays(), settingsReader.inEffectOn(gym.id(), from).lookbackDays());
+        int lookback = Math.max(
+                endSettings.lookbackDays(),
+                settingsReader.inEffectOn(gym.id(), from).lookbackDays());
         List<RouteRecord> all = reader.read(RouteFilter.gym(gym.id()).upBetween(from.minusDays(lookback), to));
         List<WallRecord> walls = catalog.walls(gym.id());
         List<ResetRecord> resets = catalog.resetsOfGym(gym.id(), from, to);
         List<Trend.Repeat> repeats = new ArrayList<>();
         Map<String, List<Double>> scores = resetScores(gym, resets, all, repeats);
-        List<RouteRecord> setInPeriod = all.stream().filter(r -> !r.setOn().isBefore(from) && !r.setOn().isAfter(to))
+        List<RouteRecord> setInPeriod = all.stream()
+                .filter(r -> !r.setOn().isBefore(from) && !r.setOn().isAfter(to))
                 .toList();
         Map<Discipline, Boolean> example = new EnumMap<>(Discipline.class);
         for (Discipline d : Discipline.values()) {
             example.put(d, endSettings.target(d) != null && endSettings.targetIsDefault(d));
         }
-        return new Trend(gym.name(), from, to, asOf, months(gym, walls, all, from, asOf), status(gym, walls, resets,
-                scores, asOf), TrendMath.lifetime(all, from, to), TrendMath.setters(setInPeriod),
-                SetFigures.of(setInPeriod, endSettings).grades(), example, repeats, setInPeriod.size(),
-                scores.values().stream().flatMap(List::stream).filter(java.util.Objects::nonNull).mapToDouble(Double::doubleValue).average().stream()
-                        .boxed().findFirst().orElse(null));
+        return new Trend(
+                gym.name(),
+                from,
+                to,
+                asOf,
+                months(gym, walls, all, from, asOf),
+                status(gym, walls, resets, scores, asOf),
+                TrendMath.lifetime(all, from, to),
+                TrendMath.setters(setInPeriod),
+                SetFigures.of(setInPeriod, endSettings).grades(),
+                example,
+                repeats,
+                setInPeriod.size(),
+                scores.values().stream()
+                        .flatMap(List::stream)
+                        .filter(java.util.Objects::nonNull)
+                        .mapToDouble(Double::doubleValue)
+                        .average()
+                        .stream()
+                        .boxed()
+                        .findFirst()
+                        .orElse(null));
     }
 
     /** Month-end points up to {@code to} (the period's end, or today when earlier: no point lies ahead). */
-    private List<Trend.MonthPoint> months(GymRecord gym, List<WallRecord> walls, List<RouteRecord> all,
-            LocalDate from, LocalDate to) {
+    private List<Trend.MonthPoint> months(
+            GymRecord gym, List<WallRecord> walls, List<RouteRecord> all, LocalDate from, LocalDate to) {
         List<Trend.MonthPoint> out = new ArrayList<>();
         for (YearMonth m = YearMonth.from(from); !m.atDay(1).isAfter(to); m = m.plusMonths(1)) {
             LocalDate day = m.atEndOfMonth().isAfter(to) ? to : m.atEndOfMonth();
@@ -89,9 +109,10 @@ public final class TrendReport {
             SetFigures gymFigures = SetFigures.of(up, s);
             out.add(point(day, "gym", SetResults.standing("gym", up, gymFigures, gymFigures, s)));
             for (WallRecord w : walls) {
-                List<RouteRecord> onWall = up.stream().filter(r -> r.wall().equals(w.name())).toList();
-                out.add(point(day, w.name(), SetResults.standing(w.name(), onWall, SetFigures.of(onWall, s),
-                        gymFigures, s)));
+                List<RouteRecord> onWall =
+                        up.stream().filter(r -> r.wall().equals(w.name())).toList();
+                out.add(point(
+                        day, w.name(), SetResults.standing(w.name(), onWall, SetFigures.of(onWall, s), gymFigures, s)));
             }
         }
         return out;
@@ -109,43 +130,63 @@ public final class TrendReport {
     }
 
     /** Scores each reset of the period as an audit does, collecting its near-repeats. */
-    private Map<String, List<Double>> resetScores(GymRecord gym, List<ResetRecord> resets, List<RouteRecord> all,
-            List<Trend.Repeat> repeats) {
+    private Map<String, List<Double>> resetScores(
+            GymRecord gym, List<ResetRecord> resets, List<RouteRecord> all, List<Trend.Repeat> repeats) {
         Map<String, List<Double>> out = new java.util.LinkedHashMap<>();
         for (ResetRecord reset : resets) {
             LocalDate day = reset.resetOn();
             GymSettings s = settingsReader.inEffectOn(gym.id(), day);
-            List<RouteRecord> routes = all.stream().filter(r -> r.reset().equals(reset.label())).toList();
-            List<RouteRecord> window = all.stream().filter(r -> !r.reset().equals(reset.label())
-                    && !r.setOn().isBefore(day.minusDays(s.lookbackDays())) && r.setOn().isBefore(day)).toList();
-            List<RouteRecord> standing = all.stream().filter(r -> r.standingOn(day)).toList();
+            List<RouteRecord> routes =
+                    all.stream().filter(r -> r.reset().equals(reset.label())).toList();
+            List<RouteRecord> window = all.stream()
+                    .filter(r -> !r.reset().equals(reset.label())
+                            && !r.setOn().isBefore(day.minusDays(s.lookbackDays()))
+                            && r.setOn().isBefore(day))
+                    .toList();
+            List<RouteRecord> standing =
+                    all.stream().filter(r -> r.standingOn(day)).toList();
             RouteFeatureMapper m = new RouteFeatureMapper(s);
             RepetitionFigures rep = Repetition.of(m.features(routes), m.features(window), s.nearRepeatThreshold());
             rep.nearRepeats().forEach(p -> repeats.add(new Trend.Repeat(reset.label(), p)));
-            SetResult r = SetResults.reset(reset.label(), routes, window.size(), rep, false, null,
-                    SetFigures.of(standing, s), s);
-            out.computeIfAbsent(reset.wall(), k -> new ArrayList<>()).add(r.score().score());
+            SetResult r = SetResults.reset(
+                    reset.label(), routes, window.size(), rep, false, null, SetFigures.of(standing, s), s);
+            out.computeIfAbsent(reset.wall(), k -> new ArrayList<>())
+                    .add(r.score().score());
         }
-        repeats.sort((a, b) -> Double.compare(b.pair().similarity().jaccard(), a.pair().similarity().jaccard()));
+        repeats.sort((a, b) -> Double.compare(
+                b.pair().similarity().jaccard(), a.pair().similarity().jaccard()));
         return out;
     }
 
-    private List<Trend.WallStatus> status(GymRecord gym, List<WallRecord> walls, List<ResetRecord> resets,
-            Map<String, List<Double>> scores, LocalDate asOf) {
+    private List<Trend.WallStatus> status(
+            GymRecord gym,
+            List<WallRecord> walls,
+            List<ResetRecord> resets,
+            Map<String, List<Double>> scores,
+            LocalDate asOf) {
         GymSettings s = settingsReader.inEffectOn(gym.id(), asOf);
         List<Trend.WallStatus> out = new ArrayList<>();
         for (WallRecord w : walls) {
-            List<Map.Entry<String, LocalDate>> mine = resets.stream().filter(r -> r.wallId() == w.id())
-                    .map(r -> (Map.Entry<String, LocalDate>) new AbstractMap.SimpleImmutableEntry<>(r.label(),
-                            r.resetOn())).toList();
+            List<Map.Entry<String, LocalDate>> mine = resets.stream()
+                    .filter(r -> r.wallId() == w.id())
+                    .map(r -> (Map.Entry<String, LocalDate>)
+                            new AbstractMap.SimpleImmutableEntry<>(r.label(), r.resetOn()))
+                    .toList();
             Discipline d = w.discipline() == WallDiscipline.ROPE ? Discipline.ROPE : Discipline.BOULDER;
             int cycle = s.cycleDays(w, d);
-            LocalDate last = catalog.latestResetOnOrBefore(w.id(), asOf).map(ResetRecord::resetOn).orElse(null);
+            LocalDate last = catalog.latestResetOnOrBefore(w.id(), asOf)
+                    .map(ResetRecord::resetOn)
+                    .orElse(null);
             Long since = last == null ? null : ChronoUnit.DAYS.between(last, asOf);
-            String status = since == null ? "never reset" : since <= cycle ? "ok"
-                    : since <= cycle + s.overdueAfterDays() ? "due" : "overdue";
-            List<Double> sc = scores.getOrDefault(w.name(), List.of()).stream().filter(Objects::nonNull).toList();
-            Double mean = sc.isEmpty() ? null : sc.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
+            String status = since == null
+                    ? "never reset"
+                    : since <= cycle ? "ok" : since <= cycle + s.overdueAfterDays() ? "due" : "overdue";
+            List<Double> sc = scores.getOrDefault(w.name(), List.of()).stream()
+                    .filter(Objects::nonNull)
+                    .toList();
+            Double mean = sc.isEmpty()
+                    ? null
+                    : sc.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
             out.add(new Trend.WallStatus(w.name(), d, mine, mean, last, since, cycle, s.overdueAfterDays(), status));
         }
         return out;

@@ -10,17 +10,35 @@ import org.variset.reports.scoring.grades.GradeFigures;
 
 /** A trend as text for people. */
 public final class TrendText {
-    private static final List<String> MONTH_KEYS = List.of("score.score", "grip.sector_entropy", "grip.up_share",
-            "holds.hill_n1", "moves.coverage", "grades.emd_to_target");
+    private static final List<String> MONTH_KEYS = List.of(
+            "score.score",
+            "grip.sector_entropy",
+            "grip.up_share",
+            "holds.hill_n1",
+            "moves.coverage",
+            "grades.emd_to_target");
 
-    private TrendText() {
-    }
+    private TrendText() {}
 
     /** The trend as text. */
     public static String of(Trend t) {
         StringBuilder b = new StringBuilder();
-        b.append("Trends of ").append(t.gym()).append(", ").append(t.from()).append(" to ").append(t.to())
+        b.append("Trends of ")
+                .append(t.gym())
+                .append(", ")
+                .append(t.from())
+                .append(" to ")
+                .append(t.to())
                 .append("\n\n");
+        months(b, t);
+        walls(b, t);
+        lifetimeAndSetters(b, t);
+        gradesAndRepeats(b, t);
+        return b.toString();
+    }
+
+    /** The month-end figures of the gym, with its grade gaps. */
+    private static void months(StringBuilder b, Trend t) {
         b.append("Month-end figures of the gym's routes up (score is a heuristic; novelty is not part of it here)\n");
         b.append(String.format("  %-10s %6s", "day", "routes"));
         MONTH_KEYS.forEach(k -> b.append(String.format(" %10s", shortLabel(k))));
@@ -30,66 +48,140 @@ public final class TrendText {
                 continue;
             }
             b.append(String.format("  %-10s %6d", p.day(), p.routes()));
-            MONTH_KEYS.forEach(k -> b.append(String.format(" %10s", Headline.text(k, p.figures().get(k)))));
+            MONTH_KEYS.forEach(k ->
+                    b.append(String.format(" %10s", Headline.text(k, p.figures().get(k)))));
             b.append('\n');
         }
-        List<String> gaps = t.months().stream().filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
-                .map(p -> p.day() + ": " + String.join("; ", p.gradeGaps().entrySet().stream().map(e -> e.getKey()
-                        + " " + String.join(", ", e.getValue())).toList())).toList();
-        b.append(gaps.isEmpty() ? "" : "  Grade gaps (bands the target expects two or more routes in, with none): "
-                + String.join(" · ", gaps) + "\n");
+        List<String> gaps = t.months().stream()
+                .filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
+                .map(p -> p.day() + ": "
+                        + String.join(
+                                "; ",
+                                p.gradeGaps().entrySet().stream()
+                                        .map(e -> e.getKey() + " " + String.join(", ", e.getValue()))
+                                        .toList()))
+                .toList();
+        b.append(
+                gaps.isEmpty()
+                        ? ""
+                        : "  Grade gaps (bands the target expects two or more routes in, with none): "
+                                + String.join(" · ", gaps) + "\n");
+    }
+
+    /** Each wall's resets and status. */
+    private static void walls(StringBuilder b, Trend t) {
         b.append("\nWalls (status on ").append(t.asOf()).append(")\n");
         for (Trend.WallStatus w : t.walls()) {
-            b.append("  ").append(w.wall()).append(": ").append(w.resets().size())
-                    .append(w.resets().size() == 1 ? " reset" : " resets").append(", mean score ")
-                    .append(FigureFormat.of("score", w.meanScore())).append("; ").append(w.lastReset() == null
-                            ? "never reset" : "last reset " + w.lastReset() + ", " + w.daysSince() + " days ago, cycle "
-                            + w.cycleDays() + " days: " + w.status() + (w.daysPastDue() > 0 ? " (" + w.daysPastDue()
-                                    + " days past due)" : "")).append('\n');
+            b.append("  ")
+                    .append(w.wall())
+                    .append(": ")
+                    .append(w.resets().size())
+                    .append(w.resets().size() == 1 ? " reset" : " resets")
+                    .append(", mean score ")
+                    .append(FigureFormat.of("score", w.meanScore()))
+                    .append("; ")
+                    .append(
+                            w.lastReset() == null
+                                    ? "never reset"
+                                    : "last reset " + w.lastReset() + ", " + w.daysSince() + " days ago, cycle "
+                                            + w.cycleDays() + " days: " + w.status()
+                                            + (w.daysPastDue() > 0 ? " (" + w.daysPastDue() + " days past due)" : ""))
+                    .append('\n');
         }
+    }
+
+    /** Route lifetimes and the setter mix. */
+    private static void lifetimeAndSetters(StringBuilder b, Trend t) {
         Trend.Lifetime l = t.lifetime();
-        b.append("\nRoute lifetime: ").append(l.stripped()).append(" routes came down in the period, median ")
+        b.append("\nRoute lifetime: ")
+                .append(l.stripped())
+                .append(" routes came down in the period, median ")
                 .append(l.medianDays() == null ? FigureFormat.NONE : FigureFormat.round(l.medianDays(), 1))
-                .append(" days up; ").append(l.stillUp()).append(" up on ").append(t.to()).append(".\n");
+                .append(" days up; ")
+                .append(l.stillUp())
+                .append(" up on ")
+                .append(t.to())
+                .append(".\n");
         b.append("\nSetters (a route set by two setters counts for both)\n");
         for (Trend.SetterProfile s : t.setters()) {
-            b.append("  ").append(s.setter()).append(": ").append(s.routes()).append(" routes (")
-                    .append(FigureFormat.percent(s.share())).append("); grips ").append(top(s.gripShares(), 3))
-                    .append("; holds ").append(top(s.holdShares(), 3)).append("; moves ").append(top(s.moveShares(),
-                            3)).append('\n');
+            b.append("  ")
+                    .append(s.setter())
+                    .append(": ")
+                    .append(s.routes())
+                    .append(" routes (")
+                    .append(FigureFormat.percent(s.share()))
+                    .append("); grips ")
+                    .append(top(s.gripShares(), 3))
+                    .append("; holds ")
+                    .append(top(s.holdShares(), 3))
+                    .append("; moves ")
+                    .append(top(s.moveShares(), 3))
+                    .append('\n');
         }
+    }
+
+    /** The period's grades against the target, and its near-repeats. */
+    private static void gradesAndRepeats(StringBuilder b, Trend t) {
         for (Map.Entry<Discipline, GradeFigures> e : t.grades().entrySet()) {
             GradeFigures g = e.getValue();
-            b.append("\nGrades of the ").append(e.getKey().word()).append(" routes set in the period: ")
-                    .append(g.histogram().entrySet().stream().filter(x -> x.getValue() > 0).map(x -> x.getKey() + " "
-                            + x.getValue()).collect(Collectors.joining(", ")))
-                    .append(g.emdToTarget() == null ? "; no target" : "; " + FigureFormat.of("emd_to_target",
-                            g.emdToTarget()) + " bands from the target" + (t.targetIsExample().get(e.getKey())
-                                    ? " (the example pyramid)" : "")).append('\n');
+            b.append("\nGrades of the ")
+                    .append(e.getKey().word())
+                    .append(" routes set in the period: ")
+                    .append(g.histogram().entrySet().stream()
+                            .filter(x -> x.getValue() > 0)
+                            .map(x -> x.getKey() + " " + x.getValue())
+                            .collect(Collectors.joining(", ")))
+                    .append(
+                            g.emdToTarget() == null
+                                    ? "; no target"
+                                    : "; " + FigureFormat.of("emd_to_target", g.emdToTarget())
+                                            + " bands from the target"
+                                            + (t.targetIsExample().get(e.getKey()) ? " (the example pyramid)" : ""))
+                    .append('\n');
         }
-        b.append("\nNotable repeats: ").append(t.repeats().isEmpty() ? "none" : t.repeats().size()).append('\n');
-        t.repeats().stream().limit(10).forEach(r -> b.append("  ").append(r.pair().route()).append(" repeats ")
-                .append(r.pair().other()).append(" (Jaccard ").append(FigureFormat.of("jaccard",
-                        r.pair().similarity().jaccard())).append(")\n"));
-        return b.toString();
+        b.append("\nNotable repeats: ")
+                .append(t.repeats().isEmpty() ? "none" : t.repeats().size())
+                .append('\n');
+        t.repeats().stream()
+                .limit(10)
+                .forEach(r -> b.append("  ")
+                        .append(r.pair().route())
+                        .append(" repeats ")
+                        .append(r.pair().other())
+                        .append(" (Jaccard ")
+                        .append(FigureFormat.of("jaccard", r.pair().similarity().jaccard()))
+                        .append(")\n"));
     }
 
     /** Several gyms side by side, then each gym's own trend. */
     public static String of(ChainComparison c, List<Trend> trends) {
         StringBuilder b = new StringBuilder();
-        b.append("Gyms compared, ").append(c.from()).append(" to ").append(c.to()).append(" (").append(c.rows().size())
+        b.append("Gyms compared, ")
+                .append(c.from())
+                .append(" to ")
+                .append(c.to())
+                .append(" (")
+                .append(c.rows().size())
                 .append(" gyms)\n\n");
         b.append(String.format("  %-24s %6s %6s %6s %6s", "gym", "set", "resets", "mean", "up"));
         ChainComparison.FIGURES.forEach(k -> b.append(String.format(" %10s", shortLabel(k))));
         b.append(String.format(" %7s %7s %8s %7s%n", "due", "overdue", "lifetime", "repeats"));
         for (ChainComparison.Row r : c.rows()) {
-            b.append(String.format("  %-24s %6d %6d %6s %6d", clip(r.gym(), 24), r.routesSet(), r.resets(),
-                    FigureFormat.of("score", r.meanResetScore()), r.routesUp()));
-            ChainComparison.FIGURES.forEach(k -> b.append(String.format(" %10s", Headline.text(k, r.figures()
-                    .get(k)))));
-            b.append(String.format(" %7s %7s %8s %7d%n", r.wallsDue() + "/" + r.walls(), r.wallsOverdue() + "/"
-                    + r.walls(), r.medianLifetimeDays() == null ? FigureFormat.NONE : FigureFormat.round(
-                            r.medianLifetimeDays(), 1), r.nearRepeats()));
+            b.append(String.format(
+                    "  %-24s %6d %6d %6s %6d",
+                    clip(r.gym(), 24),
+                    r.routesSet(),
+                    r.resets(),
+                    FigureFormat.of("score", r.meanResetScore()),
+                    r.routesUp()));
+            ChainComparison.FIGURES.forEach(k ->
+                    b.append(String.format(" %10s", Headline.text(k, r.figures().get(k)))));
+            b.append(String.format(
+                    " %7s %7s %8s %7d%n",
+                    r.wallsDue() + "/" + r.walls(),
+                    r.wallsOverdue() + "/" + r.walls(),
+                    r.medianLifetimeDays() == null ? FigureFormat.NONE : FigureFormat.round(r.medianLifetimeDays(), 1),
+                    r.nearRepeats()));
         }
         b.append("\n  set: routes set in the period; mean: mean score of its resets; up: routes up at the last month "
                 + "end, where the figures are taken; due, overdue: walls of all walls; lifetime: median days up of "
@@ -109,8 +201,11 @@ public final class TrendText {
         if (shares.values().stream().allMatch(v -> v == 0)) {
             return FigureFormat.NONE;
         }
-        return shares.entrySet().stream().filter(e -> e.getValue() > 0).sorted(Map.Entry.<String, Double>
-                comparingByValue().reversed()).limit(n).map(e -> e.getKey() + " " + FigureFormat.percent(e.getValue()))
+        return shares.entrySet().stream()
+                .filter(e -> e.getValue() > 0)
+                .sorted(Map.Entry.<String, Double>comparingByValue().reversed())
+                .limit(n)
+                .map(e -> e.getKey() + " " + FigureFormat.percent(e.getValue()))
                 .collect(Collectors.joining(", "));
     }
 

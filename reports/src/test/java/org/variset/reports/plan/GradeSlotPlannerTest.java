@@ -55,7 +55,9 @@ class GradeSlotPlannerTest {
         long[] previous = LongStream.range(0, k).map(i -> r.nextInt(3)).toArray();
         GradeSlotPlanner.Result plan = GradeSlotPlanner.plan(rest, target, n, previous);
         assertThat(Arrays.stream(plan.slots()).sum()).isEqualTo(n);
-        double best = compositions(n, k).stream().mapToDouble(x -> GradeSlotPlanner.distance(rest, x, target)).min()
+        double best = compositions(n, k).stream()
+                .mapToDouble(x -> GradeSlotPlanner.distance(rest, x, target))
+                .min()
                 .orElseThrow();
         assertThat(plan.distanceAfter()).isCloseTo(best, within(1e-12));
         assertThat(GradeSlotPlanner.distance(rest, plan.slots(), target)).isCloseTo(best, within(1e-12));
@@ -97,8 +99,7 @@ class GradeSlotPlannerTest {
     /** Worked by hand: with rest 2, 2, 0 and target 1:1:1, three slots go 0, 1, 2 (distance 1/21 + 1/21 = 2/21). */
     @Test
     void fillsTheEmptyBand() {
-        GradeSlotPlanner.Result r = GradeSlotPlanner.plan(new long[] {2, 2, 0}, new double[] {1, 1, 1}, 3,
-                new long[3]);
+        GradeSlotPlanner.Result r = GradeSlotPlanner.plan(new long[] {2, 2, 0}, new double[] {1, 1, 1}, 3, new long[3]);
         assertThat(r.slots()).containsExactly(0, 1, 2);
         assertThat(r.distanceAfter()).isCloseTo(2 / 21.0, within(1e-12));
     }

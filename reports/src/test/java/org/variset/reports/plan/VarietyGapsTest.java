@@ -21,7 +21,8 @@ class VarietyGapsTest {
         assertThat(ten).extracting(VarietyGaps.Gap::category).containsExactly("sloper");
         assertThat(ten.get(0).standingShare()).isCloseTo(0.05, within(1e-12));
         assertThat(ten.get(0).yearShare()).isCloseTo(0.20, within(1e-12));
-        assertThat(VarietyGaps.of("holds", standing, year, 0.05)).extracting(VarietyGaps.Gap::category)
+        assertThat(VarietyGaps.of("holds", standing, year, 0.05))
+                .extracting(VarietyGaps.Gap::category)
                 .containsExactly("sloper", "crimp");
     }
 

@@ -14,8 +14,15 @@ import java.util.List;
  * @param difficulty the difficulty of each hand move
  * @param holds its hold placements, hand holds in climbing order first
  */
-record GeneratedRoute(String label, String grade, List<String> setters, String color, List<String> moves,
-        List<String> styles, List<Integer> difficulty, List<Hold> holds) {
+record GeneratedRoute(
+        String label,
+        String grade,
+        List<String> setters,
+        String color,
+        List<String> moves,
+        List<String> styles,
+        List<Integer> difficulty,
+        List<Hold> holds) {
 
     /**
      * One generated placement.
@@ -29,6 +36,5 @@ record GeneratedRoute(String label, String grade, List<String> setters, String c
      * @param x metres from the left
      * @param y metres up
      */
-    record Hold(int seq, String role, String type, String size, List<Integer> grips, String ref, double x, double y) {
-    }
+    record Hold(int seq, String role, String type, String size, List<Integer> grips, String ref, double x, double y) {}
 }

@@ -18,8 +18,7 @@ final class HoldShapes {
      * @param size its size
      * @param grips its directions in degrees
      */
-    record Shape(String ref, String type, String size, List<Integer> grips) {
-    }
+    record Shape(String ref, String type, String size, List<Integer> grips) {}
 
     private final String prefix;
     private final List<Shape> fixed;
@@ -41,7 +40,10 @@ final class HoldShapes {
         List<Shape> out = new ArrayList<>();
         for (int i = 1; i <= count; i++) {
             String type = types[r.nextInt(types.length)];
-            out.add(new Shape(String.format(java.util.Locale.ROOT, "%s-%02d", prefix, i), type, any.size(type, r),
+            out.add(new Shape(
+                    String.format(java.util.Locale.ROOT, "%s-%02d", prefix, i),
+                    type,
+                    any.size(type, r),
                     any.grips(type, r)));
         }
         return new HoldShapes(prefix, out);
@@ -68,8 +70,8 @@ final class HoldShapes {
     }
 
     private String ref(String type, SplittableRandom r) {
-        return String.format(java.util.Locale.ROOT, "%s%c%d", prefix, Character.toUpperCase(type.charAt(0)),
-                1 + r.nextInt(400));
+        return String.format(
+                java.util.Locale.ROOT, "%s%c%d", prefix, Character.toUpperCase(type.charAt(0)), 1 + r.nextInt(400));
     }
 
     private String size(String type, SplittableRandom r) {
@@ -92,9 +94,12 @@ final class HoldShapes {
             case "pinch" -> List.of(90 + r.nextInt(21) - 10, 270 + r.nextInt(21) - 10);
             case "volume" -> roll < 70 ? List.of() : List.of(r.nextInt(8) * 45);
             case "macro" -> List.of(r.nextInt(72) * 5);
-            default -> roll < 62 ? List.of((360 + r.nextInt(61) - 30) % 360)
-                    : roll < 84 ? List.of(r.nextBoolean() ? 90 + r.nextInt(31) - 15 : 270 + r.nextInt(31) - 15)
-                    : roll < 94 ? List.of(180 + r.nextInt(41) - 20) : List.of(r.nextInt(8) * 45);
+            default ->
+                roll < 62
+                        ? List.of((360 + r.nextInt(61) - 30) % 360)
+                        : roll < 84
+                                ? List.of(r.nextBoolean() ? 90 + r.nextInt(31) - 15 : 270 + r.nextInt(31) - 15)
+                                : roll < 94 ? List.of(180 + r.nextInt(41) - 20) : List.of(r.nextInt(8) * 45);
         };
     }
 }

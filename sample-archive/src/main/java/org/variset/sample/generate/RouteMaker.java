@@ -18,13 +18,48 @@ final class RouteMaker {
     private static final int[] ROPE_WEIGHT = {2, 4, 6, 8, 9, 8, 6, 4, 3, 2, 1};
     private static final String[] HAND = {"jug", "crimp", "edge", "sloper", "pinch", "pocket", "volume", "macro"};
     private static final int[] HAND_WEIGHT = {20, 22, 10, 14, 14, 6, 6, 8};
-    private static final String[] BOULDER_MOVES = {"heel hook", "toe hook", "drop knee", "flag", "dyno", "deadpoint",
-        "lock-off", "mantle", "compression", "gaston", "undercling", "sidepull", "match", "cross-through", "high step",
-        "rockover", "smear", "campus", "kneebar", "bicycle", "coordination"};
-    private static final String[] ROPE_MOVES = {"layback", "stem", "flag", "drop knee", "lock-off", "gaston",
-        "undercling", "sidepull", "high step", "rockover", "smear", "heel hook", "deadpoint", "cross-through"};
-    private static final String[] COLORS = {"Red", "Blue", "Green", "Yellow", "Black", "White", "Orange", "Purple",
-        "Pink", "Teal", "Grey", "Lime"};
+    private static final String[] BOULDER_MOVES = {
+        "heel hook",
+        "toe hook",
+        "drop knee",
+        "flag",
+        "dyno",
+        "deadpoint",
+        "lock-off",
+        "mantle",
+        "compression",
+        "gaston",
+        "undercling",
+        "sidepull",
+        "match",
+        "cross-through",
+        "high step",
+        "rockover",
+        "smear",
+        "campus",
+        "kneebar",
+        "bicycle",
+        "coordination"
+    };
+    private static final String[] ROPE_MOVES = {
+        "layback",
+        "stem",
+        "flag",
+        "drop knee",
+        "lock-off",
+        "gaston",
+        "undercling",
+        "sidepull",
+        "high step",
+        "rockover",
+        "smear",
+        "heel hook",
+        "deadpoint",
+        "cross-through"
+    };
+    private static final String[] COLORS = {
+        "Red", "Blue", "Green", "Yellow", "Black", "White", "Orange", "Purple", "Pink", "Teal", "Grey", "Lime"
+    };
 
     private final SplittableRandom r;
 
@@ -126,10 +161,9 @@ final class RouteMaker {
         int reach = longReach ? 1 + r.nextInt(Math.max(1, hand - 2)) : -1;
         for (int i = 0; i < hand; i++) {
             String role = i == 0 ? "start" : i == hand - 1 ? "finish" : "hand";
-            HoldShapes.Shape s = r.nextDouble() < upCrimps ? shapes.upCrimp(r) : shapes.hand(r, pick(HAND,
-                    HAND_WEIGHT));
-            out.add(new GeneratedRoute.Hold(i + 1, role, s.type(), s.size(), s.grips(), s.ref(), round(x),
-                    round(y)));
+            HoldShapes.Shape s =
+                    r.nextDouble() < upCrimps ? shapes.upCrimp(r) : shapes.hand(r, pick(HAND, HAND_WEIGHT));
+            out.add(new GeneratedRoute.Hold(i + 1, role, s.type(), s.size(), s.grips(), s.ref(), round(x), round(y)));
             double dy = i + 1 == reach ? 1.7 + r.nextDouble() * 0.25 : step * (0.6 + r.nextDouble() * 0.8);
             y = Math.min(w.heightM() - 0.3, y + dy);
             x = Math.max(0.3, Math.min(w.widthM() - 0.3, x + (r.nextDouble() - 0.5) * 1.1));
@@ -137,8 +171,15 @@ final class RouteMaker {
         for (int i = 0; i < feet; i++) {
             HoldShapes.Shape s = shapes.foot(r);
             GeneratedRoute.Hold h = out.get(r.nextInt(hand));
-            out.add(new GeneratedRoute.Hold(0, "foot", s.type(), s.size(), List.of(), s.ref(),
-                    round(Math.max(0.2, h.x() + (r.nextDouble() - 0.5) * 0.8)), round(Math.max(0.15, h.y() - 0.9))));
+            out.add(new GeneratedRoute.Hold(
+                    0,
+                    "foot",
+                    s.type(),
+                    s.size(),
+                    List.of(),
+                    s.ref(),
+                    round(Math.max(0.2, h.x() + (r.nextDouble() - 0.5) * 0.8)),
+                    round(Math.max(0.15, h.y() - 0.9))));
         }
         return out;
     }

@@ -27,13 +27,26 @@ public final class SampleGenerator {
     /** The bundled sample's last day. */
     public static final LocalDate SAMPLE_END = LocalDate.of(2026, 11, 30);
 
-    private static final List<String> ROUTE_COLUMNS = List.of("gym", "wall", "route", "set_on", "discipline", "grade",
-            "grade_scale", "stripped_on", "setters", "color", "angle_deg", "moves", "styles", "move_difficulty", "notes");
-    private static final List<String> HOLD_COLUMNS = List.of("gym", "wall", "route", "set_on", "seq", "role", "type",
-            "size", "grip", "hold_ref", "x_m", "y_m");
+    private static final List<String> ROUTE_COLUMNS = List.of(
+            "gym",
+            "wall",
+            "route",
+            "set_on",
+            "discipline",
+            "grade",
+            "grade_scale",
+            "stripped_on",
+            "setters",
+            "color",
+            "angle_deg",
+            "moves",
+            "styles",
+            "move_difficulty",
+            "notes");
+    private static final List<String> HOLD_COLUMNS =
+            List.of("gym", "wall", "route", "set_on", "seq", "role", "type", "size", "grip", "hold_ref", "x_m", "y_m");
 
-    private SampleGenerator() {
-    }
+    private SampleGenerator() {}
 
     /**
      * What to generate.
@@ -48,8 +61,8 @@ public final class SampleGenerator {
         /** Checks the options. */
         public Options {
             if (gyms < 1 || years < 1 || gyms > 10_000 || years > 50) {
-                throw new IllegalArgumentException("generate 1 to 10000 gyms over 1 to 50 years (asked: " + gyms
-                        + " gyms, " + years + " years)");
+                throw new IllegalArgumentException(
+                        "generate 1 to 10000 gyms over 1 to 50 years (asked: " + gyms + " gyms, " + years + " years)");
             }
         }
     }
@@ -63,8 +76,7 @@ public final class SampleGenerator {
      * @param holds hold placements
      * @param files the files, in the order to import them
      */
-    public record Summary(long gyms, long walls, long routes, long holds, List<Path> files) {
-    }
+    public record Summary(long gyms, long walls, long routes, long holds, List<Path> files) {}
 
     /** The bundled sample: Lantern Rock, two years to 2026-11-30, with its stories. */
     public static Options sample() {
@@ -81,9 +93,10 @@ public final class SampleGenerator {
         Path walls = dir.resolve("walls.csv");
         Path routes = dir.resolve("routes.csv");
         Path holds = dir.resolve("holds.csv");
-        try (CsvOut w = new CsvOut(walls, List.of("gym", "wall", "discipline", "angle_deg", "height_m", "width_m",
-                "cycle_days")); CsvOut r = new CsvOut(routes, ROUTE_COLUMNS); CsvOut h = new CsvOut(holds,
-                        HOLD_COLUMNS)) {
+        try (CsvOut w = new CsvOut(
+                        walls, List.of("gym", "wall", "discipline", "angle_deg", "height_m", "width_m", "cycle_days"));
+                CsvOut r = new CsvOut(routes, ROUTE_COLUMNS);
+                CsvOut h = new CsvOut(holds, HOLD_COLUMNS)) {
             for (int g = 0; g < o.gyms(); g++) {
                 new GymWriter(o, g, w, r, h).write();
             }
@@ -110,16 +123,25 @@ public final class SampleGenerator {
             this.holds = holds;
             this.stories = o.stories() && g == 0;
             this.gym = stories ? Stories.GYM : String.format(Locale.ROOT, "Synthetic Gym %03d", g + 1);
-            this.setters = stories ? Stories.SETTERS : List.of(1, 2, 3, 4, 5, 6).stream().map(i -> String.format(
-                    Locale.ROOT, "Setter %03d-%d", g + 1, i)).toList();
+            this.setters = stories
+                    ? Stories.SETTERS
+                    : List.of(1, 2, 3, 4, 5, 6).stream()
+                            .map(i -> String.format(Locale.ROOT, "Setter %03d-%d", g + 1, i))
+                            .toList();
         }
 
         void write() {
             List<WallPlan> plans = WallPlan.standard();
             for (int i = 0; i < plans.size(); i++) {
                 WallPlan w = plans.get(i);
-                walls.row(gym, w.name(), w.rope() ? "rope" : "boulder", num(w.angleDeg()), num(w.heightM()),
-                        num(w.widthM()), String.valueOf(w.cycleDays()));
+                walls.row(
+                        gym,
+                        w.name(),
+                        w.rope() ? "rope" : "boulder",
+                        num(w.angleDeg()),
+                        num(w.heightM()),
+                        num(w.widthM()),
+                        String.valueOf(w.cycleDays()));
                 wall(w, i);
             }
         }
@@ -128,7 +150,8 @@ public final class SampleGenerator {
             SplittableRandom r = new SplittableRandom(o.seed() * 1_000_003L + g * 7_919L + index * 104_729L);
             List<LocalDate> days = schedule(w, index, r);
             HoldShapes shapes = stories && w.name().equals(Stories.REUSE_WALL)
-                    ? HoldShapes.fixedSet("PW", 26, r.split()) : HoldShapes.inventory(stories ? "" : "G" + (g + 1));
+                    ? HoldShapes.fixedSet("PW", 26, r.split())
+                    : HoldShapes.inventory(stories ? "" : "G" + (g + 1));
             RouteMaker make = new RouteMaker(r);
             GeneratedRoute template = null;
             for (int k = 0; k < days.size(); k++) {
@@ -151,17 +174,18 @@ public final class SampleGenerator {
 
         private List<LocalDate> schedule(WallPlan w, int index, SplittableRandom r) {
             List<LocalDate> days = new ArrayList<>();
-            LocalDate last = stories && w.name().equals(Stories.OVERDUE_WALL) ? o.end().minusDays(Stories.OVERDUE_BY)
-                    : o.end();
-            for (LocalDate d = o.end().minusYears(o.years()).plusDays(1 + index * 3L); !d.isAfter(last);
+            LocalDate last =
+                    stories && w.name().equals(Stories.OVERDUE_WALL) ? o.end().minusDays(Stories.OVERDUE_BY) : o.end();
+            for (LocalDate d = o.end().minusYears(o.years()).plusDays(1 + index * 3L);
+                    !d.isAfter(last);
                     d = d.plusDays(w.cycleDays() + r.nextInt(6) - 2)) {
                 days.add(d);
             }
             return days;
         }
 
-        private GeneratedRoute route(RouteMaker make, SplittableRandom r, WallPlan w, HoldShapes shapes,
-                LocalDate day, int i) {
+        private GeneratedRoute route(
+                RouteMaker make, SplittableRandom r, WallPlan w, HoldShapes shapes, LocalDate day, int i) {
             Set<String> avoid = stories && !w.rope() ? Stories.avoidedGrades(day, o.end()) : Set.of();
             String grade = make.grade(w.rope(), avoid);
             List<String> team = new ArrayList<>();
@@ -174,24 +198,63 @@ public final class SampleGenerator {
             }
             double upCrimps = stories && team.get(0).equals(Stories.CRIMP_SETTER) ? Stories.CRIMP_SHARE : 0;
             List<String> moves = make.moves(w);
-            List<GeneratedRoute.Hold> holdList = make.holds(w, shapes, upCrimps, moves.contains("dyno")
-                    && r.nextInt(3) == 0);
-            int hand = (int) holdList.stream().filter(h -> !h.role().equals("foot")).count();
-            int base = Math.max(2, Math.min(8, 2 + grade.chars().filter(Character::isDigit).map(c -> c - '0')
-                    .sum() * 2 / 3));
-            return new GeneratedRoute(RouteMaker.label(i), grade, team, RouteMaker.color(i), moves,
-                    make.styles(w, moves), make.difficulty(hand - 1, base), holdList);
+            List<GeneratedRoute.Hold> holdList =
+                    make.holds(w, shapes, upCrimps, moves.contains("dyno") && r.nextInt(3) == 0);
+            int hand = (int)
+                    holdList.stream().filter(h -> !h.role().equals("foot")).count();
+            int base = Math.max(
+                    2,
+                    Math.min(
+                            8,
+                            2
+                                    + grade.chars()
+                                                    .filter(Character::isDigit)
+                                                    .map(c -> c - '0')
+                                                    .sum()
+                                            * 2
+                                            / 3));
+            return new GeneratedRoute(
+                    RouteMaker.label(i),
+                    grade,
+                    team,
+                    RouteMaker.color(i),
+                    moves,
+                    make.styles(w, moves),
+                    make.difficulty(hand - 1, base),
+                    holdList);
         }
 
         private void write(WallPlan w, LocalDate day, LocalDate stripped, GeneratedRoute route) {
-            routes.row(gym, w.name(), route.label(), day.toString(), w.rope() ? "rope" : "boulder", route.grade(),
-                    w.rope() ? "french" : "v", stripped == null ? "" : stripped.toString(), String.join(";", route.setters()), route.color(), "",
-                    String.join(";", route.moves()), String.join(";", route.styles()), route.difficulty().stream()
-                            .map(String::valueOf).collect(Collectors.joining(";")), "");
+            routes.row(
+                    gym,
+                    w.name(),
+                    route.label(),
+                    day.toString(),
+                    w.rope() ? "rope" : "boulder",
+                    route.grade(),
+                    w.rope() ? "french" : "v",
+                    stripped == null ? "" : stripped.toString(),
+                    String.join(";", route.setters()),
+                    route.color(),
+                    "",
+                    String.join(";", route.moves()),
+                    String.join(";", route.styles()),
+                    route.difficulty().stream().map(String::valueOf).collect(Collectors.joining(";")),
+                    "");
             for (GeneratedRoute.Hold h : route.holds()) {
-                holds.row(gym, w.name(), route.label(), day.toString(), h.seq() == 0 ? "" : String.valueOf(h.seq()),
-                        h.role(), h.type(), h.size(), h.grips().stream().map(String::valueOf).collect(
-                                Collectors.joining(";")), h.ref(), num(h.x()), num(h.y()));
+                holds.row(
+                        gym,
+                        w.name(),
+                        route.label(),
+                        day.toString(),
+                        h.seq() == 0 ? "" : String.valueOf(h.seq()),
+                        h.role(),
+                        h.type(),
+                        h.size(),
+                        h.grips().stream().map(String::valueOf).collect(Collectors.joining(";")),
+                        h.ref(),
+                        num(h.x()),
+                        num(h.y()));
             }
         }
 

@@ -20,8 +20,8 @@ public final class Stories {
     /** The sample gym's name. */
     public static final String GYM = "Lantern Rock";
     /** Its setters (invented). */
-    public static final List<String> SETTERS = List.of("Mira Holt", "Jon Vale", "Tess Orrin", "Rafe Kalder",
-            "Ines Marlow", "Dov Saari");
+    public static final List<String> SETTERS =
+            List.of("Mira Holt", "Jon Vale", "Tess Orrin", "Rafe Kalder", "Ines Marlow", "Dov Saari");
     /** The setter with the up-facing crimps. */
     public static final String CRIMP_SETTER = "Rafe Kalder";
     /** The share of that setter's hand holds that are up-facing crimps (others: about one in ten). */
@@ -37,8 +37,7 @@ public final class Stories {
     /** The grades not set in the last summer. */
     public static final Set<String> GAP_GRADES = Set.of("V5", "V6");
 
-    private Stories() {
-    }
+    private Stories() {}
 
     /** The grades not to set on a day: V5 and V6 from June to August of the sample's last year. */
     static Set<String> avoidedGrades(LocalDate day, LocalDate end) {
@@ -57,10 +56,24 @@ public final class Stories {
         List<GeneratedRoute.Hold> holds = new ArrayList<>();
         double dx = (r.nextDouble() - 0.5) * 2;
         for (GeneratedRoute.Hold h : earlier.holds()) {
-            holds.add(new GeneratedRoute.Hold(h.seq(), h.role(), h.type(), h.size(), h.grips(), h.ref(),
-                    Math.round(Math.max(0.2, h.x() + dx) * 100) / 100.0, h.y()));
+            holds.add(new GeneratedRoute.Hold(
+                    h.seq(),
+                    h.role(),
+                    h.type(),
+                    h.size(),
+                    h.grips(),
+                    h.ref(),
+                    Math.round(Math.max(0.2, h.x() + dx) * 100) / 100.0,
+                    h.y()));
         }
-        return new GeneratedRoute(now.label(), earlier.grade(), now.setters(), now.color(), earlier.moves(),
-                earlier.styles(), earlier.difficulty(), holds);
+        return new GeneratedRoute(
+                now.label(),
+                earlier.grade(),
+                now.setters(),
+                now.color(),
+                earlier.moves(),
+                earlier.styles(),
+                earlier.difficulty(),
+                holds);
     }
 }

@@ -13,7 +13,13 @@ import java.util.List;
  * @param cycleDays how often it is reset
  * @param routesPerReset how many routes a reset brings (lowest, highest)
  */
-record WallPlan(String name, boolean rope, double angleDeg, double heightM, double widthM, int cycleDays,
+record WallPlan(
+        String name,
+        boolean rope,
+        double angleDeg,
+        double heightM,
+        double widthM,
+        int cycleDays,
         int[] routesPerReset) {
 
     /** The walls every generated gym has: five boulder walls and two rope walls. */

@@ -21,7 +21,8 @@ class SampleGeneratorTest {
         SampleGenerator.write(SampleGenerator.sample(), tmp.resolve("a"));
         SampleGenerator.write(SampleGenerator.sample(), tmp.resolve("b"));
         for (String f : List.of("walls.csv", "routes.csv", "holds.csv")) {
-            assertThat(Files.readAllBytes(tmp.resolve("a").resolve(f))).as(f)
+            assertThat(Files.readAllBytes(tmp.resolve("a").resolve(f)))
+                    .as(f)
                     .isEqualTo(Files.readAllBytes(tmp.resolve("b").resolve(f)));
         }
     }
@@ -32,7 +33,8 @@ class SampleGeneratorTest {
         SampleGenerator.write(SampleGenerator.sample(), tmp.resolve("fresh"));
         List<Path> committed = SampleArchive.copyTo(tmp.resolve("committed"));
         for (Path c : committed) {
-            assertThat(Files.readAllBytes(c)).as(c.getFileName().toString())
+            assertThat(Files.readAllBytes(c))
+                    .as(c.getFileName().toString())
                     .isEqualTo(Files.readAllBytes(tmp.resolve("fresh").resolve(c.getFileName())));
         }
     }
@@ -51,8 +53,11 @@ class SampleGeneratorTest {
         SampleGenerator.Summary s = SampleGenerator.write(o, tmp.resolve("x"));
         assertThat(s.gyms()).isEqualTo(2);
         String routes = Files.readString(tmp.resolve("x/routes.csv"));
-        assertThat(routes).contains("Synthetic Gym 001,").contains("Synthetic Gym 002,")
-                .doesNotContain(Stories.GYM).doesNotContain(Stories.CRIMP_SETTER);
+        assertThat(routes)
+                .contains("Synthetic Gym 001,")
+                .contains("Synthetic Gym 002,")
+                .doesNotContain(Stories.GYM)
+                .doesNotContain(Stories.CRIMP_SETTER);
         assertThat(Files.readString(tmp.resolve("x/holds.csv"))).doesNotContain(",PW-");
         SampleGenerator.write(new SampleGenerator.Options(2, 1, 8, LocalDate.of(2026, 6, 30), false), tmp.resolve("y"));
         assertThat(Files.readString(tmp.resolve("y/routes.csv"))).isNotEqualTo(routes);

@@ -32,8 +32,7 @@ import org.variset.archive.grade.BandSet;
  * </ul>
  */
 public final class GradeDistribution {
-    private GradeDistribution() {
-    }
+    private GradeDistribution() {}
 
     /**
      * The grade figures.
@@ -60,7 +59,9 @@ public final class GradeDistribution {
         double total = order.stream().mapToDouble(target::get).sum();
         long inside = order.stream().mapToLong(histogram::get).sum();
         long outside = ircra.length - inside;
-        List<String> gaps = order.stream().filter(l -> target.get(l) > 0 && histogram.get(l) == 0).toList();
+        List<String> gaps = order.stream()
+                .filter(l -> target.get(l) > 0 && histogram.get(l) == 0)
+                .toList();
         Map<String, Double> shares = new LinkedHashMap<>();
         order.forEach(l -> shares.put(l, target.get(l) / total));
         if (inside == 0) {
@@ -80,9 +81,15 @@ public final class GradeDistribution {
         return chiSquare(histogram, shares, outside, emd, gaps, why);
     }
 
-    private static GradeFigures chiSquare(Map<String, Long> histogram, Map<String, Double> shares, long outside,
-            double emd, List<String> gaps, Map<String, String> why) {
-        List<String> positive = new ArrayList<>(shares.keySet().stream().filter(l -> shares.get(l) > 0).toList());
+    private static GradeFigures chiSquare(
+            Map<String, Long> histogram,
+            Map<String, Double> shares,
+            long outside,
+            double emd,
+            List<String> gaps,
+            Map<String, String> why) {
+        List<String> positive = new ArrayList<>(
+                shares.keySet().stream().filter(l -> shares.get(l) > 0).toList());
         long n = positive.stream().mapToLong(histogram::get).sum();
         int df = positive.size() - 1;
         if (df < 1 || n == 0) {

@@ -18,7 +18,14 @@ import java.util.Map;
  * @param gaps bands with a target share above zero and no route [{@code gaps}]
  * @param undefined for each null figure, its key and why
  */
-public record GradeFigures(Map<String, Long> histogram, Map<String, Double> target, long outsideTarget,
-        Double emdToTarget, Double chiSquare, Integer chiSquareDf, Double chiSquareP, Boolean chiSquareReliable,
-        List<String> gaps, Map<String, String> undefined) {
-}
+public record GradeFigures(
+        Map<String, Long> histogram,
+        Map<String, Double> target,
+        long outsideTarget,
+        Double emdToTarget,
+        Double chiSquare,
+        Integer chiSquareDf,
+        Double chiSquareP,
+        Boolean chiSquareReliable,
+        List<String> gaps,
+        Map<String, String> undefined) {}

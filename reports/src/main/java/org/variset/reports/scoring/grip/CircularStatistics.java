@@ -35,10 +35,10 @@ import org.variset.archive.route.GripDirection;
 public final class CircularStatistics {
     /** Below this mean resultant length the mean direction is undefined (docs/spec/metrics.md). */
     static final double NO_DIRECTION = 1e-9;
+
     private static final int SECTORS = 8;
 
-    private CircularStatistics() {
-    }
+    private CircularStatistics() {}
 
     /**
      * The grip-direction figures.
@@ -58,13 +58,7 @@ public final class CircularStatistics {
             sectorList.add(s);
         }
         if (n == 0) {
-            for (String key : List.of("resultant_length", "mean_direction_deg", "circular_variance",
-                    "circular_sd_deg", "rayleigh_z", "rayleigh_p", "axial_resultant_length", "sector_entropy",
-                    "horizontal_edge_share", "vertical_edge_share")) {
-                why.put(key, "no hand hold with a grip direction");
-            }
-            return new GripStatistics(0, undirected, null, null, null, null, null, null, null, sectorList, null,
-                    null, null, why);
+            return none(undirected, sectorList);
         }
         double[] cs = sums(degrees, 1);
         double r = Math.hypot(cs[0], cs[1]);
@@ -89,9 +83,41 @@ public final class CircularStatistics {
         }
         double[] axial = sums(degrees, 2);
         double axialRBar = Math.min(1.0, Math.hypot(axial[0], axial[1]) / n);
-        return new GripStatistics(n, undirected, rBar, mean, 1.0 - rBar, sd, z, p, axialRBar, sectorList,
-                sectorEntropy(sectors, n), (sectors[0] + sectors[4]) / (double) n,
-                (sectors[2] + sectors[6]) / (double) n, why);
+        return new GripStatistics(
+                n,
+                undirected,
+                rBar,
+                mean,
+                1.0 - rBar,
+                sd,
+                z,
+                p,
+                axialRBar,
+                sectorList,
+                sectorEntropy(sectors, n),
+                (sectors[0] + sectors[4]) / (double) n,
+                (sectors[2] + sectors[6]) / (double) n,
+                why);
+    }
+
+    /** The figures of a set with no directed hand grip: every one undefined, with the reason. */
+    private static GripStatistics none(int undirected, List<Integer> sectorList) {
+        Map<String, String> why = new LinkedHashMap<>();
+        for (String key : List.of(
+                "resultant_length",
+                "mean_direction_deg",
+                "circular_variance",
+                "circular_sd_deg",
+                "rayleigh_z",
+                "rayleigh_p",
+                "axial_resultant_length",
+                "sector_entropy",
+                "horizontal_edge_share",
+                "vertical_edge_share")) {
+            why.put(key, "no hand hold with a grip direction");
+        }
+        return new GripStatistics(
+                0, undirected, null, null, null, null, null, null, null, sectorList, null, null, null, why);
     }
 
     /** The direction sector k faces, as a word ({@code up}, {@code down-left}); see {@link GripDirection}. */

@@ -22,8 +22,18 @@ import java.util.Map;
  * @param verticalEdgeShare (sector 2 + sector 6) / n [{@code vertical_edge_share}]
  * @param undefined for each null figure, its JSON key and why
  */
-public record GripStatistics(int n, int undirected, Double resultantLength, Double meanDirectionDeg,
-        Double circularVariance, Double circularSdDeg, Double rayleighZ, Double rayleighP,
-        Double axialResultantLength, List<Integer> sectors, Double sectorEntropy, Double horizontalEdgeShare,
-        Double verticalEdgeShare, Map<String, String> undefined) {
-}
+public record GripStatistics(
+        int n,
+        int undirected,
+        Double resultantLength,
+        Double meanDirectionDeg,
+        Double circularVariance,
+        Double circularSdDeg,
+        Double rayleighZ,
+        Double rayleighP,
+        Double axialResultantLength,
+        List<Integer> sectors,
+        Double sectorEntropy,
+        Double horizontalEdgeShare,
+        Double verticalEdgeShare,
+        Map<String, String> undefined) {}

@@ -23,8 +23,7 @@ import java.util.List;
  * </ul>
  */
 public final class RouteLine {
-    private RouteLine() {
-    }
+    private RouteLine() {}
 
     /** The path length: the sum of straight segments between consecutive points. */
     public static double pathLength(List<Point> p) {

@@ -16,8 +16,7 @@ import java.util.Map;
 public final class DifficultyProfile {
     private static final double STEADY_CV = 0.15;
 
-    private DifficultyProfile() {
-    }
+    private DifficultyProfile() {}
 
     /** The class of one route's move difficulties. */
     public static ProfileClass classify(List<Integer> d) {
@@ -47,14 +46,16 @@ public final class DifficultyProfile {
 
     /** Entropy of the four class shares over ln 4, or null when no route is classified. */
     public static Double splitEntropy(Map<ProfileClass, Long> counts) {
-        long n = counts.entrySet().stream().filter(e -> e.getKey() != ProfileClass.UNCLASSIFIED)
-                .mapToLong(Map.Entry::getValue).sum();
+        long n = counts.entrySet().stream()
+                .filter(e -> e.getKey() != ProfileClass.UNCLASSIFIED)
+                .mapToLong(Map.Entry::getValue)
+                .sum();
         if (n == 0) {
             return null;
         }
         double h = 0;
-        for (ProfileClass c : List.of(ProfileClass.STEADY, ProfileClass.SUSTAINED, ProfileClass.SINGLE_CRUX,
-                ProfileClass.MULTI_CRUX)) {
+        for (ProfileClass c : List.of(
+                ProfileClass.STEADY, ProfileClass.SUSTAINED, ProfileClass.SINGLE_CRUX, ProfileClass.MULTI_CRUX)) {
             long k = counts.getOrDefault(c, 0L);
             if (k > 0) {
                 double p = k / (double) n;

@@ -18,8 +18,7 @@ public final class Repetition {
     /** The default near-repeat threshold (docs/spec/metrics.md). */
     public static final BigDecimal DEFAULT_THRESHOLD = new BigDecimal("0.6");
 
-    private Repetition() {
-    }
+    private Repetition() {}
 
     /**
      * The repetition figures.
@@ -75,7 +74,9 @@ public final class Repetition {
         if (placements.isEmpty()) {
             return null;
         }
-        long reused = placements.stream().filter(p -> p.stream().anyMatch(previous::contains)).count();
+        long reused = placements.stream()
+                .filter(p -> p.stream().anyMatch(previous::contains))
+                .count();
         return reused / (double) placements.size();
     }
 }

@@ -11,8 +11,8 @@ import java.util.List;
  * @param novelty 1 − mean of each comparable route's highest Jaccard against the window [{@code novelty}]
  * @param notEnoughDetail reset routes with too little detail to compare [{@code not_enough_detail}]
  */
-public record RepetitionFigures(List<Pair> nearRepeats, List<Pair> internalRepeats, Double novelty,
-        List<String> notEnoughDetail) {
+public record RepetitionFigures(
+        List<Pair> nearRepeats, List<Pair> internalRepeats, Double novelty, List<String> notEnoughDetail) {
 
     /**
      * A near-repeat.
@@ -21,6 +21,5 @@ public record RepetitionFigures(List<Pair> nearRepeats, List<Pair> internalRepea
      * @param other the route it repeats
      * @param similarity the exact similarity, with the shared features
      */
-    public record Pair(String route, String other, Similarity similarity) {
-    }
+    public record Pair(String route, String other, Similarity similarity) {}
 }

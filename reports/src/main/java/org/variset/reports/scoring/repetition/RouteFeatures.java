@@ -27,18 +27,17 @@ public record RouteFeatures(String id, String group, Set<String> features, int d
      * @param type the hold type
      * @param sectors the grip sectors 0..7 of its directions (docs/spec/metrics.md section 1); empty for none
      */
-    public record HandHold(String type, List<Integer> sectors) {
-    }
+    public record HandHold(String type, List<Integer> sectors) {}
 
     /** The features of a route in the default group. */
-    public static RouteFeatures of(String id, List<HandHold> handHolds, List<String> moves, String angleBand,
-            String gradeBand) {
+    public static RouteFeatures of(
+            String id, List<HandHold> handHolds, List<String> moves, String angleBand, String gradeBand) {
         return of(id, "", handHolds, moves, angleBand, gradeBand);
     }
 
     /** The features of a route. */
-    public static RouteFeatures of(String id, String group, List<HandHold> handHolds, List<String> moves,
-            String angleBand, String gradeBand) {
+    public static RouteFeatures of(
+            String id, String group, List<HandHold> handHolds, List<String> moves, String angleBand, String gradeBand) {
         Set<String> f = new LinkedHashSet<>();
         for (HandHold h : handHolds) {
             if (h.sectors().isEmpty()) {
@@ -50,7 +49,9 @@ public record RouteFeatures(String id, String group, Set<String> features, int d
         for (int i = 1; i < moves.size(); i++) {
             f.add("pair:" + moves.get(i - 1) + ">" + moves.get(i));
         }
-        int detail = (int) f.stream().filter(x -> x.startsWith("hold:") || x.startsWith("move:")).count();
+        int detail = (int) f.stream()
+                .filter(x -> x.startsWith("hold:") || x.startsWith("move:"))
+                .count();
         if (angleBand != null) {
             f.add("angle:" + angleBand);
         }

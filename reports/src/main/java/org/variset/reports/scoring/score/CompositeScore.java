@@ -16,8 +16,8 @@ import java.util.Map;
  * @param weightsUsed the rescaled weights of the parts used
  * @param dropped the parts left out because they were null
  */
-public record CompositeScore(Double score, Map<String, Double> parts, Map<String, Double> weightsUsed,
-        List<String> dropped) {
+public record CompositeScore(
+        Double score, Map<String, Double> parts, Map<String, Double> weightsUsed, List<String> dropped) {
 
     /** The default weights, in the spec's order. */
     public static Map<String, Double> defaultWeights() {

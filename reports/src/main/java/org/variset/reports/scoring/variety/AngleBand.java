@@ -5,8 +5,7 @@ package org.variset.reports.scoring.variety;
  * in the last band [75, 90]. Slabs (negative angles, down to -45) fall in negative bands: -10 is in band -1.
  */
 public final class AngleBand {
-    private AngleBand() {
-    }
+    private AngleBand() {}
 
     /**
      * The band index of an angle.

@@ -26,8 +26,7 @@ import java.util.Map;
  * </ul>
  */
 public final class CategoryVariety {
-    private CategoryVariety() {
-    }
+    private CategoryVariety() {}
 
     /**
      * The variety of counts.
@@ -75,7 +74,7 @@ public final class CategoryVariety {
         } else {
             coverage = n1 / Math.min(vocabularySize, n);
         }
-        return new VarietyFigures(n, missing, s, h, pielou, 1 - sumSq, n1, 1 / sumSq, coverage,
-                new LinkedHashMap<>(counts), why);
+        return new VarietyFigures(
+                n, missing, s, h, pielou, 1 - sumSq, n1, 1 / sumSq, coverage, new LinkedHashMap<>(counts), why);
     }
 }

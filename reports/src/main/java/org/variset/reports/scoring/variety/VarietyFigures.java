@@ -18,6 +18,15 @@ import java.util.Map;
  * @param counts the counts per category
  * @param undefined for each null figure, its key and why
  */
-public record VarietyFigures(long n, long missing, int richness, Double shannon, Double pielou, Double giniSimpson,
-        Double hillN1, Double hillN2, Double coverage, Map<String, Long> counts, Map<String, String> undefined) {
-}
+public record VarietyFigures(
+        long n,
+        long missing,
+        int richness,
+        Double shannon,
+        Double pielou,
+        Double giniSimpson,
+        Double hillN1,
+        Double hillN2,
+        Double coverage,
+        Map<String, Long> counts,
+        Map<String, String> undefined) {}

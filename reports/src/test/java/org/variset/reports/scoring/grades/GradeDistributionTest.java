@@ -20,12 +20,17 @@ import org.variset.archive.settings.TargetPyramid;
 
 class GradeDistributionTest {
     /** Four unit bands A..D centred on 0, 1, 2, 3. */
-    private static final BandSet ABCD = new BandSet(List.of(new Band("A", null, 0.5), new Band("B", 0.5, 1.5),
-            new Band("C", 1.5, 2.5), new Band("D", 2.5, null)));
+    private static final BandSet ABCD = new BandSet(List.of(
+            new Band("A", null, 0.5), new Band("B", 0.5, 1.5), new Band("C", 1.5, 2.5), new Band("D", 2.5, null)));
 
     /** Six unit bands 1..6 centred on 1..6. */
-    private static final BandSet SIX = new BandSet(List.of(new Band("1", null, 1.5), new Band("2", 1.5, 2.5),
-            new Band("3", 2.5, 3.5), new Band("4", 3.5, 4.5), new Band("5", 4.5, 5.5), new Band("6", 5.5, null)));
+    private static final BandSet SIX = new BandSet(List.of(
+            new Band("1", null, 1.5),
+            new Band("2", 1.5, 2.5),
+            new Band("3", 2.5, 3.5),
+            new Band("4", 3.5, 4.5),
+            new Band("5", 4.5, 5.5),
+            new Band("6", 5.5, null)));
 
     /** perBand[b] routes of value b (or of value b + offset). */
     private static double[] values(int... perBand) {
@@ -111,9 +116,12 @@ class GradeDistributionTest {
     @Test
     void sumsTheDefaultPyramidToOne() {
         // Outdoor Insider (Fall 2015, p. 15): 1+2+3+4+5+6+5+4+3+1+1 = 35.
-        assertThat(TargetPyramid.defaultBoulder().values().stream().mapToDouble(Double::doubleValue).sum())
+        assertThat(TargetPyramid.defaultBoulder().values().stream()
+                        .mapToDouble(Double::doubleValue)
+                        .sum())
                 .isCloseTo(1.0, within(1e-12));
-        assertThat(BandSet.defaults(Discipline.BOULDER).labels()).containsAll(TargetPyramid.defaultBoulder().keySet());
+        assertThat(BandSet.defaults(Discipline.BOULDER).labels())
+                .containsAll(TargetPyramid.defaultBoulder().keySet());
     }
 
     /** The Wasserstein distance is a metric: the triangle inequality holds for random distributions. */
@@ -148,7 +156,9 @@ class GradeDistributionTest {
     @ParameterizedTest(name = "case {index}")
     @CsvFileSource(resources = "scipy-cases.csv", useHeadersInDisplayName = true)
     void agreesWithScipy(String observed, String target, double emd, double chiSquare, double p) {
-        int[] obs = java.util.Arrays.stream(observed.split(";")).mapToInt(Integer::parseInt).toArray();
+        int[] obs = java.util.Arrays.stream(observed.split(";"))
+                .mapToInt(Integer::parseInt)
+                .toArray();
         String[] t = target.split(";");
         Map<String, Double> shares = new LinkedHashMap<>();
         for (int i = 0; i < t.length; i++) {

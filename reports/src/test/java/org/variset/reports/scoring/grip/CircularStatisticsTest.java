@@ -41,9 +41,11 @@ class CircularStatisticsTest {
          */
         @Test
         void matchesFishersUniformLookingSample() {
-            double[] fisher = {2, 9, 18, 24, 30, 35, 35, 39, 39, 44, 44, 49, 56, 70, 76, 76, 81, 86, 91, 112, 121, 127,
-                133, 134, 138, 147, 152, 157, 166, 171, 177, 187, 206, 210, 211, 215, 238, 246, 269, 270, 285, 292,
-                305, 315, 325, 328, 329, 343, 354, 359};
+            double[] fisher = {
+                2, 9, 18, 24, 30, 35, 35, 39, 39, 44, 44, 49, 56, 70, 76, 76, 81, 86, 91, 112, 121, 127, 133, 134, 138,
+                147, 152, 157, 166, 171, 177, 187, 206, 210, 211, 215, 238, 246, 269, 270, 285, 292, 305, 315, 325, 328,
+                329, 343, 354, 359
+            };
             assertThat(CircularStatistics.of(fisher, 0).rayleighP()).isCloseTo(0.19911, within(5e-6));
         }
     }
@@ -54,8 +56,7 @@ class CircularStatisticsTest {
      */
     @ParameterizedTest(name = "case {index}")
     @CsvFileSource(resources = "scipy-cases.csv", useHeadersInDisplayName = true)
-    void agreesWithScipy(String angles, double r, double mean, double variance, double sd, double p,
-            double entropy) {
+    void agreesWithScipy(String angles, double r, double mean, double variance, double sd, double p, double entropy) {
         GripStatistics g = CircularStatistics.of(parse(angles), 0);
         assertThat(g.resultantLength()).isCloseTo(r, within(1e-9));
         assertThat(circularDistance(g.meanDirectionDeg(), mean)).isLessThan(1e-7);
@@ -120,7 +121,9 @@ class CircularStatisticsTest {
     @MethodSource("seeds")
     void isInvariantUnderRotationByWholeSectorsAndUnderReordering(long seed) {
         Random rnd = new Random(seed);
-        double[] a = IntStream.range(0, 2 + rnd.nextInt(40)).mapToDouble(i -> rnd.nextInt(3600) / 10.0).toArray();
+        double[] a = IntStream.range(0, 2 + rnd.nextInt(40))
+                .mapToDouble(i -> rnd.nextInt(3600) / 10.0)
+                .toArray();
         int k = 1 + rnd.nextInt(7);
         double[] rotated = Arrays.stream(a).map(d -> (d + 45.0 * k) % 360.0).toArray();
         GripStatistics g = CircularStatistics.of(a, 0);
@@ -130,7 +133,9 @@ class CircularStatisticsTest {
         }
         assertThat(h.sectorEntropy()).isEqualTo(g.sectorEntropy());
         assertThat(h.resultantLength()).isCloseTo(g.resultantLength(), within(1e-12));
-        double[] reversed = IntStream.range(0, a.length).mapToDouble(i -> a[a.length - 1 - i]).toArray();
+        double[] reversed = IntStream.range(0, a.length)
+                .mapToDouble(i -> a[a.length - 1 - i])
+                .toArray();
         GripStatistics r = CircularStatistics.of(reversed, 0);
         assertThat(r.resultantLength()).isCloseTo(g.resultantLength(), within(1e-12));
         assertThat(r.sectors()).isEqualTo(g.sectors());

@@ -17,23 +17,42 @@ class DifficultyProfileTest {
      * crux; 1;5;5;5 mean 4, sd 1.732, no move ≥ 5.732: sustained; 3;5 unclassified.
      */
     @ParameterizedTest(name = "{0} is {1}")
-    @CsvSource({"5;5;5, STEADY", "3;4;6;3, SINGLE_CRUX", "2;3;9, SINGLE_CRUX", "8;2;8;2, MULTI_CRUX",
-        "4;5;6, SINGLE_CRUX", "1;5;5;5, SUSTAINED", "3;5, UNCLASSIFIED", "10;9;10;9, STEADY"})
+    @CsvSource({
+        "5;5;5, STEADY",
+        "3;4;6;3, SINGLE_CRUX",
+        "2;3;9, SINGLE_CRUX",
+        "8;2;8;2, MULTI_CRUX",
+        "4;5;6, SINGLE_CRUX",
+        "1;5;5;5, SUSTAINED",
+        "3;5, UNCLASSIFIED",
+        "10;9;10;9, STEADY"
+    })
     void classifiesAsTheSpecDefines(String d, ProfileClass expected) {
-        List<Integer> values = java.util.Arrays.stream(d.split(";")).map(Integer::parseInt).toList();
+        List<Integer> values =
+                java.util.Arrays.stream(d.split(";")).map(Integer::parseInt).toList();
         assertThat(DifficultyProfile.classify(values)).isEqualTo(expected);
     }
 
     /** ln 4 / ln 4 = 1 for four equal classes; 0 for one class; null with none classified. */
     @Test
     void measuresTheSplitEntropy() {
-        Map<ProfileClass, Long> all = DifficultyProfile.counts(List.of(List.of(5, 5, 5), List.of(3, 4, 6, 3),
-                List.of(8, 2, 8, 2), List.of(2, 6, 3, 6, 2, 6, 2), List.of(1)));
+        Map<ProfileClass, Long> all = DifficultyProfile.counts(List.of(
+                List.of(5, 5, 5), List.of(3, 4, 6, 3), List.of(8, 2, 8, 2), List.of(2, 6, 3, 6, 2, 6, 2), List.of(1)));
         assertThat(all).containsEntry(ProfileClass.UNCLASSIFIED, 1L);
-        assertThat(DifficultyProfile.splitEntropy(DifficultyProfile.counts(List.of(List.of(5, 5, 5),
-                List.of(5, 5, 5))))).isZero();
-        assertThat(DifficultyProfile.splitEntropy(DifficultyProfile.counts(List.of(List.of(1))))).isNull();
-        assertThat(DifficultyProfile.splitEntropy(Map.of(ProfileClass.STEADY, 1L, ProfileClass.SUSTAINED, 1L,
-                ProfileClass.SINGLE_CRUX, 1L, ProfileClass.MULTI_CRUX, 1L))).isCloseTo(1.0, within(1e-12));
+        assertThat(DifficultyProfile.splitEntropy(
+                        DifficultyProfile.counts(List.of(List.of(5, 5, 5), List.of(5, 5, 5)))))
+                .isZero();
+        assertThat(DifficultyProfile.splitEntropy(DifficultyProfile.counts(List.of(List.of(1)))))
+                .isNull();
+        assertThat(DifficultyProfile.splitEntropy(Map.of(
+                        ProfileClass.STEADY,
+                        1L,
+                        ProfileClass.SUSTAINED,
+                        1L,
+                        ProfileClass.SINGLE_CRUX,
+                        1L,
+                        ProfileClass.MULTI_CRUX,
+                        1L)))
+                .isCloseTo(1.0, within(1e-12));
     }
 }

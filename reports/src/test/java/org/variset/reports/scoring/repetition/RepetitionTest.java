@@ -19,10 +19,19 @@ class RepetitionTest {
 
     @Test
     void buildsTheNamespacedFeaturesOfTheSpec() {
-        RouteFeatures f = route("Blue 7", List.of("heel hook", "dyno"), hold("crimp", 0), hold("pinch", 2, 6),
-                hold("volume"));
-        assertThat(f.features()).containsExactlyInAnyOrder("hold:crimp@0", "hold:pinch@90", "hold:pinch@270",
-                "hold:volume@none", "move:heel hook", "move:dyno", "pair:heel hook>dyno", "angle:2", "grade:V3");
+        RouteFeatures f =
+                route("Blue 7", List.of("heel hook", "dyno"), hold("crimp", 0), hold("pinch", 2, 6), hold("volume"));
+        assertThat(f.features())
+                .containsExactlyInAnyOrder(
+                        "hold:crimp@0",
+                        "hold:pinch@90",
+                        "hold:pinch@270",
+                        "hold:volume@none",
+                        "move:heel hook",
+                        "move:dyno",
+                        "pair:heel hook>dyno",
+                        "angle:2",
+                        "grade:V3");
         assertThat(f.detail()).isEqualTo(6);
     }
 
@@ -32,23 +41,58 @@ class RepetitionTest {
      */
     @Test
     void comparesTheThresholdExactly() {
-        RouteFeatures a = RouteFeatures.of("a", List.of(hold("crimp", 0), hold("jug", 0), hold("pinch", 2),
-                hold("sloper", 4)), List.of(), "2", "V3");
-        RouteFeatures b = RouteFeatures.of("b", List.of(hold("crimp", 0), hold("jug", 0), hold("pinch", 2),
-                hold("edge", 4), hold("pocket", 1), hold("macro", 5)), List.of(), "2", "V3");
+        RouteFeatures a = RouteFeatures.of(
+                "a",
+                List.of(hold("crimp", 0), hold("jug", 0), hold("pinch", 2), hold("sloper", 4)),
+                List.of(),
+                "2",
+                "V3");
+        RouteFeatures b = RouteFeatures.of(
+                "b",
+                List.of(
+                        hold("crimp", 0),
+                        hold("jug", 0),
+                        hold("pinch", 2),
+                        hold("edge", 4),
+                        hold("pocket", 1),
+                        hold("macro", 5)),
+                List.of(),
+                "2",
+                "V3");
         Similarity s = Similarity.of(a, b);
         assertThat(s.shared()).isEqualTo(5);
         assertThat(s.union()).isEqualTo(9);
-        RouteFeatures c = RouteFeatures.of("c", List.of(hold("crimp", 0), hold("jug", 0), hold("pinch", 2),
-                hold("sloper", 4), hold("edge", 4), hold("pocket", 1)), List.of(), "2", "V3");
-        RouteFeatures d = RouteFeatures.of("d", List.of(hold("crimp", 0), hold("jug", 0), hold("pinch", 2),
-                hold("sloper", 4), hold("macro", 5), hold("volume", 7)), List.of(), "9", "V9");
+        RouteFeatures c = RouteFeatures.of(
+                "c",
+                List.of(
+                        hold("crimp", 0),
+                        hold("jug", 0),
+                        hold("pinch", 2),
+                        hold("sloper", 4),
+                        hold("edge", 4),
+                        hold("pocket", 1)),
+                List.of(),
+                "2",
+                "V3");
+        RouteFeatures d = RouteFeatures.of(
+                "d",
+                List.of(
+                        hold("crimp", 0),
+                        hold("jug", 0),
+                        hold("pinch", 2),
+                        hold("sloper", 4),
+                        hold("macro", 5),
+                        hold("volume", 7)),
+                List.of(),
+                "9",
+                "V9");
         Similarity cd = Similarity.of(c, d);
         assertThat(cd.shared()).isEqualTo(4);
         assertThat(cd.union()).isEqualTo(12);
         Similarity six = new Similarity(6, 10, Set.of());
         assertThat(six.atLeast(Repetition.DEFAULT_THRESHOLD)).isTrue();
-        assertThat(new Similarity(5, 9, Set.of()).atLeast(Repetition.DEFAULT_THRESHOLD)).isFalse();
+        assertThat(new Similarity(5, 9, Set.of()).atLeast(Repetition.DEFAULT_THRESHOLD))
+                .isFalse();
     }
 
     @Test
@@ -69,17 +113,21 @@ class RepetitionTest {
         RepetitionFigures r = Repetition.of(List.of(again, twin), List.of(earlier), Repetition.DEFAULT_THRESHOLD);
         assertThat(r.nearRepeats()).hasSize(2);
         assertThat(r.nearRepeats().get(0).similarity().sharedFeatures()).contains("pair:heel hook>dyno");
-        assertThat(r.internalRepeats()).singleElement().satisfies(p -> assertThat(p.other()).isEqualTo("Red 2"));
+        assertThat(r.internalRepeats())
+                .singleElement()
+                .satisfies(p -> assertThat(p.other()).isEqualTo("Red 2"));
         assertThat(r.novelty()).isCloseTo(0.0, within(1e-12));
-        assertThat(Repetition.of(List.of(again), List.of(), Repetition.DEFAULT_THRESHOLD).novelty()).isEqualTo(1.0);
+        assertThat(Repetition.of(List.of(again), List.of(), Repetition.DEFAULT_THRESHOLD)
+                        .novelty())
+                .isEqualTo(1.0);
     }
 
     @Test
     void comparesOnlyRoutesOfTheSameGroup() {
-        RouteFeatures boulder = RouteFeatures.of("b", "boulder", List.of(hold("crimp", 0), hold("pinch", 2)),
-                List.of("heel hook", "dyno"), "2", "V3");
-        RouteFeatures rope = RouteFeatures.of("r", "rope", List.of(hold("crimp", 0), hold("pinch", 2)),
-                List.of("heel hook", "dyno"), "2", "V3");
+        RouteFeatures boulder = RouteFeatures.of(
+                "b", "boulder", List.of(hold("crimp", 0), hold("pinch", 2)), List.of("heel hook", "dyno"), "2", "V3");
+        RouteFeatures rope = RouteFeatures.of(
+                "r", "rope", List.of(hold("crimp", 0), hold("pinch", 2)), List.of("heel hook", "dyno"), "2", "V3");
         assertThat(Similarity.of(boulder, rope)).isNull();
         RepetitionFigures r = Repetition.of(List.of(boulder), List.of(rope), Repetition.DEFAULT_THRESHOLD);
         assertThat(r.nearRepeats()).isEmpty();
@@ -88,8 +136,9 @@ class RepetitionTest {
 
     @Test
     void measuresHoldReuse() {
-        assertThat(Repetition.holdReuseRate(List.of(Set.of("J12@0"), Set.of("P7@2", "P7@6"), Set.of()),
-                Set.of("J12@0", "P7@6"))).isCloseTo(2 / 3.0, within(1e-12));
+        assertThat(Repetition.holdReuseRate(
+                        List.of(Set.of("J12@0"), Set.of("P7@2", "P7@6"), Set.of()), Set.of("J12@0", "P7@6")))
+                .isCloseTo(2 / 3.0, within(1e-12));
         assertThat(Repetition.holdReuseRate(List.of(), Set.of())).isNull();
     }
 
@@ -108,7 +157,8 @@ class RepetitionTest {
                 for (int shared = 0; shared <= union; shared++) {
                     boolean expected = shared * scale >= numerator * union;
                     assertThat(new Similarity(shared, union, Set.of()).atLeast(threshold))
-                            .as("%d/%d >= %s", shared, union, t).isEqualTo(expected);
+                            .as("%d/%d >= %s", shared, union, t)
+                            .isEqualTo(expected);
                 }
             }
         }

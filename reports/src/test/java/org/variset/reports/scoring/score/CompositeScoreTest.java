@@ -11,8 +11,8 @@ class CompositeScoreTest {
     /** Worked by hand: 100 × (0.25·0.8 + 0.2·0.5 + 0.2·0.6 + 0.15·e^-0.5 + 0.2·0.9). */
     @Test
     void weighsAllFivePartsWithTheDefaults() {
-        Map<String, Double> parts = Map.of("grip", 0.8, "holds", 0.5, "moves", 0.6,
-                "grades", CompositeScore.gradesPart(0.5), "novelty", 0.9);
+        Map<String, Double> parts = Map.of(
+                "grip", 0.8, "holds", 0.5, "moves", 0.6, "grades", CompositeScore.gradesPart(0.5), "novelty", 0.9);
         CompositeScore s = CompositeScore.of(parts, CompositeScore.defaultWeights());
         double expected = 100 * (0.25 * 0.8 + 0.2 * 0.5 + 0.2 * 0.6 + 0.15 * Math.exp(-0.5) + 0.2 * 0.9);
         assertThat(s.score()).isCloseTo(expected, within(1e-9));
@@ -27,7 +27,10 @@ class CompositeScoreTest {
         CompositeScore s = CompositeScore.of(parts, CompositeScore.defaultWeights());
         assertThat(s.score()).isCloseTo(100 * (0.25 + 0.2 * 0.5 + 0.2) / 0.85, within(1e-9));
         assertThat(s.dropped()).containsExactly("grades");
-        assertThat(s.weightsUsed().values().stream().mapToDouble(Double::doubleValue).sum()).isCloseTo(1, within(1e-12));
+        assertThat(s.weightsUsed().values().stream()
+                        .mapToDouble(Double::doubleValue)
+                        .sum())
+                .isCloseTo(1, within(1e-12));
     }
 
     @Test

@@ -67,14 +67,17 @@ class CategoryVarietyTest {
     @MethodSource("seeds")
     void keepsHillsOrderingForRandomCounts(long seed) {
         Random r = new Random(seed);
-        long[] c = LongStream.range(0, 1 + r.nextInt(12)).map(i -> r.nextInt(20)).toArray();
+        long[] c =
+                LongStream.range(0, 1 + r.nextInt(12)).map(i -> r.nextInt(20)).toArray();
         VarietyFigures v = CategoryVariety.of(counts(c), 0, 12);
         if (v.n() == 0) {
             return;
         }
         assertThat(v.hillN2()).isLessThanOrEqualTo(v.hillN1() + 1e-12);
         assertThat(v.hillN1()).isLessThanOrEqualTo(v.richness() + 1e-12);
-        long[] reversed = LongStream.range(0, c.length).map(i -> c[c.length - 1 - (int) i]).toArray();
+        long[] reversed = LongStream.range(0, c.length)
+                .map(i -> c[c.length - 1 - (int) i])
+                .toArray();
         assertThat(CategoryVariety.of(counts(reversed), 0, 12).shannon()).isEqualTo(v.shannon());
     }
 
@@ -85,9 +88,11 @@ class CategoryVarietyTest {
      */
     @ParameterizedTest(name = "case {index}")
     @CsvFileSource(resources = "scipy-cases.csv", useHeadersInDisplayName = true)
-    void agreesWithScipy(String counts, int richness, double shannon, double pielou, double giniSimpson, double n1,
-            double n2) {
-        long[] c = java.util.Arrays.stream(counts.split(";")).mapToLong(Long::parseLong).toArray();
+    void agreesWithScipy(
+            String counts, int richness, double shannon, double pielou, double giniSimpson, double n1, double n2) {
+        long[] c = java.util.Arrays.stream(counts.split(";"))
+                .mapToLong(Long::parseLong)
+                .toArray();
         VarietyFigures v = CategoryVariety.of(counts(c), 0, 14);
         assertThat(v.richness()).isEqualTo(richness);
         assertThat(v.shannon()).isCloseTo(shannon, within(1e-12));
