@@ -16,6 +16,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.HoldRole;
 import org.variset.archive.route.Route;
@@ -122,7 +123,11 @@ class ArchiveImportTest {
                     .isInstanceOf(ImportException.class)
                     .hasMessageContaining("grade: V2 (v) -> V3 (v)")
                     .hasMessageContaining("color: red -> blue")
-                    .hasMessageContaining("--update");
+                    .isInstanceOfSatisfying(
+                            ImportException.class,
+                            e -> assertThat(e.problems())
+                                    .extracting(Problem::remedy)
+                                    .containsExactly(Remedy.of(Remedy.Kind.ALLOW_UPDATE)));
             assertThat(route("R1").gradeText()).isEqualTo("V2");
             ImportSummary s = run(ImportOptions.defaults().withUpdate(true), v2);
             assertThat(s.routesChanged()).isEqualTo(1);

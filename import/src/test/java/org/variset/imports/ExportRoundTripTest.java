@@ -14,6 +14,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.store.Archive;
 import org.variset.archive.testing.TestArchives;
 import org.variset.imports.export.ArchiveExporter;
@@ -127,7 +129,9 @@ class ExportRoundTripTest {
             ArchiveExporter.Selection all = new ArchiveExporter.Selection("Harbour Hall", null, null, null);
             e.export(all, ExportFormat.XLSX, dir.resolve("a.xlsx"), false);
             assertThatThrownBy(() -> e.export(all, ExportFormat.XLSX, dir.resolve("a.xlsx"), false))
-                    .hasMessageContaining("--force");
+                    .isInstanceOfSatisfying(
+                            InputException.class,
+                            x -> assertThat(x.remedy().kind()).isEqualTo(Remedy.Kind.REPLACE_EXISTING));
             e.export(all, ExportFormat.XLSX, dir.resolve("a.xlsx"), true);
             assertThat(dir.toFile().list()).noneMatch(n -> n.endsWith(".part"));
         }

@@ -7,7 +7,7 @@ import java.sql.SQLException;
 import java.util.ArrayDeque;
 import java.util.HashMap;
 import java.util.Map;
-import org.variset.archive.store.ChangeLog;
+import org.variset.archive.changelog.ChangeLog;
 
 /**
  * Ids from the archive's sequences, handed out as Hibernate's pooled optimizer hands them out (every sequence steps

@@ -3,6 +3,7 @@ package org.variset.archive.change;
 import java.util.List;
 import org.hibernate.Session;
 import org.variset.archive.gym.Gym;
+import org.variset.archive.gym.Unknown;
 import org.variset.archive.gym.Wall;
 import org.variset.archive.store.ArchiveQueries;
 
@@ -29,14 +30,9 @@ public final class GymLookup {
             if (gyms.size() == 1) {
                 return gyms.get(0);
             }
-            throw new IllegalArgumentException(
-                    gyms.isEmpty()
-                            ? "the archive holds no gym yet (import a file first)"
-                            : "name the gym with --gym (the archive holds " + names(gyms) + ")");
+            throw Unknown.unnamedGym(names(gyms));
         }
-        return q.gym(name)
-                .orElseThrow(() -> new IllegalArgumentException("no gym named '" + name + "' (the archive holds "
-                        + (gyms.isEmpty() ? "none" : names(gyms)) + ")"));
+        return q.gym(name).orElseThrow(() -> Unknown.gym(name, names(gyms)));
     }
 
     /**
@@ -46,14 +42,11 @@ public final class GymLookup {
      */
     public Wall wall(Gym gym, String name) {
         return q.wall(gym, name)
-                .orElseThrow(() -> new IllegalArgumentException("no wall named '" + name + "' in "
-                        + gym.name() + " (walls: "
-                        + String.join(
-                                ", ", q.walls(gym).stream().map(Wall::name).toList())
-                        + ")"));
+                .orElseThrow(() -> Unknown.wall(
+                        gym.name(), name, q.walls(gym).stream().map(Wall::name).toList()));
     }
 
-    private static String names(List<Gym> gyms) {
-        return String.join(", ", gyms.stream().map(Gym::name).toList());
+    private static List<String> names(List<Gym> gyms) {
+        return gyms.stream().map(Gym::name).toList();
     }
 }

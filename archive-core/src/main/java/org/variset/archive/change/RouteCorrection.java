@@ -5,11 +5,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import org.hibernate.Session;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.grade.GradeReader;
 import org.variset.archive.grade.GradeScale;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
-import org.variset.archive.store.ChangeLog;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 

@@ -2,11 +2,12 @@ package org.variset.archive.change;
 
 import java.util.List;
 import org.hibernate.Session;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.gym.Gym;
+import org.variset.archive.gym.Unknown;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.store.ArchiveQueries;
-import org.variset.archive.store.ChangeLog;
 
 /**
  * Takes back a mistaken import: the routes of a reset, or a given list of routes, with their holds. A reset left
@@ -32,9 +33,7 @@ public final class RouteRemoval {
      */
     public static List<Route> ofReset(Session s, Gym gym, String label) {
         ArchiveQueries q = new ArchiveQueries(s);
-        Reset reset = q.reset(gym, label)
-                .orElseThrow(() -> new IllegalArgumentException("no reset labelled '" + label + "' in " + gym.name()
-                        + " (see 'variset info' and the reset column of your files)"));
+        Reset reset = q.reset(gym, label).orElseThrow(() -> Unknown.reset(gym.name(), label, List.of()));
         return q.routesOfReset(reset);
     }
 

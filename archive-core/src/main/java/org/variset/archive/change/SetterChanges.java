@@ -3,9 +3,12 @@ package org.variset.archive.change;
 import java.util.ArrayList;
 import java.util.List;
 import org.hibernate.Session;
+import org.variset.archive.changelog.ChangeLog;
+import org.variset.archive.gym.Unknown;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
-import org.variset.archive.store.ChangeLog;
 
 /** Renaming a setter, or merging two names of one person ("K. Ames" and "Kit Ames"), across the archive. */
 public final class SetterChanges {
@@ -19,8 +22,10 @@ public final class SetterChanges {
     public static void rename(Session s, String from, String to) {
         Setter old = find(s, from);
         if (findOrNull(s, to) != null) {
-            throw new IllegalArgumentException("a setter named '" + to.strip() + "' exists already; to make the two "
-                    + "one person, merge them: variset setter merge \"" + from + "\" \"" + to + "\"");
+            throw new InputException(
+                    InputException.Reason.EXISTS,
+                    "a setter named '" + to.strip() + "' exists already",
+                    Remedy.of(Remedy.Kind.MERGE_SETTERS, "from", from.strip(), "into", to.strip()));
         }
         old.rename(to);
         ChangeLog.setter(s, old.id());
@@ -60,10 +65,10 @@ public final class SetterChanges {
     private static Setter find(Session s, String name) {
         Setter x = findOrNull(s, name);
         if (x == null) {
-            List<String> all = s.createSelectionQuery("select name from Setter order by name", String.class)
-                    .getResultList();
-            throw new IllegalArgumentException(
-                    "no setter named '" + name + "' (setters: " + String.join(", ", all) + ")");
+            throw Unknown.setter(
+                    name,
+                    s.createSelectionQuery("select name from Setter order by name", String.class)
+                            .getResultList());
         }
         return x;
     }

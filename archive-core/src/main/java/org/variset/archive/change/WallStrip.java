@@ -4,9 +4,9 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import org.hibernate.Session;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.gym.Wall;
 import org.variset.archive.route.Route;
-import org.variset.archive.store.ChangeLog;
 
 /**
  * Takes a wall's old routes down when it is reset: every route of the wall set before the date and still up

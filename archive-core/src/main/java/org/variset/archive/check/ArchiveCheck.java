@@ -8,12 +8,12 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.read.RouteFilter;
 import org.variset.archive.read.RouteReader;
+import org.variset.archive.schema.SchemaVersion;
 import org.variset.archive.search.SearchIndex;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ChangeLog;
-import org.variset.archive.store.SchemaVersion;
 
 /**
  * Checks an archive. The database: its schema version, that every row of every table reads back (the storage engine

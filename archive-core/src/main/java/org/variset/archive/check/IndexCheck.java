@@ -4,8 +4,8 @@ import java.sql.Connection;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.search.SearchIndex;
-import org.variset.archive.store.ChangeLog;
 
 /** The index's part of a check: sound, in step with the database, one document per route. */
 final class IndexCheck {

@@ -7,6 +7,7 @@ import java.time.LocalDate;
 import java.time.ZoneId;
 import java.util.List;
 import java.util.Optional;
+import org.variset.archive.gym.Unknown;
 import org.variset.archive.gym.WallDiscipline;
 
 /**
@@ -43,19 +44,13 @@ public final class ArchiveCatalog {
             if (gyms.size() == 1) {
                 return gyms.get(0);
             }
-            throw new IllegalArgumentException(
-                    gyms.isEmpty()
-                            ? "the archive holds no gym yet (import a file first)"
-                            : "name the gym with --gym (the archive holds "
-                                    + names(gyms.stream().map(GymRecord::name).toList()) + ")");
+            throw Unknown.unnamedGym(gyms.stream().map(GymRecord::name).toList());
         }
         return gyms.stream()
                 .filter(g -> g.name().equals(name.strip()))
                 .findFirst()
-                .orElseThrow(() -> new IllegalArgumentException("no gym named '" + name + "' (the archive holds "
-                        + (gyms.isEmpty()
-                                ? "none"
-                                : names(gyms.stream().map(GymRecord::name).toList())) + ")"));
+                .orElseThrow(() ->
+                        Unknown.gym(name, gyms.stream().map(GymRecord::name).toList()));
     }
 
     /** The walls of a gym, by name. */
@@ -73,9 +68,8 @@ public final class ArchiveCatalog {
         return walls.stream()
                 .filter(w -> w.name().equals(name.strip()))
                 .findFirst()
-                .orElseThrow(
-                        () -> new IllegalArgumentException("no wall named '" + name + "' in " + gym.name() + " (walls: "
-                                + names(walls.stream().map(WallRecord::name).toList()) + ")"));
+                .orElseThrow(() -> Unknown.wall(
+                        gym.name(), name, walls.stream().map(WallRecord::name).toList()));
     }
 
     /** The resets of a wall, oldest first (index reset_wall_date). */
@@ -115,8 +109,7 @@ public final class ArchiveCatalog {
                             + " ORDER BY reset_on DESC, label FETCH FIRST 5 ROWS ONLY",
                     List.of(gym.id()),
                     rs -> rs.getString(1));
-            throw new IllegalArgumentException("no reset labelled '" + label + "' in " + gym.name()
-                    + (recent.isEmpty() ? " (it has none yet)" : " (latest: " + names(recent) + ")"));
+            throw Unknown.reset(gym.name(), label, recent);
         }
         return found.get(0);
     }
@@ -153,12 +146,7 @@ public final class ArchiveCatalog {
         List<Long> ids = Sql.query(
                 connection, "SELECT id FROM setter WHERE name = ?", List.of(name.strip()), rs -> rs.getLong(1));
         if (ids.isEmpty()) {
-            List<String> all = setterNames();
-            throw new IllegalArgumentException("no setter named '" + name + "'"
-                    + (all.isEmpty()
-                            ? ""
-                            : " (setters: " + names(all.size() > 12 ? all.subList(0, 12) : all)
-                                    + (all.size() > 12 ? ", ..." : "") + ")"));
+            throw Unknown.setter(name, setterNames());
         }
         return ids.get(0);
     }
@@ -203,9 +191,5 @@ public final class ArchiveCatalog {
     private static ResetRecord reset(ResultSet rs) throws SQLException {
         return new ResetRecord(
                 rs.getLong(1), rs.getLong(2), rs.getString(3), rs.getString(4), rs.getObject(5, LocalDate.class));
-    }
-
-    private static String names(List<String> names) {
-        return String.join(", ", names);
     }
 }

@@ -6,7 +6,7 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
-import org.variset.archive.store.ArchiveException;
+import org.variset.archive.problem.ArchiveException;
 
 /** Plain JDBC with positional parameters; a failing statement becomes an archive problem naming the cause. */
 final class Sql {
@@ -45,7 +45,8 @@ final class Sql {
         } catch (SQLException e) {
             throw new ArchiveException(
                     ArchiveException.Problem.DAMAGED,
-                    "Cannot read the archive: " + e.getMessage() + ". Run 'variset check' for details.",
+                    "Cannot read the archive: " + e.getMessage(),
+                    org.variset.archive.problem.Remedy.of(org.variset.archive.problem.Remedy.Kind.CHECK_ARCHIVE),
                     e);
         }
     }

@@ -24,17 +24,17 @@ import org.apache.lucene.store.ByteBuffersDirectory;
 import org.apache.lucene.store.Directory;
 import org.apache.lucene.store.FSDirectory;
 import org.variset.archive.bulk.OverlappedChunks;
+import org.variset.archive.changelog.ChangeLog;
+import org.variset.archive.problem.ArchiveException;
 import org.variset.archive.read.ArchiveCatalog;
 import org.variset.archive.read.GymRecord;
 import org.variset.archive.read.RouteFilter;
 import org.variset.archive.read.RouteReader;
 import org.variset.archive.read.RouteRecord;
+import org.variset.archive.schema.SchemaVersion;
 import org.variset.archive.settings.SettingsReader;
 import org.variset.archive.settings.SettingsTimeline;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveException;
-import org.variset.archive.store.ChangeLog;
-import org.variset.archive.store.SchemaVersion;
 
 /**
  * The Lucene index of an archive's routes, in the folder {@code index} of the archive. It is derived data: each
@@ -295,7 +295,8 @@ public final class SearchIndex implements AutoCloseable {
         } catch (IOException e) {
             throw new ArchiveException(
                     ArchiveException.Problem.DAMAGED,
-                    "Cannot read the search index: " + e.getMessage() + ". Run 'variset reindex' to build it again.",
+                    "Cannot read the search index: " + e.getMessage(),
+                    org.variset.archive.problem.Remedy.of(org.variset.archive.problem.Remedy.Kind.REBUILD_INDEX),
                     e);
         }
     }
@@ -322,7 +323,8 @@ public final class SearchIndex implements AutoCloseable {
         } catch (IOException e) {
             throw new ArchiveException(
                     ArchiveException.Problem.DAMAGED,
-                    "Cannot read the search index: " + e.getMessage() + ". Run 'variset reindex' to build it again.",
+                    "Cannot read the search index: " + e.getMessage(),
+                    org.variset.archive.problem.Remedy.of(org.variset.archive.problem.Remedy.Kind.REBUILD_INDEX),
                     e);
         }
     }
@@ -394,7 +396,8 @@ public final class SearchIndex implements AutoCloseable {
     private static ArchiveException failure(IOException e) {
         return new ArchiveException(
                 ArchiveException.Problem.DAMAGED,
-                "Cannot write the search index: " + e.getMessage() + ". Run 'variset reindex' to build it again.",
+                "Cannot write the search index: " + e.getMessage(),
+                org.variset.archive.problem.Remedy.of(org.variset.archive.problem.Remedy.Kind.REBUILD_INDEX),
                 e);
     }
 

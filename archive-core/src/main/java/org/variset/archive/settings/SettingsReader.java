@@ -7,7 +7,7 @@ import java.sql.SQLException;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
-import org.variset.archive.store.ArchiveException;
+import org.variset.archive.problem.ArchiveException;
 
 /** Reads a gym's settings with plain JDBC: what is in effect on a day, and every change ever made. */
 public final class SettingsReader {

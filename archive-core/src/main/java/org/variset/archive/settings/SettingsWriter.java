@@ -3,12 +3,15 @@ package org.variset.archive.settings;
 import com.fasterxml.jackson.databind.JsonNode;
 import java.time.LocalDate;
 import java.util.List;
+import java.util.Locale;
 import org.hibernate.Session;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.grade.BandSet;
 import org.variset.archive.grade.Discipline;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.gym.GymSetting;
-import org.variset.archive.store.ChangeLog;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 
 /**
  * Records a new setting value from a day on. Earlier values stay, so an audit of an earlier day still uses the
@@ -61,12 +64,18 @@ public final class SettingsWriter {
             case DISCIPLINE_OR_WALL -> discipline || wall;
         };
         if (!fits) {
-            throw new IllegalArgumentException("setting " + key.word() + " applies to "
-                    + switch (key.scope()) {
-                        case GYM -> "the whole gym: leave out --discipline and --wall";
-                        case DISCIPLINE -> "one discipline: give --discipline boulder or --discipline rope";
-                        case DISCIPLINE_OR_WALL -> "one discipline or one wall: give --discipline or --wall";
-                    });
+            throw new InputException(
+                    InputException.Reason.INVALID,
+                    "setting " + key.word() + " applies to "
+                            + switch (key.scope()) {
+                                case GYM -> "the whole gym, not to one discipline or wall";
+                                case DISCIPLINE -> "one discipline (boulder or rope)";
+                                case DISCIPLINE_OR_WALL -> "one discipline or one wall";
+                            },
+                    Remedy.of(
+                            Remedy.Kind.CHOOSE_SCOPE,
+                            "scope",
+                            key.scope().name().toLowerCase(Locale.ROOT)));
         }
     }
 }

@@ -1,10 +1,7 @@
 package org.variset.archive.store;
 
 import java.io.IOException;
-import java.nio.file.FileSystems;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.attribute.PosixFilePermissions;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.util.concurrent.atomic.AtomicInteger;
@@ -15,8 +12,14 @@ import org.h2.jdbcx.JdbcDataSource;
 import org.hibernate.Session;
 import org.hibernate.SessionFactory;
 import org.hibernate.StatelessSession;
-import org.postgresql.ds.PGSimpleDataSource;
-import org.variset.archive.store.ArchiveException.Problem;
+import org.variset.archive.location.ArchiveLocation;
+import org.variset.archive.problem.ArchiveException;
+import org.variset.archive.problem.ArchiveException.Problem;
+import org.variset.archive.problem.Remedy;
+import org.variset.archive.schema.SchemaMigrator;
+import org.variset.archive.schema.SchemaVersion;
+import org.variset.archive.server.ServerAddress;
+import org.variset.archive.server.ServerConnection;
 
 /**
  * An open archive: embedded (an H2 database in a folder, the default) or shared (a PostgreSQL server, see
@@ -29,9 +32,6 @@ import org.variset.archive.store.ArchiveException.Problem;
  */
 public final class Archive implements AutoCloseable {
 
-    /** The database file's base name inside the archive folder ({@code archive.mv.db} on disk). */
-    static final String DB_NAME = "archive";
-
     private static final int H2_DATABASE_IN_USE = 90020;
     private static final AtomicInteger MEMORY_IDS = new AtomicInteger();
 
@@ -41,8 +41,6 @@ public final class Archive implements AutoCloseable {
      * be the same in every Variset ("VARI" in ASCII).
      */
     private static final long WRITER_LOCK = 0x5641_5249L;
-    /** The oldest PostgreSQL a shared archive runs on: {@code pg_current_xact_id()} came in version 13. */
-    static final int MIN_POSTGRESQL = 13;
 
     private final Path dir;
     private final ServerAddress server;
@@ -72,7 +70,7 @@ public final class Archive implements AutoCloseable {
 
     /** True when a folder holds an archive. */
     public static boolean existsAt(Path dir) {
-        return Files.isRegularFile(dir.resolve(DB_NAME + ".mv.db"));
+        return ArchiveFolder.holdsArchive(dir);
     }
 
     /**
@@ -85,7 +83,7 @@ public final class Archive implements AutoCloseable {
             throw new ArchiveException(Problem.EXISTS, "There is already an archive at " + dir + ".");
         }
         try {
-            createPrivateDirectories(dir);
+            ArchiveFolder.createPrivate(dir);
         } catch (IOException e) {
             throw new ArchiveException(
                     Problem.DAMAGED, "Cannot create the archive folder " + dir + ": " + e.getMessage(), e);
@@ -94,23 +92,11 @@ public final class Archive implements AutoCloseable {
         try {
             Archive archive = connect(dir, h2(url(dir, false)));
             archive.lock = lock;
-            restrictToOwner(dir.resolve(DB_NAME + ".mv.db"));
+            ArchiveFolder.restrictToOwner(dir.resolve(ArchiveFolder.DATABASE_FILE));
             return archive;
         } catch (RuntimeException e) {
             lock.close();
             throw e;
-        }
-    }
-
-    /** Archive files are readable by their owner only; where the file system has no POSIX modes, left as is. */
-    static void restrictToOwner(Path file) {
-        try {
-            if (Files.exists(file)
-                    && FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
-                Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-------"));
-            }
-        } catch (IOException e) {
-            throw new ArchiveException(Problem.DAMAGED, "Cannot restrict access to " + file + ": " + e.getMessage(), e);
         }
     }
 
@@ -132,7 +118,9 @@ public final class Archive implements AutoCloseable {
         if (!existsAt(dir)) {
             throw new ArchiveException(
                     Problem.MISSING,
-                    "No archive at " + dir + ". Create one with: variset " + "--archive " + dir + " init");
+                    "No archive at " + dir,
+                    Remedy.of(Remedy.Kind.CREATE_ARCHIVE, "where", dir.toString(), "shared", "false"),
+                    null);
         }
         ArchiveLock lock = ArchiveLock.acquire(dir, wait);
         try {
@@ -170,16 +158,11 @@ public final class Archive implements AutoCloseable {
      *     {@code create} is false), or its schema is newer than this code
      */
     public static Archive openServer(ServerAddress address, Path clientDir, boolean create, java.time.Duration wait) {
-        PGSimpleDataSource ds = new PGSimpleDataSource();
-        ds.setURL(address.jdbcUrl());
-        ds.setUser(address.user());
-        if (address.password() != null) {
-            ds.setPassword(address.password());
-        }
-        Connection probe = probe(address, ds, create);
+        ServerConnection.Opened opened = ServerConnection.open(address, create);
+        Connection probe = opened.connection();
         ArchiveLock clientLock;
         try {
-            createPrivateDirectories(clientDir);
+            ArchiveFolder.createPrivate(clientDir);
             clientLock = ArchiveLock.acquire(
                     clientDir, wait, "This client's search index of " + address.shown() + " (in " + clientDir + ")");
         } catch (IOException e) {
@@ -191,55 +174,13 @@ public final class Archive implements AutoCloseable {
             throw e;
         }
         try {
-            Archive archive = connect(null, address, clientDir.resolve("index"), ds, probe);
+            Archive archive = connect(null, address, clientDir.resolve("index"), opened.dataSource(), probe);
             archive.lock = clientLock;
             return archive;
         } catch (RuntimeException e) {
             clientLock.close();
             throw e;
         }
-    }
-
-    /** A first connection to the server, once it is known to run a PostgreSQL new enough and to hold an archive. */
-    private static Connection probe(ServerAddress address, PGSimpleDataSource ds, boolean create) {
-        Connection probe;
-        try {
-            probe = ds.getConnection();
-        } catch (SQLException e) {
-            String why = String.valueOf(e.getMessage()).replaceAll("\\.+$", "");
-            throw new ArchiveException(
-                    Problem.MISSING,
-                    "Cannot connect to the archive at " + address.shown() + ": "
-                            + why
-                            + ". Check the address, that the server is running, and the user's password (PGPASSWORD "
-                            + "or ~/.pgpass).",
-                    e);
-        }
-        try {
-            int major = probe.getMetaData().getDatabaseMajorVersion();
-            if (major < MIN_POSTGRESQL) {
-                throw new ArchiveException(
-                        Problem.DAMAGED,
-                        "The server at " + address.shown() + " runs PostgreSQL "
-                                + major + "; a shared archive needs PostgreSQL " + MIN_POSTGRESQL
-                                + " or later (its change log "
-                                + "records 64-bit transaction ids, pg_current_xact_id).");
-            }
-            if (!create && SchemaVersion.read(probe).version() == 0) {
-                throw new ArchiveException(
-                        Problem.MISSING,
-                        "The database at " + address.shown() + " holds no "
-                                + "Variset archive. Create one with: variset --db '" + address.shown() + "' init");
-            }
-        } catch (SQLException e) {
-            closeQuietly(probe);
-            throw new ArchiveException(
-                    Problem.DAMAGED, "Cannot read the archive at " + address.shown() + ": " + e.getMessage(), e);
-        } catch (RuntimeException e) {
-            closeQuietly(probe);
-            throw e;
-        }
-        return probe;
     }
 
     private static JdbcDataSource h2(String url) {
@@ -254,7 +195,7 @@ public final class Archive implements AutoCloseable {
      * can come back with part of that transaction (seen in KillDuringImportIT), since H2's store has no redo log.
      */
     private static String url(Path dir, boolean mustExist) {
-        return "jdbc:h2:file:" + dir.toAbsolutePath().resolve(DB_NAME) + ";WRITE_DELAY=0"
+        return "jdbc:h2:file:" + dir.toAbsolutePath().resolve(ArchiveFolder.DB_NAME) + ";WRITE_DELAY=0"
                 + (mustExist ? ";IFEXISTS=TRUE" : "");
     }
 
@@ -295,8 +236,8 @@ public final class Archive implements AutoCloseable {
             }
             throw new ArchiveException(
                     Problem.DAMAGED,
-                    "Cannot read the archive at " + where + ": " + e.getMessage()
-                            + ". Run 'variset check' for details.",
+                    "Cannot read the archive at " + where + ": " + e.getMessage(),
+                    Remedy.of(Remedy.Kind.CHECK_ARCHIVE),
                     e);
         }
     }
@@ -310,15 +251,6 @@ public final class Archive implements AutoCloseable {
                     e);
         }
         return new ArchiveException(Problem.DAMAGED, "Cannot open the archive at " + dir + ": " + e.getMessage(), e);
-    }
-
-    static void createPrivateDirectories(Path dir) throws IOException {
-        if (FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
-            Files.createDirectories(
-                    dir, PosixFilePermissions.asFileAttribute(PosixFilePermissions.fromString("rwx------")));
-        } else {
-            Files.createDirectories(dir);
-        }
     }
 
     /** The archive folder, or null for an archive in memory or on a server. */
@@ -398,10 +330,20 @@ public final class Archive implements AutoCloseable {
         }
     }
 
+    /** The database engine and version, as the driver reports them. */
+    DatabaseEngine engine() {
+        try {
+            return DatabaseEngine.of(keeper);
+        } catch (SQLException e) {
+            throw new ArchiveException(
+                    Problem.DAMAGED, "Cannot read the archive's database version: " + e.getMessage(), e);
+        }
+    }
+
     /** Hibernate's session factory, booted on first call. */
     public synchronized SessionFactory sessionFactory() {
         if (sessionFactory == null) {
-            sessionFactory = OrmBootstrap.build(dataSource, server != null);
+            sessionFactory = OrmBootstrap.build(dataSource, engine());
         }
         return sessionFactory;
     }

@@ -15,6 +15,7 @@ import java.time.Instant;
 import java.time.LocalTime;
 import java.time.ZoneId;
 import java.time.temporal.ChronoUnit;
+import org.variset.archive.problem.ArchiveException;
 
 /**
  * One process at a time works on an archive. The lock is an operating-system lock on {@code variset.lock} in the
@@ -59,7 +60,7 @@ public final class ArchiveLock implements AutoCloseable {
         try {
             FileChannel ch = FileChannel.open(
                     file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
-            Archive.restrictToOwner(file);
+            ArchiveFolder.restrictToOwner(file);
             while (true) {
                 FileLock l;
                 try {

@@ -14,19 +14,19 @@ final class OrmBootstrap {
 
     private OrmBootstrap() {}
 
-    static SessionFactory build(DataSource ds, boolean postgres) {
-        return configuration(ds, "none", postgres).createEntityManagerFactory();
+    static SessionFactory build(DataSource ds, DatabaseEngine engine) {
+        return configuration(ds, "none", engine).createEntityManagerFactory();
     }
 
     /** The configuration, with the schema action to take ({@code none} normally, {@code validate} in tests). */
-    static HibernatePersistenceConfiguration configuration(DataSource ds, String schemaAction, boolean postgres) {
+    static HibernatePersistenceConfiguration configuration(DataSource ds, String schemaAction, DatabaseEngine engine) {
         return new HibernatePersistenceConfiguration("variset")
                 .managedClasses(ArchiveEntities.ALL)
                 .property(JdbcSettings.JAKARTA_NON_JTA_DATASOURCE, ds)
                 .property(JdbcSettings.ALLOW_METADATA_ON_BOOT, "false")
-                .property(JdbcSettings.JAKARTA_HBM2DDL_DB_NAME, postgres ? "PostgreSQL" : "H2")
-                .property(JdbcSettings.JAKARTA_HBM2DDL_DB_MAJOR_VERSION, postgres ? "13" : "2")
-                .property(JdbcSettings.JAKARTA_HBM2DDL_DB_MINOR_VERSION, postgres ? "0" : "5")
+                .property(JdbcSettings.JAKARTA_HBM2DDL_DB_NAME, engine.product())
+                .property(JdbcSettings.JAKARTA_HBM2DDL_DB_MAJOR_VERSION, String.valueOf(engine.major()))
+                .property(JdbcSettings.JAKARTA_HBM2DDL_DB_MINOR_VERSION, String.valueOf(engine.minor()))
                 .property("hibernate.hbm2ddl.auto", schemaAction)
                 .property("jakarta.persistence.validation.mode", "none")
                 .property("hibernate.jdbc.batch_size", "50")
@@ -37,8 +37,8 @@ final class OrmBootstrap {
     }
 
     /** Boots Hibernate and validates the mapping against the schema the migrations built. */
-    static SessionFactory buildValidating(DataSource ds, boolean postgres) {
-        return configuration(ds, "validate", postgres)
+    static SessionFactory buildValidating(DataSource ds, DatabaseEngine engine) {
+        return configuration(ds, "validate", engine)
                 .property(JdbcSettings.ALLOW_METADATA_ON_BOOT, "true")
                 .createEntityManagerFactory();
     }

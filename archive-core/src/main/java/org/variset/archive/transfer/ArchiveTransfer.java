@@ -15,9 +15,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.function.BiConsumer;
+import org.variset.archive.problem.ArchiveException;
+import org.variset.archive.problem.ArchiveException.Problem;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveException;
-import org.variset.archive.store.ArchiveException.Problem;
 
 /**
  * Copies every row of an archive into another, empty, archive of the same schema version (an embedded archive into

@@ -6,11 +6,11 @@ import java.util.List;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.fixture.ResetFixture;
 import org.variset.archive.search.IndexProgress;
 import org.variset.archive.search.SearchIndex;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ChangeLog;
 import org.variset.archive.testing.TestArchives;
 
 class ArchiveCheckTest {

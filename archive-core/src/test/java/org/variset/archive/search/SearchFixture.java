@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.hibernate.Session;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.grade.Discipline;
 import org.variset.archive.grade.GradeReader;
 import org.variset.archive.gym.Gym;
@@ -17,7 +18,6 @@ import org.variset.archive.route.HoldSize;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
-import org.variset.archive.store.ChangeLog;
 
 /**
  * Two invented gyms for search tests. Birchfield (boulders on the Cave, rope routes on the Tower) and Quayside (one

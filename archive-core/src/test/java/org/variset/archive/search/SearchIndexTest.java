@@ -16,12 +16,12 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.read.RouteFilter;
 import org.variset.archive.read.RouteReader;
 import org.variset.archive.read.RouteRecord;
 import org.variset.archive.route.Route;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ChangeLog;
 import org.variset.archive.testing.TestArchives;
 import org.variset.archive.vocabulary.Vocabulary;
 

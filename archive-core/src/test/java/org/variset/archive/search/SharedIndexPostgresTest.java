@@ -10,11 +10,11 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.route.Route;
+import org.variset.archive.server.ServerAddress;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveLock;
-import org.variset.archive.store.ChangeLog;
-import org.variset.archive.store.ServerAddress;
 import org.variset.archive.testing.TestArchives;
 import org.variset.archive.vocabulary.Vocabulary;
 

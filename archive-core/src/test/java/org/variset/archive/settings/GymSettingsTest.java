@@ -14,6 +14,8 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.variset.archive.fixture.ResetFixture;
 import org.variset.archive.grade.Discipline;
 import org.variset.archive.gym.Gym;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.read.ArchiveCatalog;
 import org.variset.archive.read.GymRecord;
 import org.variset.archive.read.WallRecord;
@@ -209,7 +211,11 @@ class GymSettingsTest {
         @Test
         void refuseAValueForTheWrongScope() {
             assertThatThrownBy(() -> set(SettingKey.TARGET, "", "2026-01-01", "VB=1"))
-                    .hasMessageContaining("--discipline");
+                    .hasMessageContaining("one discipline")
+                    .isInstanceOfSatisfying(
+                            InputException.class,
+                            e -> assertThat(e.remedy())
+                                    .isEqualTo(Remedy.of(Remedy.Kind.CHOOSE_SCOPE, "scope", "discipline")));
             assertThatThrownBy(() -> set(SettingKey.LOOKBACK_DAYS, "rope", "2026-01-01", "10"))
                     .hasMessageContaining("whole gym");
         }

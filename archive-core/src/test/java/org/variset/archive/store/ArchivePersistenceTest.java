@@ -20,6 +20,7 @@ import org.variset.archive.route.HoldSize;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
+import org.variset.archive.schema.SchemaVersion;
 import org.variset.archive.testing.TestArchives;
 
 class ArchivePersistenceTest {

@@ -13,6 +13,7 @@ import org.variset.archive.fixture.ResetFixture;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Route;
+import org.variset.archive.schema.SchemaVersion;
 
 /**
  * Opens the archive written by the first schema version, committed under {@code fixtures/archive-v1} and kept

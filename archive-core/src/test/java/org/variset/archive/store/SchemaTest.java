@@ -14,6 +14,9 @@ import java.util.stream.Stream;
 import org.hibernate.SessionFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.variset.archive.problem.ArchiveException;
+import org.variset.archive.problem.Remedy;
+import org.variset.archive.schema.SchemaVersion;
 import org.variset.archive.testing.TestArchives;
 
 class SchemaTest {
@@ -37,7 +40,7 @@ class SchemaTest {
     @Test
     void mapsTheEntitiesOntoTheSchemaTheMigrationsBuild() {
         try (Archive archive = TestArchives.fresh()) {
-            try (SessionFactory sf = OrmBootstrap.buildValidating(archive.dataSource(), archive.shared())) {
+            try (SessionFactory sf = OrmBootstrap.buildValidating(archive.dataSource(), archive.engine())) {
                 assertThat(sf.isOpen()).isTrue();
             }
         }
@@ -77,9 +80,16 @@ class SchemaTest {
     @Test
     void saysHowToCreateAMissingArchive(@TempDir Path tmp) {
         assertThatThrownBy(() -> Archive.open(tmp.resolve("none")))
-                .isInstanceOf(ArchiveException.class)
-                .hasMessageContaining("No archive at")
-                .hasMessageContaining("init");
+                .isInstanceOfSatisfying(
+                        ArchiveException.class,
+                        e -> assertThat(e.remedy())
+                                .isEqualTo(Remedy.of(
+                                        Remedy.Kind.CREATE_ARCHIVE,
+                                        "where",
+                                        tmp.resolve("none").toString(),
+                                        "shared",
+                                        "false")))
+                .hasMessageContaining("No archive at");
         assertThat(Files.exists(tmp.resolve("none"))).isFalse();
     }
 

@@ -14,9 +14,9 @@ import java.util.List;
 import java.util.Properties;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Assumptions;
+import org.variset.archive.server.ServerAddress;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveLock;
-import org.variset.archive.store.ServerAddress;
 
 /**
  * Fresh, empty archives for tests, on the database the run is testing. By default that is H2 in memory; with
@@ -115,7 +115,7 @@ public final class TestArchives {
      * {@code REFERENTIAL_INTEGRITY}, PostgreSQL's {@code session_replication_role} (which needs a superuser).
      */
     public static void withoutForeignKeys(Connection c, String... statements) throws SQLException {
-        boolean pg = org.variset.archive.store.ChangeLog.isShared(c);
+        boolean pg = org.variset.archive.changelog.ChangeLog.isShared(c);
         try (Statement s = c.createStatement()) {
             s.execute(pg ? "SET session_replication_role = replica" : "SET REFERENTIAL_INTEGRITY FALSE");
             try {

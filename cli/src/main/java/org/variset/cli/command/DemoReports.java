@@ -10,17 +10,17 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.variset.archive.file.AtomicFile;
 import org.variset.archive.read.ArchiveCatalog;
 import org.variset.archive.read.GymRecord;
 import org.variset.archive.read.WallRecord;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.AtomicFile;
 import org.variset.cli.internal.Json;
+import org.variset.cli.render.AuditText;
 import org.variset.reports.audit.Audit;
 import org.variset.reports.audit.AuditJson;
 import org.variset.reports.audit.AuditTarget;
 import org.variset.reports.audit.Auditor;
-import org.variset.reports.audit.Finding;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.pdf.AuditPdf;
 import org.variset.reports.pdf.PdfOptions;
@@ -139,7 +139,7 @@ final class DemoReports {
 
     private void line(String head, Audit a) {
         out.println(head + "  "
-                + a.findings().stream().findFirst().map(Finding::text).orElse("nothing stands out"));
+                + a.findings().stream().findFirst().map(AuditText::finding).orElse("nothing stands out"));
     }
 
     private void json(String name, Object tree) throws IOException {

@@ -8,7 +8,6 @@ import org.variset.cli.ExitCode;
 import org.variset.cli.internal.ConsoleProgress;
 import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.internal.Json;
-import org.variset.imports.ImportException;
 import org.variset.imports.load.ArchiveImporter;
 import org.variset.imports.load.ImportOptions;
 import org.variset.imports.load.ImportSummary;
@@ -66,9 +65,6 @@ final class ImportCommand extends VarisetSubcommand {
                 IndexUpkeep.afterWrite(archive, err(), progress.indexing());
                 progress.finished("updating the search index", System.nanoTime() - start);
             }
-        } catch (ImportException e) {
-            err().println("variset import: " + e.getMessage());
-            return ExitCode.BAD_INPUT;
         }
         if (format.json()) {
             out().println(Json.write(json(s)));

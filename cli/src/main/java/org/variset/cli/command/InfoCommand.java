@@ -1,11 +1,12 @@
 package org.variset.cli.command;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.variset.archive.location.ArchiveLocation;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveLocation;
 import org.variset.archive.store.ArchiveStats;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.Json;
+import org.variset.cli.render.CliWords;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
@@ -42,7 +43,7 @@ final class InfoCommand extends VarisetSubcommand {
             out().println(Json.write(o));
             return ExitCode.OK;
         }
-        out().printf("Archive   %s (from %s)%n", where.shown(), where.source());
+        out().printf("Archive   %s (from %s)%n", where.shown(), CliWords.origin(where));
         if (where.shared()) {
             out().printf("Index     %s (this client's own)%n", where.indexDir());
         }

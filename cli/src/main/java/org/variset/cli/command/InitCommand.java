@@ -1,10 +1,11 @@
 package org.variset.cli.command;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.variset.archive.location.ArchiveLocation;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveLocation;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.Json;
+import org.variset.cli.render.CliWords;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
@@ -49,7 +50,7 @@ final class InitCommand extends VarisetSubcommand {
                     + "); nothing changed.");
         } else {
             out().println("Created an empty archive at " + where.shown() + " (schema version " + version + ", "
-                    + "location from " + where.source() + ").");
+                    + "location from " + CliWords.origin(where) + ").");
         }
         return ExitCode.OK;
     }

@@ -3,12 +3,13 @@ package org.variset.cli.command;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
+import org.variset.archive.location.ArchiveLocation;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveLocation;
 import org.variset.archive.store.ArchiveLock;
 import org.variset.archive.transfer.ArchiveTransfer;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.Json;
+import org.variset.cli.render.CliWords;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
@@ -44,7 +45,8 @@ final class MigrateToCommand extends VarisetSubcommand {
         ArchiveLocation source = root().location();
         if (source.shared()) {
             throw new IllegalArgumentException("migrate-to copies an embedded archive, and this run names the shared "
-                    + "archive " + source.shown() + " (from " + source.source() + "); name the embedded one with "
+                    + "archive " + source.shown() + " (from " + CliWords.origin(source)
+                    + "); name the embedded one with "
                     + "--archive DIR");
         }
         ArchiveLocation target = ArchiveLocation.resolve(

@@ -4,7 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.Set;
-import org.variset.archive.store.AtomicFile;
+import org.variset.archive.file.AtomicFile;
 import org.variset.reports.pdf.PdfOptions;
 import picocli.CommandLine.Option;
 

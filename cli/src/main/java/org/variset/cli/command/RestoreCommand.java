@@ -2,7 +2,7 @@ package org.variset.cli.command;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import java.nio.file.Path;
-import org.variset.archive.store.ArchiveRestore;
+import org.variset.archive.backup.ArchiveRestore;
 import org.variset.cli.ExitCode;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;

@@ -2,7 +2,7 @@ package org.variset.cli.command;
 
 import java.nio.file.Path;
 import java.util.List;
-import org.variset.archive.store.ArchiveLocation;
+import org.variset.archive.location.ArchiveLocation;
 import org.variset.cli.ExitCode;
 import org.variset.cli.VarisetCli;
 import picocli.CommandLine;

@@ -2,11 +2,14 @@ package org.variset.cli.command;
 
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
+import org.variset.archive.location.ArchiveLocation;
+import org.variset.archive.problem.ArchiveException;
+import org.variset.archive.problem.InputException;
 import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveException;
-import org.variset.archive.store.ArchiveLocation;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.Logging;
+import org.variset.cli.render.CliWords;
+import org.variset.imports.ImportException;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
@@ -58,7 +61,11 @@ abstract class VarisetSubcommand implements Callable<Integer> {
         } catch (ParameterException e) {
             throw e; // a usage error found while running: picocli prints it with the usage hint (exit 2)
         } catch (ArchiveException e) {
-            return fail(ExitCode.ARCHIVE, e.getMessage(), e);
+            return fail(ExitCode.ARCHIVE, CliWords.withRemedy(e.getMessage(), e.remedy()), e);
+        } catch (ImportException e) {
+            return fail(ExitCode.BAD_INPUT, CliWords.problems(e), e);
+        } catch (InputException e) {
+            return fail(ExitCode.BAD_INPUT, CliWords.withRemedy(e.getMessage(), e.remedy()), e);
         } catch (IllegalArgumentException e) {
             return fail(ExitCode.BAD_INPUT, e.getMessage(), e);
         } catch (RuntimeException e) {

@@ -15,6 +15,8 @@ import java.util.Set;
 import org.hibernate.Session;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.gym.Wall;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
@@ -74,7 +76,10 @@ public final class ArchiveExporter {
                 : List.of(out);
         for (Path t : targets) {
             if (Files.exists(t) && !force) {
-                throw new IllegalArgumentException(t + " exists; give --force to replace it");
+                throw new InputException(
+                        InputException.Reason.EXISTS,
+                        t + " exists already",
+                        Remedy.of(Remedy.Kind.REPLACE_EXISTING, "file", t.toString()));
             }
         }
         try {

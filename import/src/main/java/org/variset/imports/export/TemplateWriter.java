@@ -15,6 +15,8 @@ import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.ss.util.CellRangeAddressList;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 import org.variset.imports.table.TableKind;
@@ -76,7 +78,10 @@ public final class TemplateWriter {
         }
         for (Path f : files) {
             if (Files.exists(f) && !force) {
-                throw new IllegalArgumentException(f + " exists; give --force to replace it");
+                throw new InputException(
+                        InputException.Reason.EXISTS,
+                        f + " exists already",
+                        Remedy.of(Remedy.Kind.REPLACE_EXISTING, "file", f.toString()));
             }
         }
         Files.createDirectories(dir);

@@ -9,10 +9,12 @@ import java.util.Optional;
 import java.util.Set;
 import org.hibernate.Session;
 import org.variset.archive.gym.Wall;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.read.HoldRecord;
 import org.variset.archive.read.RouteRecord;
 import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.store.Archive;
+import org.variset.imports.Problem;
 import org.variset.imports.row.RouteKey;
 import org.variset.imports.row.RouteRow;
 import org.variset.imports.row.RowParser;
@@ -111,11 +113,12 @@ final class ArchiveComparison {
         plan.changes.add(key + " (" + file + ":" + line + "): " + String.join("; ", diff));
         if (!plan.options.update()) {
             plan.refused.add(key);
-            plan.problems.add(
+            plan.problems.add(new Problem(
                     file,
                     line,
                     "route",
-                    "changes the archived " + key + ": " + String.join("; ", diff) + " (give --update to replace it)");
+                    "changes the archived " + key + ": " + String.join("; ", diff),
+                    Remedy.of(Remedy.Kind.ALLOW_UPDATE)));
         }
     }
 
@@ -170,11 +173,12 @@ final class ArchiveComparison {
         plan.changedWalls.add(key);
         plan.changes.add("wall " + w.wall() + " (" + w.file() + ":" + w.line() + "): " + before + " -> " + after);
         if (!plan.options.update()) {
-            plan.problems.add(
+            plan.problems.add(new Problem(
                     w.file(),
                     w.line(),
                     "wall",
-                    "changes the archived wall " + w.wall() + " (give --update to replace it)");
+                    "changes the archived wall " + w.wall(),
+                    Remedy.of(Remedy.Kind.ALLOW_UPDATE)));
         }
     }
 }

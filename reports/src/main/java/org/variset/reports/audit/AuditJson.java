@@ -4,8 +4,10 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.variset.archive.grade.Discipline;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.read.RouteRecord;
 import org.variset.reports.figures.FiguresJson;
 import org.variset.reports.scoring.repetition.RepetitionFigures;
@@ -37,7 +39,14 @@ public final class AuditJson {
         set(o, a.audited());
         context(o.putObject("context"), a);
         ArrayNode findings = o.putArray("findings");
-        a.findings().forEach(f -> findings.addObject().put("kind", f.kind()).put("text", f.text()));
+        for (Finding f : a.findings()) {
+            ObjectNode x = findings.addObject().put("kind", f.kind()).put("text", f.text());
+            if (f.remedy().kind() != Remedy.Kind.NONE) {
+                ObjectNode r = x.putObject("remedy")
+                        .put("kind", f.remedy().kind().name().toLowerCase(Locale.ROOT));
+                f.remedy().facts().forEach(r::put);
+            }
+        }
         if (a.previous() != null) {
             set(o.putObject("previous"), a.previous());
         }

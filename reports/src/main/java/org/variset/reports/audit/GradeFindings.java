@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.variset.archive.grade.Discipline;
+import org.variset.archive.problem.Remedy;
 import org.variset.reports.figures.FeatureText;
 import org.variset.reports.figures.GradeGaps;
 import org.variset.reports.figures.SetFigures;
@@ -38,17 +39,14 @@ final class GradeFindings {
             }
             GradeFigures g = e.getValue();
             String whose = String.format(where, d == Discipline.BOULDER ? "boulders" : "rope routes");
+            Remedy setTarget = Remedy.of(Remedy.Kind.SET_TARGET, "discipline", d.word());
             if (g.target() == null) {
-                out.add(new Finding(
-                        "no_target",
-                        2,
-                        "No grade target for " + d.word() + " routes yet: set one with "
-                                + "'variset settings set target ... --discipline " + d.word() + "'."));
+                out.add(new Finding("no_target", 2, "No grade target for " + d.word() + " routes yet.", setTarget));
                 continue;
             }
-            String example = audit.settings().targetIsDefault(d)
-                    ? " (against the example pyramid; set the gym's " + "own with 'variset settings set target')"
-                    : "";
+            boolean isExample = audit.settings().targetIsDefault(d);
+            String example = isExample ? " (against the example pyramid)" : "";
+            Remedy remedy = isExample ? setTarget : Remedy.NONE;
             long inside = GradeGaps.routesInTarget(g);
             List<String> gaps = GradeGaps.notable(g);
             if (!gaps.isEmpty()) {
@@ -59,7 +57,8 @@ final class GradeFindings {
                         weight + gaps.size() * 0.1,
                         "No " + FeatureText.list(gaps, 5).replace(" and ", " or ") + " among " + whose
                                 + ", where the target expects "
-                                + FeatureText.list(wanted, 5) + example + "."));
+                                + FeatureText.list(wanted, 5) + example + ".",
+                        remedy));
             }
             if (g.emdToTarget() != null && g.emdToTarget() >= FAR) {
                 out.add(new Finding(
@@ -68,7 +67,8 @@ final class GradeFindings {
                         capitalised(whose)
                                 + " sit on average " + FigureFormat.of("emd_to_target", g.emdToTarget())
                                 + " bands from the "
-                                + "target" + skew(g) + (gaps.isEmpty() ? example : "") + "."));
+                                + "target" + skew(g) + (gaps.isEmpty() ? example : "") + ".",
+                        gaps.isEmpty() ? remedy : Remedy.NONE));
             }
         }
     }

@@ -7,8 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.variset.archive.grade.Discipline;
+import org.variset.archive.problem.Remedy;
 import org.variset.reports.audit.Audit;
-import org.variset.reports.audit.Finding;
 import org.variset.reports.audit.Headline;
 import org.variset.reports.audit.SetResult;
 import org.variset.reports.audit.Subject;
@@ -112,7 +112,10 @@ public final class AuditPdf {
             doc.bullets(changes());
         }
         doc.heading("What stands out", false);
-        doc.bullets(a.findings().stream().limit(10).map(Finding::text).toList());
+        doc.bullets(a.findings().stream()
+                .limit(10)
+                .map(f -> DocumentWords.withRemedy(f.text(), f.remedy()))
+                .toList());
         doc.safety();
     }
 
@@ -236,8 +239,9 @@ public final class AuditPdf {
                 }
             });
             doc.chart(Charts.bars(doc.fonts(), "routes", h, false), doc.width() * 0.7f, 110);
-            doc.paragraph("No target for " + d.word() + " routes: set one with 'variset settings set target ... "
-                    + "--discipline " + d.word() + "'.");
+            doc.paragraph(DocumentWords.withRemedy(
+                    "No target for " + d.word() + " routes.",
+                    Remedy.of(Remedy.Kind.SET_TARGET, "discipline", d.word())));
             return;
         }
         long inside = g.target().keySet().stream()
@@ -259,8 +263,9 @@ public final class AuditPdf {
                 + (g.gaps().isEmpty() ? "" : "; no route in " + String.join(", ", g.gaps()))
                 + (g.outsideTarget() > 0 ? "; " + g.outsideTarget() + " routes outside the target's bands" : "") + "."
                 + (example
-                        ? " The target is an example pyramid (common practice), not the gym's own: a heuristic "
-                                + "to replace with 'variset settings set target'."
+                        ? " The target is an example pyramid (common practice), not the gym's own: a heuristic to "
+                                + "replace: "
+                                + DocumentWords.remedy(Remedy.of(Remedy.Kind.SET_TARGET, "discipline", d.word())) + "."
                         : ""));
     }
 

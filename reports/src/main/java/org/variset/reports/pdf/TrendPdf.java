@@ -161,7 +161,7 @@ public final class TrendPdf {
                         FigureFormat.of("jaccard", r.pair().similarity().jaccard()))));
         doc.table(List.of("route", "repeats", "Jaccard"), rows, new float[] {3, 3, 1});
         if (t.repeats().size() > 12) {
-            doc.paragraph((t.repeats().size() - 12) + " more in 'variset trend --format json'.");
+            doc.paragraph((t.repeats().size() - 12) + " more in the trend's JSON form.");
         }
     }
 

@@ -4,6 +4,7 @@ import java.time.LocalDate;
 import java.util.List;
 import java.util.Map;
 import org.variset.archive.grade.Discipline;
+import org.variset.archive.problem.Remedy;
 
 /**
  * What the next reset of a wall could bring.
@@ -30,6 +31,11 @@ public record ResetPlan(
         double margin,
         Map<String, Long> shapesToRest,
         Map<String, String> undefined) {
+
+    /** What the gym can do for a fuller plan: set a grade target when there is none for the discipline. */
+    public Remedy remedy() {
+        return grades == null ? Remedy.of(Remedy.Kind.SET_TARGET, "discipline", discipline.word()) : Remedy.NONE;
+    }
 
     /**
      * The grade slots proposed for the reset, against the gym's target.

@@ -54,7 +54,7 @@ public final class ResetPlanner {
      */
     public ResetPlan plan(String gymName, String wallName, LocalDate on, int n, double margin) {
         if (n < 1) {
-            throw new IllegalArgumentException("a reset brings at least one route (--routes " + n + ")");
+            throw new IllegalArgumentException("a reset brings at least one route, not " + n);
         }
         GymRecord gym = catalog.gym(gymName);
         WallRecord wall = catalog.wall(gym, wallName);
@@ -90,10 +90,7 @@ public final class ResetPlanner {
         }
         ResetPlan.GradeSlots slots = slots(settings, d, n, sameStanding, rest, latest);
         if (slots == null) {
-            why.put(
-                    "slots",
-                    "the gym has no grade target for " + d.word() + " routes; set one with 'variset settings"
-                            + " set target ... --discipline " + d.word() + "'");
+            why.put("slots", "the gym has no grade target for " + d.word() + " routes");
         }
         return new ResetPlan(gym.name(), wall.name(), on, d, n, slots, gaps, margin, shapes, why);
     }

@@ -5,6 +5,8 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 import org.variset.archive.read.ArchiveCatalog;
 import org.variset.archive.read.GymRecord;
 import org.variset.archive.read.RouteFilter;
@@ -70,10 +72,14 @@ public final class SimilarRoutes {
             throw new IllegalArgumentException("no route labelled '" + label + "'" + (wall == null ? "" : " on " + wall)
                     + (setOn == null ? "" : " set on " + setOn) + " in " + gym.name());
         }
-        throw new IllegalArgumentException("'" + label + "' names " + found.size() + " routes of " + gym.name() + ": "
-                + String.join(
-                        ", ", found.stream().limit(8).map(RouteRecord::name).toList())
-                + (found.size() > 8 ? ", ..." : "") + "; say which with --wall and --set-on");
+        throw new InputException(
+                InputException.Reason.AMBIGUOUS,
+                "'" + label + "' names " + found.size() + " routes of " + gym.name() + ": "
+                        + String.join(
+                                ", ",
+                                found.stream().limit(8).map(RouteRecord::name).toList())
+                        + (found.size() > 8 ? ", ..." : ""),
+                Remedy.of(Remedy.Kind.NARROW_ROUTE));
     }
 
     /** The routes most like the given one, at most {@code limit}. */

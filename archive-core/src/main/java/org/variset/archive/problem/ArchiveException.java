@@ -1,8 +1,9 @@
-package org.variset.archive.store;
+package org.variset.archive.problem;
 
 /**
  * A problem with the archive itself, as opposed to bad input: missing, already there, in use, written by a
- * newer Variset, damaged, or a migration that failed. The message says what to do.
+ * newer Variset, damaged, or a migration that failed. The message says what is wrong; the {@link #remedy()} what can
+ * be done, for each front end to word.
  */
 public final class ArchiveException extends RuntimeException {
     private static final long serialVersionUID = 1L;
@@ -22,16 +23,28 @@ public final class ArchiveException extends RuntimeException {
     }
 
     private final Problem problem;
+    private final transient Remedy remedy;
 
-    /** An archive problem with a message that says what to do. */
-    public ArchiveException(Problem problem, String message, Throwable cause) {
+    /** An archive problem, with what can be done about it. */
+    public ArchiveException(Problem problem, String message, Remedy remedy, Throwable cause) {
         super(message, cause);
         this.problem = problem;
+        this.remedy = remedy;
     }
 
-    /** An archive problem with a message that says what to do. */
+    /** An archive problem whose message says all there is to do. */
+    public ArchiveException(Problem problem, String message, Throwable cause) {
+        this(problem, message, Remedy.NONE, cause);
+    }
+
+    /** An archive problem whose message says all there is to do. */
     public ArchiveException(Problem problem, String message) {
-        this(problem, message, null);
+        this(problem, message, Remedy.NONE, null);
+    }
+
+    /** What can be done about it. */
+    public Remedy remedy() {
+        return remedy;
     }
 
     /** What went wrong. */

@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.location;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
@@ -8,6 +8,8 @@ import java.nio.file.Path;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 
 class ArchiveLocationTest {
     private final Path home = Path.of("/home/kit");
@@ -22,7 +24,7 @@ class ArchiveLocationTest {
     @Test
     void ignoresABlankEnvironmentVariable() {
         ArchiveLocation l = ArchiveLocation.resolve(null, Map.of("VARISET_ARCHIVE", " "), home);
-        assertThat(l.source()).isEqualTo("the default location");
+        assertThat(l.origin().kind()).isEqualTo(ArchiveLocation.Origin.Kind.DEFAULT);
     }
 
     @Test
@@ -33,7 +35,7 @@ class ArchiveLocationTest {
                 Map.of("VARISET_ARCHIVE", "/srv/a", "XDG_CACHE_HOME", "/var/cache/kit"),
                 home);
         assertThat(l.shared()).isTrue();
-        assertThat(l.source()).isEqualTo("--db");
+        assertThat(l.origin().kind()).isEqualTo(ArchiveLocation.Origin.Kind.GIVEN);
         assertThat(l.shown()).isEqualTo("postgresql://ops@db.example:6543/chain");
         assertThat(l.indexDir().toString())
                 .startsWith("/var/cache/kit/variset/db.example-6543-chain-")
@@ -45,10 +47,17 @@ class ArchiveLocationTest {
     @Test
     void refusesBothKindsAtOneLevel() {
         assertThatThrownBy(() -> ArchiveLocation.resolve(Path.of("/a"), "postgresql://h/d", Map.of(), home))
-                .hasMessageContaining("not both");
+                .isInstanceOfSatisfying(
+                        InputException.class,
+                        e -> assertThat(e.remedy())
+                                .isEqualTo(Remedy.of(Remedy.Kind.CHOOSE_LOCATION, "level", "given")));
         assertThatThrownBy(() -> ArchiveLocation.resolve(
                         null, null, Map.of("VARISET_ARCHIVE", "/a", "VARISET_DB", "postgresql://h/d"), home))
-                .hasMessageContaining("unset one of them");
+                .hasMessageContaining("unset one of them")
+                .isInstanceOfSatisfying(
+                        InputException.class,
+                        e -> assertThat(e.remedy())
+                                .isEqualTo(Remedy.of(Remedy.Kind.CHOOSE_LOCATION, "level", "environment")));
     }
 
     @Test
@@ -60,7 +69,8 @@ class ArchiveLocationTest {
                 Map.of("XDG_CONFIG_HOME", tmp.resolve("config").toString());
         ArchiveLocation l = ArchiveLocation.resolve(null, null, env, home);
         assertThat(l.shown()).endsWith("@127.0.0.1:5432/chain");
-        assertThat(l.source()).isEqualTo(config.toString());
+        assertThat(l.origin())
+                .isEqualTo(new ArchiveLocation.Origin(ArchiveLocation.Origin.Kind.CONFIG_FILE, config.toString()));
         assertThat(l.indexDir()).startsWithRaw(home.resolve(".cache/variset"));
         ArchiveLocation env2 = ArchiveLocation.resolve(
                 null,

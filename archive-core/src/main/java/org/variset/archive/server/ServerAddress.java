@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.server;
 
 import java.net.URI;
 import java.net.URISyntaxException;

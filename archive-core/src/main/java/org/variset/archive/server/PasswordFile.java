@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.server;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;

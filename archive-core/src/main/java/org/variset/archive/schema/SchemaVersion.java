@@ -1,9 +1,10 @@
-package org.variset.archive.store;
+package org.variset.archive.schema;
 
 import java.sql.Connection;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import org.variset.archive.problem.ArchiveException;
 
 /**
  * The archive's schema version as Flyway recorded it, read with one plain JDBC query so that an up-to-date
@@ -21,7 +22,7 @@ public record SchemaVersion(int version, boolean failed) {
     static final String HISTORY = "flyway_schema_history";
 
     /** Reads the version, or 0 when the database has no history table. */
-    static SchemaVersion read(Connection c) throws SQLException {
+    public static SchemaVersion read(Connection c) throws SQLException {
         // In this schema only: a PostgreSQL database may hold several archives, one per schema.
         try (ResultSet tables = c.getMetaData().getTables(null, c.getSchema(), HISTORY, null)) {
             if (!tables.next()) {
@@ -59,7 +60,7 @@ public record SchemaVersion(int version, boolean failed) {
     }
 
     /** Writes the archive's identity when it has none (a new archive, or one made before schema version 4). */
-    static void ensureIdentity(Connection c) throws SQLException {
+    public static void ensureIdentity(Connection c) throws SQLException {
         if (!identity(c).isEmpty()) {
             return;
         }

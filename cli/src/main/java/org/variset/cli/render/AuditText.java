@@ -1,11 +1,16 @@
-package org.variset.reports.audit;
+package org.variset.cli.render;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 import org.variset.archive.grade.Discipline;
+import org.variset.archive.problem.Remedy;
 import org.variset.reports.Safety;
+import org.variset.reports.audit.Audit;
+import org.variset.reports.audit.Finding;
+import org.variset.reports.audit.Headline;
+import org.variset.reports.audit.SetResult;
 import org.variset.reports.figures.SetFigures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
@@ -34,7 +39,7 @@ public final class AuditText {
         line(score(s));
         line("");
         line("What stands out");
-        a.findings().stream().limit(shown).forEach(f -> line("  - " + f.text()));
+        a.findings().stream().limit(shown).forEach(f -> line("  - " + finding(f)));
         if (a.findings().size() > shown) {
             line("  (" + (a.findings().size() - shown) + " more with --format json)");
         }
@@ -45,6 +50,15 @@ public final class AuditText {
         line("");
         line(settings(a));
         line("Safety: " + Safety.CAUTION);
+    }
+
+    /** A finding in the command line's words: its sentence, then what to do when there is more than resetting. */
+    public static String finding(Finding f) {
+        if (f.remedy().kind() == Remedy.Kind.NONE) {
+            return f.text();
+        }
+        String t = f.text().endsWith(".") ? f.text().substring(0, f.text().length() - 1) : f.text();
+        return t + ": " + CliWords.remedy(f.remedy()) + ".";
     }
 
     private static String score(SetResult s) {

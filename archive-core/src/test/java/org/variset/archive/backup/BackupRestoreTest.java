@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.backup;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
@@ -19,6 +19,11 @@ import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.variset.archive.fixture.ResetFixture;
+import org.variset.archive.problem.ArchiveException;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
+import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveLock;
 
 class BackupRestoreTest {
     @TempDir
@@ -67,7 +72,10 @@ class BackupRestoreTest {
         try (Archive a = Archive.create(other)) {
             a.stats();
         }
-        assertThatThrownBy(() -> ArchiveRestore.restore(backup, other, false)).hasMessageContaining("--force");
+        assertThatThrownBy(() -> ArchiveRestore.restore(backup, other, false))
+                .isInstanceOfSatisfying(
+                        InputException.class,
+                        e -> assertThat(e.remedy().kind()).isEqualTo(Remedy.Kind.REPLACE_EXISTING));
         assertThat(ArchiveRestore.restore(backup, other, true).replaced()).isTrue();
         assertThat(content(other)).isEqualTo(content(original));
         try (var left = Files.list(tmp)) {
@@ -78,7 +86,11 @@ class BackupRestoreTest {
     @Test
     void refusesToOverwriteABackupUnlessAsked() {
         try (Archive a = Archive.open(original)) {
-            assertThatThrownBy(() -> ArchiveBackup.write(a, backup, false)).hasMessageContaining("--force");
+            assertThatThrownBy(() -> ArchiveBackup.write(a, backup, false))
+                    .isInstanceOfSatisfying(
+                            InputException.class,
+                            e -> assertThat(e.remedy())
+                                    .isEqualTo(Remedy.of(Remedy.Kind.REPLACE_EXISTING, "file", backup.toString())));
         }
     }
 

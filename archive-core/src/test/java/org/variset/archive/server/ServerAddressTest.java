@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.server;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;

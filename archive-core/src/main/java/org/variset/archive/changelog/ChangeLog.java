@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.changelog;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;
@@ -9,6 +9,7 @@ import java.util.Collection;
 import java.util.List;
 import java.util.Locale;
 import org.hibernate.Session;
+import org.variset.archive.problem.ArchiveException;
 
 /**
  * The log of changed routes (table {@code route_change}, schema versions 2 and 4). Every change to a route, its

@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.location;
 
 import java.io.IOException;
 import java.io.Reader;
@@ -7,12 +7,16 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
 import java.util.Properties;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
+import org.variset.archive.server.ServerAddress;
 
 /**
  * Where the archive lives, and why there: an embedded archive in a folder, or a shared one on a PostgreSQL server.
  * Precedence (README, "Where the archive lives"), first found wins:
  * <ol>
- * <li>the options {@code --db URL} or {@code --archive DIR} (not both);</li>
+ * <li>a folder or a server address given for this run (the command line's {@code --archive} or {@code --db}; not
+ * both);</li>
  * <li>the environment variables {@code VARISET_DB} or {@code VARISET_ARCHIVE} (not both);</li>
  * <li>the configuration file {@code $XDG_CONFIG_HOME/variset/variset.properties} (else
  * {@code ~/.config/variset/variset.properties}), key {@code db} or {@code archive};</li>
@@ -24,9 +28,42 @@ import java.util.Properties;
  * @param dir the archive folder, absolute; null for a shared archive
  * @param server the shared archive's server; null for an embedded archive
  * @param indexDir the folder of the search index (the archive folder's {@code index}, or this client's cache)
- * @param source how it was chosen, for messages ({@code --archive}, {@code VARISET_DB}, ...)
+ * @param origin how it was chosen, for messages
  */
-public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, String source) {
+public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, Origin origin) {
+
+    /**
+     * How a location was chosen.
+     *
+     * @param kind which level of the precedence named it
+     * @param name the environment variable or configuration file that did, or empty
+     */
+    public record Origin(Kind kind, String name) {
+        /** The levels of the precedence, first first. */
+        public enum Kind {
+            /** Given for this run by the front end (the command line's option). */
+            GIVEN,
+            /** An environment variable. */
+            ENVIRONMENT,
+            /** The configuration file. */
+            CONFIG_FILE,
+            /** {@code $XDG_DATA_HOME/variset}. */
+            XDG_DATA_HOME,
+            /** {@code ~/.local/share/variset}. */
+            DEFAULT
+        }
+
+        /** The origin in plain words ("the environment variable VARISET_DB"); a front end may say GIVEN its own way. */
+        public String describe() {
+            return switch (kind) {
+                case GIVEN -> "given for this run";
+                case ENVIRONMENT -> "the environment variable " + name;
+                case CONFIG_FILE -> "the configuration file " + name;
+                case XDG_DATA_HOME -> "XDG_DATA_HOME";
+                case DEFAULT -> "the default location";
+            };
+        }
+    }
 
     /** The environment variable that names the archive folder. */
     public static final String ENV = "VARISET_ARCHIVE";
@@ -36,9 +73,14 @@ public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, Str
     public static final String CONFIG_FILE = "variset.properties";
 
     /** An embedded archive in a folder. */
-    public static ArchiveLocation embedded(Path dir, String source) {
+    public static ArchiveLocation embedded(Path dir, Origin origin) {
         Path d = dir.toAbsolutePath().normalize();
-        return new ArchiveLocation(d, null, d.resolve("index"), source);
+        return new ArchiveLocation(d, null, d.resolve("index"), origin);
+    }
+
+    /** An embedded archive in a folder given for this run. */
+    public static ArchiveLocation embedded(Path dir) {
+        return embedded(dir, new Origin(Origin.Kind.GIVEN, ""));
     }
 
     /**
@@ -59,43 +101,48 @@ public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, Str
         return server != null ? server.shown() : dir.toString();
     }
 
-    /** Resolves an embedded archive's folder from {@code --archive}, the environment and the defaults. */
-    public static ArchiveLocation resolve(Path option, Map<String, String> env, Path home) {
-        return resolve(option, null, env, home);
+    /** Resolves an embedded archive's folder from the one given (or null), the environment and the defaults. */
+    public static ArchiveLocation resolve(Path givenDir, Map<String, String> env, Path home) {
+        return resolve(givenDir, null, env, home);
     }
 
     /**
      * Resolves where the archive lives.
      *
-     * @param archiveOption the {@code --archive} value, or null
-     * @param dbOption the {@code --db} value, or null
+     * @param givenDir an embedded archive's folder given for this run, or null
+     * @param givenServer a shared archive's address given for this run, or null
      * @param env the process environment
      * @param home the user's home folder
      * @throws IllegalArgumentException when both kinds are given at one level, a configuration file cannot be read,
      *     or a server address is malformed
      */
-    public static ArchiveLocation resolve(Path archiveOption, String dbOption, Map<String, String> env, Path home) {
-        if (archiveOption != null && dbOption != null) {
-            throw new IllegalArgumentException("Give either --archive (an embedded archive) or --db (a shared one on "
-                    + "a PostgreSQL server), not both");
+    public static ArchiveLocation resolve(Path givenDir, String givenServer, Map<String, String> env, Path home) {
+        if (givenDir != null && givenServer != null) {
+            throw new InputException(
+                    InputException.Reason.INVALID,
+                    "both an embedded archive (a folder) and a shared one (a PostgreSQL server) were named",
+                    Remedy.of(Remedy.Kind.CHOOSE_LOCATION, "level", "given"));
         }
-        if (dbOption != null) {
-            return server(dbOption, "--db", env, home);
+        Origin given = new Origin(Origin.Kind.GIVEN, "");
+        if (givenServer != null) {
+            return server(givenServer, given, env, home);
         }
-        if (archiveOption != null) {
-            return embedded(archiveOption, "--archive");
+        if (givenDir != null) {
+            return embedded(givenDir, given);
         }
         String db = blankToNull(env.get(DB_ENV));
         String dir = blankToNull(env.get(ENV));
         if (db != null && dir != null) {
-            throw new IllegalArgumentException("Both " + DB_ENV + " and " + ENV + " are set; unset one of them (or "
-                    + "name the archive with --db or --archive)");
+            throw new InputException(
+                    InputException.Reason.INVALID,
+                    "both " + DB_ENV + " and " + ENV + " are set; unset one of them",
+                    Remedy.of(Remedy.Kind.CHOOSE_LOCATION, "level", "environment"));
         }
         if (db != null) {
-            return server(db, DB_ENV, env, home);
+            return server(db, new Origin(Origin.Kind.ENVIRONMENT, DB_ENV), env, home);
         }
         if (dir != null) {
-            return embedded(Path.of(dir), ENV);
+            return embedded(Path.of(dir), new Origin(Origin.Kind.ENVIRONMENT, ENV));
         }
         Path config = configFile(env, home);
         if (config != null && Files.isRegularFile(config)) {
@@ -112,29 +159,33 @@ public record ArchiveLocation(Path dir, ServerAddress server, Path indexDir, Str
                 throw new IllegalArgumentException(
                         "The configuration file " + config + " sets both 'db' and " + "'archive'; keep one of them");
             }
+            Origin file = new Origin(Origin.Kind.CONFIG_FILE, config.toString());
             if (cdb != null) {
-                return server(cdb, config.toString(), env, home);
+                return server(cdb, file, env, home);
             }
             if (cdir != null) {
-                return embedded(Path.of(cdir), config.toString());
+                return embedded(Path.of(cdir), file);
             }
         }
         String xdg = env.get("XDG_DATA_HOME");
         if (xdg != null && !xdg.isBlank() && Path.of(xdg).isAbsolute()) {
-            return embedded(Path.of(xdg, "variset"), "XDG_DATA_HOME");
+            return embedded(Path.of(xdg, "variset"), new Origin(Origin.Kind.XDG_DATA_HOME, "XDG_DATA_HOME"));
         }
-        return embedded(home.resolve(".local/share/variset"), "the default location");
+        return embedded(home.resolve(".local/share/variset"), new Origin(Origin.Kind.DEFAULT, ""));
     }
 
-    private static ArchiveLocation server(String url, String source, Map<String, String> env, Path home) {
+    private static ArchiveLocation server(String url, Origin origin, Map<String, String> env, Path home) {
         ServerAddress a;
         try {
             a = ServerAddress.parse(url, env, home);
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException(e.getMessage() + " (the address came from " + source + ")");
+            throw origin.kind() == Origin.Kind.GIVEN
+                    ? e
+                    : new IllegalArgumentException(
+                            e.getMessage() + " (the address came from " + origin.describe() + ")");
         }
         return new ArchiveLocation(
-                null, a, cacheHome(env, home).resolve(a.cacheKey()).resolve("index"), source);
+                null, a, cacheHome(env, home).resolve(a.cacheKey()).resolve("index"), origin);
     }
 
     /** {@code $XDG_CONFIG_HOME/variset/variset.properties}, else {@code ~/.config/variset/variset.properties}. */

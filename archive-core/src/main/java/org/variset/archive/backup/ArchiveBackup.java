@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.backup;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -19,6 +19,13 @@ import java.util.zip.ZipEntry;
 import java.util.zip.ZipFile;
 import java.util.zip.ZipInputStream;
 import java.util.zip.ZipOutputStream;
+import org.variset.archive.changelog.ChangeLog;
+import org.variset.archive.file.AtomicFile;
+import org.variset.archive.problem.ArchiveException;
+import org.variset.archive.schema.SchemaVersion;
+import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveFolder;
+import org.variset.archive.store.ArchiveStats;
 
 /**
  * Backups of an archive: one zip holding the database as H2's online backup made it and a manifest
@@ -29,7 +36,7 @@ public final class ArchiveBackup {
     /** The manifest's entry name. */
     static final String MANIFEST = "variset-backup.json";
     /** The database's entry name. */
-    static final String DATABASE = Archive.DB_NAME + ".mv.db";
+    static final String DATABASE = ArchiveFolder.DATABASE_FILE;
 
     private static final String FORMAT = "variset-backup";
     private static final ObjectMapper JSON = new ObjectMapper();

@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.file;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -6,6 +6,8 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
 
 /**
  * Writes a file whole or not at all: into a temporary sibling, moved into place when complete. An existing file is
@@ -35,7 +37,10 @@ public final class AtomicFile {
                     target + " is a folder; give a file name, such as " + target.resolve("audit.pdf"));
         }
         if (Files.exists(file) && !replace) {
-            throw new IllegalArgumentException(target + " exists already; give --force to replace it, or another name");
+            throw new InputException(
+                    InputException.Reason.EXISTS,
+                    target + " exists already",
+                    Remedy.of(Remedy.Kind.REPLACE_EXISTING, "file", target.toString()));
         }
         if (dir == null || !Files.isDirectory(dir)) {
             throw new IllegalArgumentException("cannot write " + target + ": " + dir

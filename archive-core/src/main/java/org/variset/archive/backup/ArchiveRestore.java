@@ -1,4 +1,4 @@
-package org.variset.archive.store;
+package org.variset.archive.backup;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import java.io.IOException;
@@ -8,6 +8,13 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Comparator;
 import java.util.stream.Stream;
+import org.variset.archive.problem.ArchiveException;
+import org.variset.archive.problem.InputException;
+import org.variset.archive.problem.Remedy;
+import org.variset.archive.store.Archive;
+import org.variset.archive.store.ArchiveFolder;
+import org.variset.archive.store.ArchiveLock;
+import org.variset.archive.store.ArchiveStats;
 
 /**
  * Restores an archive from a backup, never half-way: the backup is checked against its manifest, extracted into a
@@ -37,8 +44,10 @@ public final class ArchiveRestore {
         Path target = dir.toAbsolutePath().normalize();
         boolean exists = Archive.existsAt(target);
         if (exists && !replace) {
-            throw new IllegalArgumentException("there is an archive at " + target + " already; restoring replaces it "
-                    + "with the backup: give --force to do so");
+            throw new InputException(
+                    InputException.Reason.EXISTS,
+                    "there is an archive at " + target + " already, and restoring replaces it with the backup",
+                    Remedy.of(Remedy.Kind.REPLACE_EXISTING, "file", target.toString()));
         }
         if (!Files.isRegularFile(backup)) {
             throw new IllegalArgumentException("no backup file at " + backup);
@@ -46,9 +55,9 @@ public final class ArchiveRestore {
         ArchiveLock lock = exists ? ArchiveLock.acquire(target, ArchiveLock.DEFAULT_WAIT) : null;
         Path fresh = target.resolveSibling("." + target.getFileName() + ".restoring-" + System.nanoTime());
         try {
-            Archive.createPrivateDirectories(fresh);
+            ArchiveFolder.createPrivate(fresh);
             JsonNode manifest = ArchiveBackup.verifyAndExtract(backup, fresh.resolve(ArchiveBackup.DATABASE));
-            Archive.restrictToOwner(fresh.resolve(ArchiveBackup.DATABASE));
+            ArchiveFolder.restrictToOwner(fresh.resolve(ArchiveBackup.DATABASE));
             verifyOpens(backup, fresh, manifest);
             swap(fresh, target, exists);
             return new Result(manifest, exists);

@@ -1,16 +1,23 @@
-package org.variset.archive.store;
+package org.variset.archive.schema;
 
 import javax.sql.DataSource;
 import org.flywaydb.core.Flyway;
 import org.flywaydb.core.api.FlywayException;
-import org.variset.archive.store.ArchiveException.Problem;
+import org.variset.archive.problem.ArchiveException;
+import org.variset.archive.problem.ArchiveException.Problem;
 
 /** Runs the versioned migrations in {@code db/migration} (only when the archive is new or behind). */
-final class SchemaMigrator {
+public final class SchemaMigrator {
 
     private SchemaMigrator() {}
 
-    static void migrate(DataSource ds, Object where) {
+    /**
+     * Brings the database to {@link SchemaVersion#LATEST}.
+     *
+     * @param where the archive, for the message when a step fails
+     * @throws ArchiveException when a migration fails (the failed step changes nothing)
+     */
+    public static void migrate(DataSource ds, Object where) {
         try {
             Flyway.configure(SchemaMigrator.class.getClassLoader())
                     .dataSource(ds)

@@ -1,9 +1,11 @@
-package org.variset.reports.plan;
+package org.variset.cli.render;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
 import org.variset.reports.format.FigureFormat;
+import org.variset.reports.plan.ResetPlan;
+import org.variset.reports.plan.VarietyGaps;
 
 /** A reset plan as text for people, with the reasons for each proposal. */
 public final class PlanText {
@@ -66,7 +68,8 @@ public final class PlanText {
     static List<String> slotLines(ResetPlan p) {
         List<String> out = new ArrayList<>();
         if (p.grades() == null) {
-            out.add("Grade slots: none proposed: " + p.undefined().get("slots") + ".");
+            out.add("Grade slots: none proposed: " + p.undefined().get("slots") + "; " + CliWords.remedy(p.remedy())
+                    + ".");
             return out;
         }
         ResetPlan.GradeSlots gs = p.grades();

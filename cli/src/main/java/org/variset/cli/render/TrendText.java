@@ -1,4 +1,4 @@
-package org.variset.reports.trend;
+package org.variset.cli.render;
 
 import java.util.List;
 import java.util.Map;
@@ -7,6 +7,8 @@ import org.variset.archive.grade.Discipline;
 import org.variset.reports.audit.Headline;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
+import org.variset.reports.trend.ChainComparison;
+import org.variset.reports.trend.Trend;
 
 /** A trend as text for people. */
 public final class TrendText {
