@@ -7,7 +7,10 @@ import com.tngtech.archunit.junit.AnalyzeClasses;
 import com.tngtech.archunit.junit.ArchTest;
 import com.tngtech.archunit.lang.ArchRule;
 
-/** The dependency rules of DEVELOPERS.md, checked over every module's classes. */
+/**
+ * The rules that span modules, checked over every module's classes; each module checks its own inside it (their
+ * {@code ArchitectureTest}s).
+ */
 @AnalyzeClasses(packages = "org.variset", importOptions = ImportOption.DoNotIncludeTests.class)
 class ArchitectureTest {
 
@@ -18,23 +21,6 @@ class ArchitectureTest {
             .should()
             .dependOnClassesThat()
             .resideInAPackage("picocli..");
-
-    @ArchTest
-    static final ArchRule coreDependsOnNoOtherModule = noClasses()
-            .that()
-            .resideInAPackage("org.variset.archive..")
-            .should()
-            .dependOnClassesThat()
-            .resideInAnyPackage(
-                    "org.variset.imports..", "org.variset.reports..", "org.variset.sample..", "org.variset.cli..");
-
-    @ArchTest
-    static final ArchRule gradesStayPure = noClasses()
-            .that()
-            .resideInAPackage("org.variset.archive.grade..")
-            .should()
-            .dependOnClassesThat()
-            .resideInAnyPackage("jakarta.persistence..", "org.hibernate..", "org.variset.archive.store..");
 
     @ArchTest
     static final ArchRule onlyTheCliExits = noClasses()
