@@ -15,6 +15,8 @@ import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestInstance;
 import org.junit.jupiter.api.io.TempDir;
+import org.variset.reports.catalogue.Figure;
+import org.variset.reports.catalogue.Figures;
 
 /**
  * Audit, plan and trend of the invented gym Fernhollow Climbing (test resources {@code fernhollow/}), each figure
@@ -239,6 +241,93 @@ class AuditPlanTrendTest {
                 .out();
         assertThat(csv.lines().findFirst().orElseThrow()).startsWith("day,scope,routes,score.score");
         assertThat(csv.lines().count()).isEqualTo(1 + 4 * 4); // four month-ends, gym and three walls
+    }
+
+    /**
+     * The figure catalogue against what the JSON really writes: every number an audit or trend reports is a
+     * catalogued figure (or a count of one category, listed as such below), and every catalogued figure is reported.
+     */
+    @Nested
+    @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+    class Catalogue {
+        /** Maps of counts per category, and the score's parts and weights: numbers named by their category. */
+        private static final List<String> PER_CATEGORY = List.of(
+                ".counts.",
+                ".histogram.",
+                ".target.",
+                "score.parts.",
+                "score.weights_used.",
+                "profiles.steady",
+                "profiles.sustained",
+                "profiles.single_crux",
+                "profiles.multi_crux",
+                "profiles.unclassified",
+                "grip.sectors",
+                "line.routes.long_spans");
+
+        private final java.util.Set<String> reported = new java.util.TreeSet<>();
+
+        @BeforeAll
+        void readEveryFigure() throws IOException {
+            JsonNode audit = json("audit", "--reset", "Arch 2026-02-02", "--format", "json");
+            for (String block : List.of(
+                    "score",
+                    "grip",
+                    "holds",
+                    "hold_shapes",
+                    "sizes",
+                    "moves",
+                    "styles",
+                    "angles",
+                    "grades",
+                    "profiles",
+                    "line",
+                    "repetition")) {
+                walk(block, audit.get(block));
+            }
+            audit.at("/context/figures").fieldNames().forEachRemaining(reported::add);
+            walk("lifetime", json("trend", "--year", "2026", "--format", "json").get("lifetime"));
+        }
+
+        private void walk(String path, JsonNode n) {
+            assertThat(n).as(path).isNotNull();
+            if (n.isObject()) {
+                n.fields().forEachRemaining(e -> walk(path + "." + e.getKey(), e.getValue()));
+            } else if (n.isArray()) {
+                n.forEach(x -> walk(path, x));
+            } else if ((n.isNumber() || n.isNull()) && PER_CATEGORY.stream().noneMatch(path::contains)) {
+                reported.add(path.replaceFirst("^grades\\.(boulder|rope)\\.", "grades.")
+                        .replaceFirst("^repetition\\.(near|internal)_repeats\\.", "repetition."));
+            }
+        }
+
+        @Test
+        void catalogueEveryNumberTheJsonReports() {
+            List<String> missing = reported.stream()
+                    .filter(k -> Figures.all().stream().noneMatch(f -> f.key().equals(k)))
+                    .toList();
+            assertThat(missing)
+                    .as("numbers in the JSON that are not in the catalogue")
+                    .isEmpty();
+        }
+
+        @Test
+        void reportEveryCataloguedFigure() {
+            List<String> unreported = Figures.all().stream()
+                    .map(Figure::key)
+                    .filter(k -> !reported.contains(k))
+                    .toList();
+            assertThat(unreported).as("catalogued figures no JSON reports").isEmpty();
+        }
+
+        @Test
+        void giveEveryFigureALabelAndASource() {
+            assertThat(Figures.all()).allSatisfy(f -> {
+                assertThat(f.label()).as(f.key()).isNotBlank();
+                assertThat(f.shortLabel()).as(f.key()).isNotBlank();
+                assertThat(f.source()).as(f.key()).isNotBlank();
+            });
+        }
     }
 
     @Nested

@@ -9,7 +9,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -24,8 +23,8 @@ import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestInstance;
 import org.junit.jupiter.api.io.TempDir;
-import org.variset.reports.audit.Headline;
-import org.variset.reports.format.FigureFormat;
+import org.variset.reports.catalogue.Figure;
+import org.variset.reports.catalogue.Figures;
 
 /**
  * The PDF documents of the invented Fernhollow gym, read back with PDFBox (an independent PDF reader): the figures
@@ -92,7 +91,7 @@ class PdfDocumentsTest {
         void printsTheScoreAndTheFirstTenFindingsOfTheJson() {
             assertThat(text)
                     .contains("Score "
-                            + FigureFormat.of("score", json.at("/score/score").asDouble()) + " of 100");
+                            + Figures.SCORE.text(json.at("/score/score").asDouble()) + " of 100");
             for (int i = 0; i < Math.min(10, json.get("findings").size()); i++) {
                 String start = json.get("findings").get(i).get("text").asText().substring(0, 40);
                 assertThat(text.replace("\n", " ")).as(start).contains(start);
@@ -103,12 +102,16 @@ class PdfDocumentsTest {
         @Test
         void printsTheSideBySideFiguresOfTheJson() {
             List<String> lines = text.lines().toList();
-            for (Map.Entry<String, String> k : Headline.LABELS.entrySet()) {
-                JsonNode row = json.at("/context/figures/" + k.getKey());
+            for (Figure k : Figures.HEADLINE) {
+                JsonNode row = json.at("/context/figures/" + k.key());
+                assertThat(row.isArray()
+                                && row.size() == json.at("/context/columns").size())
+                        .as("a value per column for %s", k.key())
+                        .isTrue();
                 List<String> values = new ArrayList<>();
-                row.forEach(v -> values.add(Headline.text(k.getKey(), v.isNull() ? null : v.asDouble())));
-                String expected = k.getValue() + " " + String.join(" ", values);
-                assertThat(lines).as(k.getKey()).contains(expected);
+                row.forEach(v -> values.add(k.text(v.isNull() ? null : v.asDouble())));
+                String expected = k.label() + " " + String.join(" ", values);
+                assertThat(lines).as(k.key()).contains(expected);
             }
         }
 
@@ -116,12 +119,10 @@ class PdfDocumentsTest {
         void printsTheGripFigures() {
             assertThat(text.replace("\n", " "))
                     .contains("Resultant length "
-                            + FigureFormat.of(
-                                    "resultant_length",
+                            + Figures.GRIP_RESULTANT.text(
                                     json.at("/grip/resultant_length").asDouble()))
                     .contains("circular standard deviation "
-                            + FigureFormat.of(
-                                    "circular_sd_deg",
+                            + Figures.GRIP_SD.text(
                                     json.at("/grip/circular_sd_deg").asDouble()) + "°")
                     .contains("Rayleigh test p < 0.001");
             assertThat(text).contains("up " + json.at("/grip/sectors/0").asInt());
@@ -214,7 +215,7 @@ class PdfDocumentsTest {
             for (JsonNode w : json.get("walls")) {
                 assertThat(text)
                         .contains(w.get("wall").asText() + " " + w.get("resets").size() + " "
-                                + FigureFormat.of("score", w.get("mean_score").asDouble()) + " "
+                                + Figures.SCORE.text(w.get("mean_score").asDouble()) + " "
                                 + w.get("last_reset").asText()
                                 + " " + w.get("days_since_reset").asInt() + " "
                                 + w.get("cycle_days").asInt() + " "

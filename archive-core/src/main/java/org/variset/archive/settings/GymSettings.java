@@ -20,6 +20,11 @@ public final class GymSettings {
     public static final BigDecimal DEFAULT_THRESHOLD = new BigDecimal("0.6");
     /** docs/spec/metrics.md section 5: the default look-back window. */
     public static final int DEFAULT_LOOKBACK_DAYS = 365;
+    /**
+     * docs/spec/metrics.md section 7: the default weights of the score's parts, in the spec's order (grip, holds,
+     * moves, grades, novelty).
+     */
+    public static final Map<String, Double> DEFAULT_SCORE_WEIGHTS = defaultScoreWeights();
     /** docs/spec/metrics.md section 6: the default climber height. */
     public static final double DEFAULT_REACH_HEIGHT_M = 1.60;
     /** docs/spec/metrics.md section 6: the default span factor. */
@@ -126,11 +131,7 @@ public final class GymSettings {
 
     /** The score weights: docs/spec/metrics.md section 7's defaults, with the parts the gym set replaced. */
     public Map<String, Double> scoreWeights() {
-        Map<String, Double> w = new LinkedHashMap<>();
-        double[] defaults = {0.25, 0.20, 0.20, 0.15, 0.20};
-        for (int i = 0; i < defaults.length; i++) {
-            w.put(SettingKey.SCORE_PARTS.get(i), defaults[i]);
-        }
+        Map<String, Double> w = new LinkedHashMap<>(DEFAULT_SCORE_WEIGHTS);
         given(SettingKey.SCORE_WEIGHTS, "").ifPresent(v -> w.putAll(SettingKey.weightMap(v.value())));
         return w;
     }
@@ -163,6 +164,15 @@ public final class GymSettings {
                     .orElse(Vocabulary.defaults());
         }
         return vocabulary;
+    }
+
+    private static Map<String, Double> defaultScoreWeights() {
+        double[] weights = {0.25, 0.20, 0.20, 0.15, 0.20};
+        Map<String, Double> w = new LinkedHashMap<>();
+        for (int i = 0; i < weights.length; i++) {
+            w.put(SettingKey.SCORE_PARTS.get(i), weights[i]);
+        }
+        return java.util.Collections.unmodifiableMap(w);
     }
 
     private static String id(SettingKey key, String scope) {

@@ -21,7 +21,7 @@ import org.variset.reports.audit.Audit;
 import org.variset.reports.audit.AuditJson;
 import org.variset.reports.audit.AuditTarget;
 import org.variset.reports.audit.Auditor;
-import org.variset.reports.format.FigureFormat;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.pdf.AuditPdf;
 import org.variset.reports.pdf.PdfOptions;
 import org.variset.reports.pdf.TrendPdf;
@@ -76,7 +76,7 @@ final class DemoReports {
                             "%-9s %-22s score %3s",
                             w.name(),
                             a.subject().reset(),
-                            FigureFormat.of("score", a.audited().score().score())),
+                            Figures.SCORE.text(a.audited().score().score())),
                     a);
         }
         Audit standing = auditor.audit(new AuditTarget.Standing(gym.name(), null, asOf));
@@ -89,7 +89,7 @@ final class DemoReports {
                         Locale.ROOT,
                         "Whole gym, %d routes up: score %s",
                         standing.audited().routes().size(),
-                        FigureFormat.of("score", standing.audited().score().score())),
+                        Figures.SCORE.text(standing.audited().score().score())),
                 standing);
         setters(catalog, auditor, gym);
         annual(gym, written);

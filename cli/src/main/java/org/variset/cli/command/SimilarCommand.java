@@ -13,8 +13,8 @@ import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
 import org.variset.cli.internal.IndexUpkeep;
 import org.variset.cli.internal.Json;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FeatureText;
-import org.variset.reports.format.FigureFormat;
 import org.variset.reports.route.RouteText;
 import org.variset.reports.similar.SimilarRoutes;
 import picocli.CommandLine.Command;
@@ -104,7 +104,7 @@ final class SimilarCommand extends VarisetSubcommand {
         for (SimilarRoutes.Match m : r.matches()) {
             out().println();
             out().println((++n) + ". Jaccard "
-                    + FigureFormat.of("jaccard", m.similarity().jaccard()) + " ("
+                    + Figures.JACCARD.text(m.similarity().jaccard()) + " ("
                     + m.similarity().shared() + " of " + m.similarity().union() + " features) · "
                     + RouteText.heading(m.other()));
             out().println("   " + FeatureText.shared(m.similarity().sharedFeatures()));

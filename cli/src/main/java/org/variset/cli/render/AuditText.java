@@ -11,6 +11,8 @@ import org.variset.reports.audit.Audit;
 import org.variset.reports.audit.Finding;
 import org.variset.reports.audit.Headline;
 import org.variset.reports.audit.SetResult;
+import org.variset.reports.catalogue.Figure;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.SetFigures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
@@ -68,7 +70,7 @@ public final class AuditText {
         String parts = s.score().weightsUsed().keySet().stream()
                 .map(k -> k + " " + FigureFormat.round(s.score().parts().get(k), 2))
                 .collect(Collectors.joining(", "));
-        return "Score " + FigureFormat.of("score", s.score().score()) + " of 100 (a heuristic: weighted mean of "
+        return "Score " + Figures.SCORE.text(s.score().score()) + " of 100 (a heuristic: weighted mean of "
                 + parts
                 + (s.score().dropped().isEmpty()
                         ? ""
@@ -88,19 +90,13 @@ public final class AuditText {
         }
         List<List<String>> rows = new ArrayList<>();
         rows.add(head);
-        for (Map.Entry<String, String> k : Headline.LABELS.entrySet()) {
+        for (Figure k : Figures.HEADLINE) {
             List<String> row = new ArrayList<>();
-            row.add(k.getValue());
+            row.add(k.label());
             for (int i = 0; i < cols.size(); i++) {
-                row.add(Headline.text(k.getKey(), values.get(i).get(k.getKey())));
+                row.add(k.text(values.get(i).get(k.key())));
                 if (i == 1 && a.previous() != null) {
-                    boolean pct = k.getKey().endsWith("_share") || k.getKey().endsWith("_rate");
-                    Double now = values.get(0).get(k.getKey());
-                    Double before = values.get(1).get(k.getKey());
-                    row.add(
-                            pct && now != null && before != null
-                                    ? FigureFormat.change("score", 100 * now, 100 * before) + " pts"
-                                    : FigureFormat.change(k.getKey(), now, before));
+                    row.add(k.change(values.get(0).get(k.key()), values.get(1).get(k.key())));
                 }
             }
             rows.add(row);
@@ -129,32 +125,32 @@ public final class AuditText {
         }
         line("Grip directions  " + g.n() + " hand grips (" + g.undirected() + " holds without a direction): "
                 + String.join(", ", sectors) + "; mean direction "
-                + FigureFormat.of("mean_direction_deg", g.meanDirectionDeg()) + "°, resultant length "
-                + FigureFormat.of("resultant_length", g.resultantLength()) + ", Rayleigh p "
-                + FigureFormat.of("rayleigh_p", g.rayleighP())
+                + Figures.GRIP_MEAN_DIRECTION.text(g.meanDirectionDeg()) + "°, resultant length "
+                + Figures.GRIP_RESULTANT.text(g.resultantLength()) + ", Rayleigh p "
+                + Figures.GRIP_RAYLEIGH_P.text(g.rayleighP())
                 + " (small on most walls: gravity favours up-facing holds)");
-        line("Hold types       " + variety(f.holds()));
-        line("Hold shapes      " + variety(f.holdShapes()));
-        line("Sizes            " + variety(f.sizes()));
-        line("Moves            " + variety(f.moves()));
-        line("Styles           " + variety(f.styles()));
-        line("Wall angles      " + variety(f.angles()));
+        line("Hold types       " + variety(f.holds(), Figures.HOLDS));
+        line("Hold shapes      " + variety(f.holdShapes(), Figures.HOLD_SHAPES));
+        line("Sizes            " + variety(f.sizes(), Figures.SIZES));
+        line("Moves            " + variety(f.moves(), Figures.MOVES));
+        line("Styles           " + variety(f.styles(), Figures.STYLES));
+        line("Wall angles      " + variety(f.angles(), Figures.ANGLES));
         for (Map.Entry<Discipline, GradeFigures> e : f.grades().entrySet()) {
             line(pad("Grades (" + e.getKey().word() + ")", 17, false) + grades(e.getValue()));
         }
         line("Profiles         " + profiles(f));
         line("Repetition       " + repetition(s));
         line("Route lines      " + f.line().withGie() + " routes with a full line: GIE mean "
-                + FigureFormat.of("gie_mean", f.line().gieMean()) + " (min "
-                + FigureFormat.of("gie_min", f.line().gieMin()) + ", max "
-                + FigureFormat.of("gie_max", f.line().gieMax()) + "); "
+                + Figures.GIE_MEAN.text(f.line().gieMean()) + " (min "
+                + Figures.GIE_MIN.text(f.line().gieMin()) + ", max "
+                + Figures.GIE_MAX.text(f.line().gieMax()) + "); "
                 + f.line().flagged().size()
                 + " routes with a span over "
-                + FigureFormat.round(f.line().reachK() * f.line().reachHeightM(), 2)
+                + Figures.SPAN.text(f.line().reachK() * f.line().reachHeightM())
                 + " m (heuristic)");
     }
 
-    private static String variety(VarietyFigures v) {
+    private static String variety(VarietyFigures v, Figures.Variety c) {
         if (v.n() == 0) {
             return "none recorded" + (v.missing() > 0 ? " (" + v.missing() + " without a value)" : "");
         }
@@ -164,8 +160,8 @@ public final class AuditText {
                 .map(e -> e.getKey() + " " + e.getValue())
                 .collect(Collectors.joining(", "));
         return counts + (v.richness() > 10 ? ", ..." : "") + "; effective number "
-                + FigureFormat.of("hill_n1", v.hillN1())
-                + (v.coverage() == null ? "" : ", coverage " + FigureFormat.of("coverage", v.coverage()))
+                + c.hillN1().text(v.hillN1())
+                + (v.coverage() == null ? "" : ", coverage " + c.coverage().text(v.coverage()))
                 + (v.missing() > 0 ? "; " + v.missing() + " without a value" : "");
     }
 
@@ -181,7 +177,7 @@ public final class AuditText {
         return h
                 + (g.emdToTarget() == null
                         ? "; no target"
-                        : "; " + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands from target")
+                        : "; " + Figures.GRADES_DISTANCE.text(g.emdToTarget()) + " bands from target")
                 + (g.outsideTarget() > 0 ? "; " + g.outsideTarget() + " outside the target's bands" : "");
     }
 
@@ -189,7 +185,7 @@ public final class AuditText {
         String c = f.profiles().counts().entrySet().stream()
                 .map(e -> e.getKey().key().replace('_', ' ') + " " + e.getValue())
                 .collect(Collectors.joining(", "));
-        return c + "; spread " + FigureFormat.of("split_entropy", f.profiles().splitEntropy())
+        return c + "; spread " + Figures.PROFILE_SPREAD.text(f.profiles().splitEntropy())
                 + (f.profiles().counts().get(ProfileClass.UNCLASSIFIED) > 0
                         ? " (unclassified: fewer than three " + "move difficulties)"
                         : "");
@@ -205,7 +201,7 @@ public final class AuditText {
                 ? near + " near-repeats of the " + s.windowRoutes() + " routes set in the look-back window; "
                 : "";
         return window + inside + " inside this set; novelty "
-                + FigureFormat.of("novelty", s.repetition().novelty())
+                + Figures.NOVELTY.text(s.repetition().novelty())
                 + "; hold reuse " + FigureFormat.percent(s.holdReuseRate())
                 + (s.repetition().notEnoughDetail().isEmpty()
                         ? ""
@@ -217,8 +213,8 @@ public final class AuditText {
                 new StringBuilder("Settings: look-back " + a.settings().lookbackDays()
                         + " days, near-repeat threshold "
                         + a.settings().nearRepeatThreshold().toPlainString() + ", reach "
-                        + FigureFormat.round(a.settings().reachFactor(), 2) + " × "
-                        + FigureFormat.round(a.settings().reachHeightM(), 2) + " m");
+                        + Figures.REACH_FACTOR.text(a.settings().reachFactor()) + " × "
+                        + Figures.REACH_HEIGHT.text(a.settings().reachHeightM()) + " m");
         for (Discipline d : Discipline.values()) {
             x.append(", ")
                     .append(d.word())

@@ -3,6 +3,7 @@ package org.variset.cli.render;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.plan.ResetPlan;
 import org.variset.reports.plan.VarietyGaps;
@@ -81,8 +82,8 @@ public final class PlanText {
         }
         out.add("Grade slots: " + String.join(", ", slots));
         out.add("  The gym's " + p.discipline().word() + " routes up that day sit "
-                + FigureFormat.of("emd_to_target", gs.distanceNow()) + " bands from the target; with these slots in "
-                + "place of " + p.wall() + "'s current routes, " + FigureFormat.of("emd_to_target", gs.distanceAfter())
+                + Figures.GRADES_DISTANCE.text(gs.distanceNow()) + " bands from the target; with these slots in "
+                + "place of " + p.wall() + "'s current routes, " + Figures.GRADES_DISTANCE.text(gs.distanceAfter())
                 + " (Wasserstein-1 distance, the least any " + p.routes()
                 + " slots can give" + (gs.targetIsDefault() ? "; against the example pyramid" : "") + ").");
         long restTotal = java.util.Arrays.stream(gs.rest()).sum();

@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 import org.variset.archive.grade.Discipline;
-import org.variset.reports.audit.Headline;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
 import org.variset.reports.trend.ChainComparison;
@@ -12,13 +12,6 @@ import org.variset.reports.trend.Trend;
 
 /** A trend as text for people. */
 public final class TrendText {
-    private static final List<String> MONTH_KEYS = List.of(
-            "score.score",
-            "grip.sector_entropy",
-            "grip.up_share",
-            "holds.hill_n1",
-            "moves.coverage",
-            "grades.emd_to_target");
 
     private TrendText() {}
 
@@ -43,15 +36,15 @@ public final class TrendText {
     private static void months(StringBuilder b, Trend t) {
         b.append("Month-end figures of the gym's routes up (score is a heuristic; novelty is not part of it here)\n");
         b.append(String.format("  %-10s %6s", "day", "routes"));
-        MONTH_KEYS.forEach(k -> b.append(String.format(" %10s", shortLabel(k))));
+        Figures.TREND.forEach(k -> b.append(String.format(" %10s", k.shortLabel())));
         b.append('\n');
         for (Trend.MonthPoint p : t.months()) {
             if (!p.scope().equals("gym")) {
                 continue;
             }
             b.append(String.format("  %-10s %6d", p.day(), p.routes()));
-            MONTH_KEYS.forEach(k ->
-                    b.append(String.format(" %10s", Headline.text(k, p.figures().get(k)))));
+            Figures.TREND.forEach(k ->
+                    b.append(String.format(" %10s", k.text(p.figures().get(k.key())))));
             b.append('\n');
         }
         List<String> gaps = t.months().stream()
@@ -80,7 +73,7 @@ public final class TrendText {
                     .append(w.resets().size())
                     .append(w.resets().size() == 1 ? " reset" : " resets")
                     .append(", mean score ")
-                    .append(FigureFormat.of("score", w.meanScore()))
+                    .append(Figures.SCORE.text(w.meanScore()))
                     .append("; ")
                     .append(
                             w.lastReset() == null
@@ -98,7 +91,7 @@ public final class TrendText {
         b.append("\nRoute lifetime: ")
                 .append(l.stripped())
                 .append(" routes came down in the period, median ")
-                .append(l.medianDays() == null ? FigureFormat.NONE : FigureFormat.round(l.medianDays(), 1))
+                .append(Figures.LIFETIME.text(l.medianDays()))
                 .append(" days up; ")
                 .append(l.stillUp())
                 .append(" up on ")
@@ -136,7 +129,7 @@ public final class TrendText {
                     .append(
                             g.emdToTarget() == null
                                     ? "; no target"
-                                    : "; " + FigureFormat.of("emd_to_target", g.emdToTarget())
+                                    : "; " + Figures.GRADES_DISTANCE.text(g.emdToTarget())
                                             + " bands from the target"
                                             + (t.targetIsExample().get(e.getKey()) ? " (the example pyramid)" : ""))
                     .append('\n');
@@ -151,7 +144,7 @@ public final class TrendText {
                         .append(" repeats ")
                         .append(r.pair().other())
                         .append(" (Jaccard ")
-                        .append(FigureFormat.of("jaccard", r.pair().similarity().jaccard()))
+                        .append(Figures.JACCARD.text(r.pair().similarity().jaccard()))
                         .append(")\n"));
     }
 
@@ -166,7 +159,7 @@ public final class TrendText {
                 .append(c.rows().size())
                 .append(" gyms)\n\n");
         b.append(String.format("  %-24s %6s %6s %6s %6s", "gym", "set", "resets", "mean", "up"));
-        ChainComparison.FIGURES.forEach(k -> b.append(String.format(" %10s", shortLabel(k))));
+        Figures.TREND.forEach(k -> b.append(String.format(" %10s", k.shortLabel())));
         b.append(String.format(" %7s %7s %8s %7s%n", "due", "overdue", "lifetime", "repeats"));
         for (ChainComparison.Row r : c.rows()) {
             b.append(String.format(
@@ -174,15 +167,15 @@ public final class TrendText {
                     clip(r.gym(), 24),
                     r.routesSet(),
                     r.resets(),
-                    FigureFormat.of("score", r.meanResetScore()),
+                    Figures.SCORE.text(r.meanResetScore()),
                     r.routesUp()));
-            ChainComparison.FIGURES.forEach(k ->
-                    b.append(String.format(" %10s", Headline.text(k, r.figures().get(k)))));
+            Figures.TREND.forEach(k ->
+                    b.append(String.format(" %10s", k.text(r.figures().get(k.key())))));
             b.append(String.format(
                     " %7s %7s %8s %7d%n",
                     r.wallsDue() + "/" + r.walls(),
                     r.wallsOverdue() + "/" + r.walls(),
-                    r.medianLifetimeDays() == null ? FigureFormat.NONE : FigureFormat.round(r.medianLifetimeDays(), 1),
+                    Figures.LIFETIME.text(r.medianLifetimeDays()),
                     r.nearRepeats()));
         }
         b.append("\n  set: routes set in the period; mean: mean score of its resets; up: routes up at the last month "
@@ -209,9 +202,5 @@ public final class TrendText {
                 .limit(n)
                 .map(e -> e.getKey() + " " + FigureFormat.percent(e.getValue()))
                 .collect(Collectors.joining(", "));
-    }
-
-    private static String shortLabel(String key) {
-        return ChainComparison.label(key);
     }
 }

@@ -9,6 +9,8 @@ import java.util.Map;
 import org.variset.archive.grade.Discipline;
 import org.variset.archive.problem.Remedy;
 import org.variset.archive.read.RouteRecord;
+import org.variset.reports.catalogue.Figure;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FiguresJson;
 import org.variset.reports.scoring.repetition.RepetitionFigures;
 
@@ -107,7 +109,7 @@ public final class AuditJson {
                 cols.addObject().put("name", c.name()).put("routes", c.routes().size()));
         ObjectNode figures = o.putObject("figures");
         List<Map<String, Double>> values = columns.stream().map(Headline::of).toList();
-        for (String key : Headline.LABELS.keySet()) {
+        for (String key : Figures.HEADLINE.stream().map(Figure::key).toList()) {
             ArrayNode row = figures.putArray(key);
             values.forEach(v -> row.add(v.get(key)));
         }
@@ -115,7 +117,7 @@ public final class AuditJson {
             ObjectNode change = o.putObject("change_since_previous");
             Map<String, Double> now = values.get(0);
             Map<String, Double> before = values.get(1);
-            for (String key : Headline.LABELS.keySet()) {
+            for (String key : Figures.HEADLINE.stream().map(Figure::key).toList()) {
                 Double n = now.get(key);
                 Double b = before.get(key);
                 change.put(key, n == null || b == null ? null : n - b);

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 import org.variset.archive.grade.Discipline;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FeatureText;
 import org.variset.reports.figures.ProfileFigures;
 import org.variset.reports.figures.RouteLineFigures;
@@ -164,8 +165,8 @@ final class Findings {
     private void reach() {
         double limit = f.line().reachK() * f.line().reachHeightM();
         List<RouteLineFigures> flagged = f.line().flagged();
-        String caveat = " (longer than " + FigureFormat.round(limit, 2) + " m; a heuristic, not a measurement of any "
-                + "climber)";
+        String caveat =
+                " (longer than " + Figures.SPAN.text(limit) + " m; a heuristic, not a measurement of any " + "climber)";
         if (flagged.size() > 2) {
             out.add(new Finding(
                     "reach",
@@ -175,11 +176,8 @@ final class Findings {
                             + FeatureText.list(
                                     flagged.stream()
                                             .map(r -> r.route() + " "
-                                                    + FigureFormat.round(
-                                                            r.spans()
-                                                                    .get(r.longSpans()
-                                                                            .get(0)),
-                                                            2) + " m")
+                                                    + Figures.SPAN.text(r.spans()
+                                                            .get(r.longSpans().get(0))) + " m")
                                             .toList(),
                                     4)
                             + "."));
@@ -190,8 +188,8 @@ final class Findings {
             out.add(new Finding(
                     "reach",
                     3,
-                    r.route() + ": a " + FigureFormat.round(r.spans().get(i), 2) + " m span between hand holds "
-                            + (i + 1) + " and " + (i + 2) + caveat + "."));
+                    r.route() + ": a " + Figures.SPAN.text(r.spans().get(i)) + " m span between hand holds " + (i + 1)
+                            + " and " + (i + 2) + caveat + "."));
         }
     }
 
@@ -207,8 +205,8 @@ final class Findings {
                     "change",
                     4,
                     "Grip variety (sector entropy) " + (now < before ? "fell" : "rose")
-                            + " from " + FigureFormat.of("sector_entropy", before) + " to "
-                            + FigureFormat.of("sector_entropy", now) + " since the " + p.name() + "."));
+                            + " from " + Figures.GRIP_SECTOR_ENTROPY.text(before) + " to "
+                            + Figures.GRIP_SECTOR_ENTROPY.text(now) + " since the " + p.name() + "."));
         }
     }
 

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import org.variset.archive.grade.Discipline;
 import org.variset.archive.problem.Remedy;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FeatureText;
 import org.variset.reports.figures.GradeGaps;
 import org.variset.reports.figures.SetFigures;
@@ -65,7 +66,7 @@ final class GradeFindings {
                         "grade_distance",
                         weight - 1.5 + g.emdToTarget(),
                         capitalised(whose)
-                                + " sit on average " + FigureFormat.of("emd_to_target", g.emdToTarget())
+                                + " sit on average " + Figures.GRADES_DISTANCE.text(g.emdToTarget())
                                 + " bands from the "
                                 + "target" + skew(g) + (gaps.isEmpty() ? example : "") + ".",
                         gaps.isEmpty() ? remedy : Remedy.NONE));

@@ -2,8 +2,8 @@ package org.variset.reports.audit;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FeatureText;
-import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.repetition.RepetitionFigures;
 
 /** Sentences for near-repeats: against the look-back window, then inside the set itself. */
@@ -25,7 +25,7 @@ final class RepeatFindings {
                     9 - i * 0.01,
                     p.route() + " repeats " + p.other() + ": "
                             + FeatureText.shared(p.similarity().sharedFeatures()) + " (Jaccard "
-                            + FigureFormat.of("jaccard", p.similarity().jaccard()) + ")."));
+                            + Figures.JACCARD.text(p.similarity().jaccard()) + ")."));
         }
         if (near.size() > SHOWN) {
             out.add(new Finding(
@@ -43,7 +43,7 @@ final class RepeatFindings {
                     p.route() + " and " + p.other()
                             + " are near-repeats of each other in this set: "
                             + FeatureText.shared(p.similarity().sharedFeatures()) + " (Jaccard "
-                            + FigureFormat.of("jaccard", p.similarity().jaccard()) + ")."));
+                            + Figures.JACCARD.text(p.similarity().jaccard()) + ")."));
         }
     }
 

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.Map;
 import org.variset.archive.grade.Discipline;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.scoring.grades.GradeFigures;
 import org.variset.reports.scoring.grip.GripStatistics;
 import org.variset.reports.scoring.profile.ProfileClass;
@@ -20,12 +21,12 @@ public final class FiguresJson {
     /** Writes every block of the figures into o, reasons into undefined. */
     public static void write(ObjectNode o, SetFigures f, ObjectNode undefined) {
         grip(o.putObject("grip"), f.grip(), undefined);
-        variety(o.putObject("holds"), "holds", f.holds(), undefined);
-        variety(o.putObject("hold_shapes"), "hold_shapes", f.holdShapes(), undefined);
-        variety(o.putObject("sizes"), "sizes", f.sizes(), undefined);
-        variety(o.putObject("moves"), "moves", f.moves(), undefined);
-        variety(o.putObject("styles"), "styles", f.styles(), undefined);
-        variety(o.putObject("angles"), "angles", f.angles(), undefined);
+        variety(o, Figures.HOLDS, f.holds(), undefined);
+        variety(o, Figures.HOLD_SHAPES, f.holdShapes(), undefined);
+        variety(o, Figures.SIZES, f.sizes(), undefined);
+        variety(o, Figures.MOVES, f.moves(), undefined);
+        variety(o, Figures.STYLES, f.styles(), undefined);
+        variety(o, Figures.ANGLES, f.angles(), undefined);
         ObjectNode grades = o.putObject("grades");
         for (Map.Entry<Discipline, GradeFigures> e : f.grades().entrySet()) {
             grades(grades.putObject(e.getKey().word()), "grades." + e.getKey().word(), e.getValue(), undefined);
@@ -64,16 +65,18 @@ public final class FiguresJson {
         g.undefined().forEach((k, why) -> undefined.put("grip." + k, why));
     }
 
-    private static void variety(ObjectNode o, String block, VarietyFigures v, ObjectNode undefined) {
-        o.put("n", v.n())
-                .put("missing", v.missing())
-                .put("richness", v.richness())
-                .put("shannon", v.shannon())
-                .put("pielou", v.pielou())
-                .put("gini_simpson", v.giniSimpson())
-                .put("hill_n1", v.hillN1())
-                .put("hill_n2", v.hillN2())
-                .put("coverage", v.coverage());
+    private static void variety(ObjectNode parent, Figures.Variety c, VarietyFigures v, ObjectNode undefined) {
+        String block = c.n().key().substring(0, c.n().key().indexOf('.'));
+        ObjectNode o = parent.putObject(block);
+        o.put(c.n().leaf(), v.n())
+                .put(c.missing().leaf(), v.missing())
+                .put(c.richness().leaf(), v.richness())
+                .put(c.shannon().leaf(), v.shannon())
+                .put(c.pielou().leaf(), v.pielou())
+                .put(c.giniSimpson().leaf(), v.giniSimpson())
+                .put(c.hillN1().leaf(), v.hillN1())
+                .put(c.hillN2().leaf(), v.hillN2())
+                .put(c.coverage().leaf(), v.coverage());
         ObjectNode counts = o.putObject("counts");
         v.counts().forEach(counts::put);
         v.undefined().forEach((k, why) -> undefined.put(block + "." + k, why));

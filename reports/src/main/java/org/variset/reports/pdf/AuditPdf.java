@@ -12,6 +12,8 @@ import org.variset.reports.audit.Audit;
 import org.variset.reports.audit.Headline;
 import org.variset.reports.audit.SetResult;
 import org.variset.reports.audit.Subject;
+import org.variset.reports.catalogue.Figure;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FeatureText;
 import org.variset.reports.figures.RouteLineFigures;
 import org.variset.reports.figures.SetFigures;
@@ -86,7 +88,7 @@ public final class AuditPdf {
                 PdfDoc.BODY,
                 false,
                 Palette.MUTED);
-        doc.paragraph("Score " + FigureFormat.of("score", s.score().score()) + " of 100", 22, true, Palette.BLUE);
+        doc.paragraph("Score " + Figures.SCORE.text(s.score().score()) + " of 100", 22, true, Palette.BLUE);
         if (s.score().score() == null) {
             doc.paragraph(s.undefined().getOrDefault("score", "too few of its parts could be measured"));
         }
@@ -123,25 +125,31 @@ public final class AuditPdf {
     private List<String> changes() {
         Map<String, Double> now = Headline.of(a.audited());
         Map<String, Double> before = Headline.of(a.previous());
-        List<Map.Entry<String, Double>> moved = new ArrayList<>();
-        for (String k : Headline.LABELS.keySet()) {
-            Double n = now.get(k);
-            Double b = before.get(k);
-            if (n != null && b != null && !k.equals("score.score")) {
-                double scale = k.endsWith("hill_n1") ? 10 : 1;
+        List<Map.Entry<Figure, Double>> moved = new ArrayList<>();
+        for (Figure k : Figures.HEADLINE) {
+            Double n = now.get(k.key());
+            Double b = before.get(k.key());
+            if (n != null && b != null && k != Figures.SCORE) {
+                // Effective numbers run to tens while the other figures lie in [0, 1]: compare like with like.
+                double scale = k.unit() == Figure.Unit.NUMBER && k.decimals() == 1 ? 10 : 1;
                 moved.add(Map.entry(k, Math.abs(n - b) / scale));
             }
         }
-        moved.sort(Map.Entry.<String, Double>comparingByValue().reversed());
+        moved.sort(Map.Entry.<Figure, Double>comparingByValue().reversed());
         List<String> out = new ArrayList<>();
-        out.add("score: " + Headline.text("score.score", before.get("score.score")) + " → "
-                + Headline.text("score.score", now.get("score.score")));
-        moved.stream()
-                .limit(4)
-                .forEach(e -> out.add(Headline.LABELS.get(e.getKey()) + ": "
-                        + Headline.text(e.getKey(), before.get(e.getKey())) + " → "
-                        + Headline.text(e.getKey(), now.get(e.getKey()))));
+        out.add(change(Figures.SCORE, now, before));
+        moved.stream().limit(4).forEach(e -> out.add(change(e.getKey(), now, before)));
         return out;
+    }
+
+    /** "grip direction spread (sector entropy): 0.71 → 0.80, better". */
+    private static String change(Figure f, Map<String, Double> now, Map<String, Double> before) {
+        Double n = now.get(f.key());
+        Double b = before.get(f.key());
+        java.math.BigDecimal d = f.difference(n, b);
+        String judged = d == null ? "" : f.better().judge(d);
+        return (f == Figures.SCORE ? "score" : f.label()) + ": " + f.text(b) + " → " + f.text(n)
+                + (judged.isEmpty() ? "" : ", " + judged);
     }
 
     private void sideBySide() {
@@ -151,10 +159,10 @@ public final class AuditPdf {
         header.add("figure");
         cols.forEach(c -> header.add(c.name() + " (" + c.routes().size() + " routes)"));
         List<List<String>> rows = new ArrayList<>();
-        for (Map.Entry<String, String> k : Headline.LABELS.entrySet()) {
+        for (Figure k : Figures.HEADLINE) {
             List<String> row = new ArrayList<>();
-            row.add(k.getValue());
-            values.forEach(v -> row.add(Headline.text(k.getKey(), v.get(k.getKey()))));
+            row.add(k.label());
+            values.forEach(v -> row.add(k.text(v.get(k.key()))));
             rows.add(row);
         }
         float[] widths = new float[header.size()];
@@ -175,12 +183,12 @@ public final class AuditPdf {
         }
         doc.drawing(300, 250, (gr, size) -> Drawings.rose(gr, size[0], size[1], g, doc.fonts()));
         doc.paragraph(g.n() + " hand grips (" + g.undirected() + " hand holds without a direction). Resultant "
-                + "length " + FigureFormat.of("resultant_length", g.resultantLength()) + " (0 spread, 1 all one way); "
-                + "circular standard deviation " + FigureFormat.of("circular_sd_deg", g.circularSdDeg()) + "°; "
-                + "sector entropy " + FigureFormat.of("sector_entropy", g.sectorEntropy()) + "; edges horizontal "
+                + "length " + Figures.GRIP_RESULTANT.text(g.resultantLength()) + " (0 spread, 1 all one way); "
+                + "circular standard deviation " + Figures.GRIP_SD.text(g.circularSdDeg()) + "°; "
+                + "sector entropy " + Figures.GRIP_SECTOR_ENTROPY.text(g.sectorEntropy()) + "; edges horizontal "
                 + FigureFormat.percent(g.horizontalEdgeShare()) + ", vertical "
                 + FigureFormat.percent(g.verticalEdgeShare()) + "; Rayleigh test p "
-                + FigureFormat.of("rayleigh_p", g.rayleighP())
+                + Figures.GRIP_RAYLEIGH_P.text(g.rayleighP())
                 + ". Gravity favours up-facing holds, so a small p is expected on most walls and is no finding on "
                 + "its own.");
     }
@@ -193,14 +201,14 @@ public final class AuditPdf {
             return;
         }
         doc.chart(Charts.bars(doc.fonts(), "placements", sortedCounts(f.holds()), false), doc.width(), 150);
-        doc.paragraph("Hold types: " + summary(f.holds()) + ".");
+        doc.paragraph("Hold types: " + summary(f.holds(), Figures.HOLDS) + ".");
         if (f.sizes().n() > 0) {
             Map<String, Long> sizes = new LinkedHashMap<>();
             for (String s : List.of("xs", "s", "m", "l", "xl")) {
                 sizes.put(s, f.sizes().counts().getOrDefault(s, 0L));
             }
             doc.chart(Charts.bars(doc.fonts(), "placements", sizes, false), doc.width() * 0.6f, 110);
-            doc.paragraph("Sizes: " + summary(f.sizes())
+            doc.paragraph("Sizes: " + summary(f.sizes(), Figures.SIZES)
                     + (f.sizes().missing() > 0 ? "; " + f.sizes().missing() + " placements without a size" : "") + ".");
         }
     }
@@ -253,10 +261,10 @@ public final class AuditPdf {
                 .forEach(b -> observed.put(b, inside == 0 ? 0 : g.histogram().getOrDefault(b, 0L) / (double) inside));
         doc.chart(Charts.barsAgainstTarget(doc.fonts(), observed, g.target()), doc.width(), 140);
         boolean example = a.settings().targetIsDefault(d);
-        doc.paragraph("Distance to target " + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands "
-                + "(Wasserstein-1); chi-square " + FigureFormat.of("chi_square", g.chiSquare()) + " on "
+        doc.paragraph("Distance to target " + Figures.GRADES_DISTANCE.text(g.emdToTarget()) + " bands "
+                + "(Wasserstein-1); chi-square " + Figures.GRADES_CHI_SQUARE.text(g.chiSquare()) + " on "
                 + (g.chiSquareDf() == null ? FigureFormat.NONE : g.chiSquareDf()) + " df, p "
-                + FigureFormat.of("chi_square_p", g.chiSquareP())
+                + Figures.GRADES_CHI_SQUARE_P.text(g.chiSquareP())
                 + (Boolean.FALSE.equals(g.chiSquareReliable())
                         ? " (too few routes for the test to be reliable: Cochran's rule)"
                         : "")
@@ -275,7 +283,8 @@ public final class AuditPdf {
         if (f.moves().n() > 0) {
             doc.chart(Charts.bars(doc.fonts(), "times listed", sortedCounts(f.moves()), false), doc.width(), 140);
         }
-        doc.paragraph("Moves: " + summary(f.moves()) + ". Styles: " + summary(f.styles()) + ".");
+        doc.paragraph("Moves: " + summary(f.moves(), Figures.MOVES) + ". Styles: " + summary(f.styles(), Figures.STYLES)
+                + ".");
     }
 
     private void profiles() {
@@ -285,7 +294,7 @@ public final class AuditPdf {
         f.profiles().counts().forEach((k, v) -> c.put(k.key().replace('_', ' '), v));
         doc.chart(Charts.bars(doc.fonts(), "routes", c, false), doc.width() * 0.7f, 110);
         doc.paragraph(
-                "Split entropy " + FigureFormat.of("split_entropy", f.profiles().splitEntropy()) + " (0: every "
+                "Split entropy " + Figures.PROFILE_SPREAD.text(f.profiles().splitEntropy()) + " (0: every "
                         + "classified route alike; 1: an even spread over steady, sustained, single crux and multi crux). "
                         + f.profiles().counts().get(ProfileClass.UNCLASSIFIED) + " routes have fewer than three move "
                         + "difficulties and are unclassified.");
@@ -299,7 +308,7 @@ public final class AuditPdf {
             doc.paragraph("Not measured.");
             return;
         }
-        doc.paragraph("Novelty " + FigureFormat.of("novelty", r.novelty())
+        doc.paragraph("Novelty " + Figures.NOVELTY.text(r.novelty())
                 + (r.novelty() == null ? " (" + s.undefined().getOrDefault("novelty", "") + ")" : "") + "; hold reuse "
                 + FigureFormat.percent(s.holdReuseRate()) + "; compared with " + s.windowRoutes()
                 + " routes of the look-back "
@@ -319,7 +328,7 @@ public final class AuditPdf {
             rows.add(List.of(
                     p.route(),
                     p.other(),
-                    FigureFormat.of("jaccard", p.similarity().jaccard()),
+                    Figures.JACCARD.text(p.similarity().jaccard()),
                     FeatureText.shared(p.similarity().sharedFeatures())));
         }
         doc.table(List.of("route", "repeats", "Jaccard", "shared"), rows, new float[] {2.2f, 2.2f, 0.8f, 4.5f});
@@ -329,10 +338,10 @@ public final class AuditPdf {
         SetFigures f = a.audited().figures();
         doc.heading("Route lines and reach", false);
         doc.paragraph("Geometric index of entropy (0 straight, larger wandering): mean "
-                + FigureFormat.of("gie_mean", f.line().gieMean()) + " over "
+                + Figures.GIE_MEAN.text(f.line().gieMean()) + " over "
                 + f.line().withGie() + " routes. A span longer than "
-                + FigureFormat.round(f.line().reachK(), 2) + " × "
-                + FigureFormat.round(f.line().reachHeightM(), 2)
+                + Figures.REACH_FACTOR.text(f.line().reachK()) + " × "
+                + Figures.REACH_HEIGHT.text(f.line().reachHeightM())
                 + " m is flagged: a heuristic (arm span is close to height in most adults), not a measurement of any "
                 + "climber.");
         List<List<String>> rows = new ArrayList<>();
@@ -340,8 +349,8 @@ public final class AuditPdf {
             rows.add(List.of(
                     r.route(),
                     String.valueOf(r.handHolds()),
-                    r.pathLength() == null ? FigureFormat.NONE : FigureFormat.round(r.pathLength(), 2),
-                    FigureFormat.of("gie", r.gie()),
+                    Figures.PATH_LENGTH.text(r.pathLength()),
+                    Figures.GIE.text(r.gie()),
                     r.longSpans().isEmpty() ? "" : r.longSpans().size() + " long"));
         }
         doc.table(List.of("route", "hand holds", "path (m)", "GIE", "spans flagged"), rows, new float[] {
@@ -381,8 +390,8 @@ public final class AuditPdf {
         doc.heading("Settings used", false);
         doc.paragraph("Look-back " + a.settings().lookbackDays() + " days; near-repeat threshold "
                 + a.settings().nearRepeatThreshold().toPlainString() + "; reach "
-                + FigureFormat.round(a.settings().reachFactor(), 2) + " × "
-                + FigureFormat.round(a.settings().reachHeightM(), 2)
+                + Figures.REACH_FACTOR.text(a.settings().reachFactor()) + " × "
+                + Figures.REACH_HEIGHT.text(a.settings().reachHeightM())
                 + " m; score weights "
                 + String.join(
                         ", ",
@@ -409,12 +418,12 @@ public final class AuditPdf {
         return out;
     }
 
-    private static String summary(VarietyFigures v) {
+    private static String summary(VarietyFigures v, Figures.Variety c) {
         if (v.n() == 0) {
             return "none recorded";
         }
         return v.richness() + " kinds in " + v.n() + "; effective number (Hill N1) "
-                + FigureFormat.of("hill_n1", v.hillN1())
-                + (v.coverage() == null ? "" : ", coverage " + FigureFormat.of("coverage", v.coverage()));
+                + c.hillN1().text(v.hillN1())
+                + (v.coverage() == null ? "" : ", coverage " + c.coverage().text(v.coverage()));
     }
 }

@@ -9,7 +9,7 @@ import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.util.List;
 import org.variset.archive.route.GripDirection;
-import org.variset.reports.format.FigureFormat;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.scoring.grip.GripStatistics;
 import org.variset.reports.scoring.line.Point;
 
@@ -76,8 +76,8 @@ final class Drawings {
             g.fill(head);
             g.setColor(Palette.INK);
             g.drawString(
-                    "arrow: mean direction " + FigureFormat.of("mean_direction_deg", s.meanDirectionDeg())
-                            + "°, length R̄ = " + FigureFormat.of("resultant_length", s.resultantLength()),
+                    "arrow: mean direction " + Figures.GRIP_MEAN_DIRECTION.text(s.meanDirectionDeg())
+                            + "°, length R̄ = " + Figures.GRIP_RESULTANT.text(s.resultantLength()),
                     2,
                     9);
         }

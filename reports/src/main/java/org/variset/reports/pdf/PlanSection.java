@@ -3,6 +3,7 @@ package org.variset.reports.pdf;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.plan.ResetPlan;
 import org.variset.reports.plan.VarietyGaps;
@@ -33,9 +34,9 @@ final class PlanSection {
                 1.2f, 1.4f, 1.6f, 1.2f
             });
             doc.paragraph("With these slots in place of " + p.wall() + "'s current routes, the gym's "
-                    + p.discipline().word() + " routes move from " + FigureFormat.of("emd_to_target", gs.distanceNow())
+                    + p.discipline().word() + " routes move from " + Figures.GRADES_DISTANCE.text(gs.distanceNow())
                     + " to "
-                    + FigureFormat.of("emd_to_target", gs.distanceAfter()) + " bands from the target (the least any "
+                    + Figures.GRADES_DISTANCE.text(gs.distanceAfter()) + " bands from the target (the least any "
                     + p.routes() + " slots can give; ties go to the wall's previous mix)"
                     + (gs.targetIsDefault() ? "; the target is the example pyramid" : "") + ".");
         }

@@ -8,7 +8,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.variset.archive.grade.Discipline;
-import org.variset.reports.audit.Headline;
+import org.variset.reports.catalogue.Figure;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
 import org.variset.reports.trend.ChainComparison;
@@ -69,7 +70,7 @@ public final class TrendPdf {
                 Map<LocalDate, Double> line = score.computeIfAbsent(t.gym(), k -> new LinkedHashMap<>());
                 t.months().stream()
                         .filter(p -> p.scope().equals("gym"))
-                        .forEach(p -> line.put(p.day(), p.figures().get("score.score")));
+                        .forEach(p -> line.put(p.day(), p.figures().get(Figures.SCORE.key())));
             }
             doc.paragraph(
                     "Month-end score of each gym's routes up (a heuristic, without novelty here)",
@@ -99,16 +100,15 @@ public final class TrendPdf {
                     r.gym(),
                     String.valueOf(r.routesSet()),
                     String.valueOf(r.resets()),
-                    FigureFormat.of("score", r.meanResetScore()),
+                    Figures.SCORE.text(r.meanResetScore()),
                     String.valueOf(r.routesUp())));
-            ChainComparison.FIGURES.forEach(
-                    k -> row.add(Headline.text(k, r.figures().get(k))));
+            Figures.TREND.forEach(k -> row.add(k.text(r.figures().get(k.key()))));
             row.add(r.wallsOverdue() + "/" + r.walls());
             row.add(String.valueOf(r.nearRepeats()));
             rows.add(row);
         }
         List<String> header = new ArrayList<>(List.of("gym", "set", "resets", "mean score", "up"));
-        ChainComparison.FIGURES.forEach(k -> header.add(ChainComparison.label(k)));
+        Figures.TREND.forEach(k -> header.add(k.shortLabel()));
         header.add("overdue");
         header.add("repeats");
         doc.table(header, rows, new float[] {
@@ -123,7 +123,7 @@ public final class TrendPdf {
             rows.add(List.of(
                     w.wall(),
                     String.valueOf(w.resets().size()),
-                    FigureFormat.of("score", w.meanScore()),
+                    Figures.SCORE.text(w.meanScore()),
                     w.lastReset() == null ? FigureFormat.NONE : w.lastReset().toString(),
                     w.daysSince() == null ? FigureFormat.NONE : w.daysSince().toString(),
                     String.valueOf(w.cycleDays()),
@@ -138,7 +138,7 @@ public final class TrendPdf {
                 new float[] {2.2f, 1, 1.1f, 1.6f, 1, 1, 1.2f, 1.2f});
         Trend.Lifetime l = t.lifetime();
         doc.paragraph(l.stripped() + " routes came down in the period after a median of "
-                + (l.medianDays() == null ? FigureFormat.NONE : FigureFormat.round(l.medianDays(), 1)) + " days up; "
+                + (Figures.LIFETIME.text(l.medianDays())) + " days up; "
                 + l.stillUp() + " were up "
                 + "on " + t.to() + ". A wall is due after its cycle and overdue "
                 + (t.walls().isEmpty() ? 14 : t.walls().get(0).overdueAfterDays())
@@ -158,7 +158,7 @@ public final class TrendPdf {
                 .forEach(r -> rows.add(List.of(
                         r.pair().route(),
                         r.pair().other(),
-                        FigureFormat.of("jaccard", r.pair().similarity().jaccard()))));
+                        Figures.JACCARD.text(r.pair().similarity().jaccard()))));
         doc.table(List.of("route", "repeats", "Jaccard"), rows, new float[] {3, 3, 1});
         if (t.repeats().size() > 12) {
             doc.paragraph((t.repeats().size() - 12) + " more in the trend's JSON form.");
@@ -170,18 +170,20 @@ public final class TrendPdf {
         Map<String, Map<LocalDate, Double>> score = new LinkedHashMap<>();
         Map<String, Map<LocalDate, Double>> variety = new LinkedHashMap<>();
         Map<String, Map<LocalDate, Double>> grades = new LinkedHashMap<>();
-        for (String k : List.of("grip.sector_entropy", "holds.coverage", "moves.coverage")) {
-            variety.put(Headline.LABELS.get(k), new LinkedHashMap<>());
+        List<Figure> followed =
+                List.of(Figures.GRIP_SECTOR_ENTROPY, Figures.HOLDS.coverage(), Figures.MOVES.coverage());
+        for (Figure k : followed) {
+            variety.put(k.label(), new LinkedHashMap<>());
         }
         for (Trend.MonthPoint p : t.months()) {
             score.computeIfAbsent(p.scope().equals("gym") ? "whole gym" : p.scope(), k -> new LinkedHashMap<>())
-                    .put(p.day(), p.figures().get("score.score"));
+                    .put(p.day(), p.figures().get(Figures.SCORE.key()));
             if (p.scope().equals("gym")) {
-                for (String k : List.of("grip.sector_entropy", "holds.coverage", "moves.coverage")) {
-                    variety.get(Headline.LABELS.get(k)).put(p.day(), p.figures().get(k));
+                for (Figure k : followed) {
+                    variety.get(k.label()).put(p.day(), p.figures().get(k.key()));
                 }
                 grades.computeIfAbsent("bands from target", k -> new LinkedHashMap<>())
-                        .put(p.day(), p.figures().get("grades.emd_to_target"));
+                        .put(p.day(), p.figures().get(Figures.GRADES_DISTANCE.key()));
             }
         }
         doc.paragraph(
@@ -240,7 +242,7 @@ public final class TrendPdf {
                     .forEach(b ->
                             observed.put(b, inside == 0 ? 0 : g.histogram().getOrDefault(b, 0L) / (double) inside));
             doc.chart(Charts.barsAgainstTarget(doc.fonts(), observed, g.target()), doc.width(), 140);
-            doc.paragraph("Distance to target " + FigureFormat.of("emd_to_target", g.emdToTarget()) + " bands"
+            doc.paragraph("Distance to target " + Figures.GRADES_DISTANCE.text(g.emdToTarget()) + " bands"
                     + (Boolean.TRUE.equals(t.targetIsExample().get(e.getKey()))
                             ? "; the target is an example "
                                     + "pyramid (common practice, a heuristic), not the gym's own"

@@ -5,6 +5,8 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.variset.reports.catalogue.Figure;
+import org.variset.reports.catalogue.Figures;
 
 /**
  * Several gyms' trends over one period, side by side: what a chain's manager compares. Each row is read from one
@@ -17,28 +19,6 @@ import java.util.Map;
  */
 public record ChainComparison(LocalDate from, LocalDate to, List<Row> rows) {
 
-    /** The month-end figures compared, in column order (headline keys). */
-    public static final List<String> FIGURES = List.of(
-            "score.score",
-            "grip.sector_entropy",
-            "grip.up_share",
-            "holds.hill_n1",
-            "moves.coverage",
-            "grades.emd_to_target");
-
-    /** A short column label for a compared figure. */
-    public static String label(String key) {
-        return switch (key) {
-            case "score.score" -> "score";
-            case "grip.sector_entropy" -> "grip sprd";
-            case "grip.up_share" -> "up share";
-            case "holds.hill_n1" -> "hold types";
-            case "moves.coverage" -> "moves cov";
-            case "grades.emd_to_target" -> "grade dist";
-            default -> key;
-        };
-    }
-
     /**
      * One gym.
      *
@@ -47,7 +27,7 @@ public record ChainComparison(LocalDate from, LocalDate to, List<Row> rows) {
      * @param resets resets in the period
      * @param meanResetScore the mean composite score of its scored resets, or null
      * @param routesUp routes up on the period's last month-end point
-     * @param figures the gym's headline figures at that point ({@link #FIGURES}), null where undefined
+     * @param figures the gym's headline figures at that point ({@link Figures#TREND}), null where undefined
      * @param walls its walls
      * @param wallsDue walls due for a reset on the status day
      * @param wallsOverdue walls overdue on the status day
@@ -98,8 +78,8 @@ public record ChainComparison(LocalDate from, LocalDate to, List<Row> rows) {
             }
         }
         Map<String, Double> figures = new LinkedHashMap<>();
-        for (String k : FIGURES) {
-            figures.put(k, last == null ? null : last.figures().get(k));
+        for (Figure k : Figures.TREND) {
+            figures.put(k.key(), last == null ? null : last.figures().get(k.key()));
         }
         int resets = t.walls().stream().mapToInt(w -> w.resets().size()).sum();
         int due = (int) t.walls().stream().filter(w -> w.status().equals("due")).count();

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.Map;
 import org.variset.archive.grade.Discipline;
+import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FiguresJson;
 import org.variset.reports.scoring.grades.GradeFigures;
 
@@ -120,7 +121,7 @@ public final class TrendJson {
     /** The comparison as CSV: one row per gym (RFC 4180). */
     public static String csv(ChainComparison c) {
         StringBuilder b = new StringBuilder("gym,from,to,routes_set,resets,mean_reset_score,routes_up");
-        ChainComparison.FIGURES.forEach(k -> b.append(',').append(k));
+        Figures.TREND.forEach(k -> b.append(',').append(k.key()));
         b.append(",walls,walls_due,walls_overdue,median_lifetime_days,near_repeats\r\n");
         for (ChainComparison.Row r : c.rows()) {
             b.append(quote(r.gym()))
@@ -136,8 +137,7 @@ public final class TrendJson {
                     .append(num(r.meanResetScore()))
                     .append(',')
                     .append(r.routesUp());
-            ChainComparison.FIGURES.forEach(
-                    k -> b.append(',').append(num(r.figures().get(k))));
+            Figures.TREND.forEach(k -> b.append(',').append(num(r.figures().get(k.key()))));
             b.append(',')
                     .append(r.walls())
                     .append(',')

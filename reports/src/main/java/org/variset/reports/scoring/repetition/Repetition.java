@@ -15,9 +15,6 @@ import java.util.Set;
  * in its previous three resets, over all the reset's placements.
  */
 public final class Repetition {
-    /** The default near-repeat threshold (docs/spec/metrics.md). */
-    public static final BigDecimal DEFAULT_THRESHOLD = new BigDecimal("0.6");
-
     private Repetition() {}
 
     /**

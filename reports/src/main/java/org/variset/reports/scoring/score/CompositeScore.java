@@ -7,9 +7,8 @@ import java.util.Map;
 
 /**
  * The composite score (docs/spec/metrics.md section 7): 100 × the weighted mean of the parts that are not null, the weights
- * rescaled over those parts; null with fewer than three parts. Default weights: grip 0.25 (sector entropy), holds
- * 0.20 (hold-type coverage), moves 0.20 (move coverage), grades 0.15 (exp(−emd_to_target) of the gym's standing
- * set), novelty 0.20. A heuristic of ours, always shown beside its parts.
+ * rescaled over those parts; null with fewer than three parts. The weights are the gym's settings (their defaults,
+ * from the spec, are {@code GymSettings.DEFAULT_SCORE_WEIGHTS}). A heuristic of ours, always shown beside its parts.
  *
  * @param score the score, or null
  * @param parts each part's value in [0, 1] (null where undefined)
@@ -18,17 +17,6 @@ import java.util.Map;
  */
 public record CompositeScore(
         Double score, Map<String, Double> parts, Map<String, Double> weightsUsed, List<String> dropped) {
-
-    /** The default weights, in the spec's order. */
-    public static Map<String, Double> defaultWeights() {
-        Map<String, Double> w = new LinkedHashMap<>();
-        w.put("grip", 0.25);
-        w.put("holds", 0.20);
-        w.put("moves", 0.20);
-        w.put("grades", 0.15);
-        w.put("novelty", 0.20);
-        return w;
-    }
 
     /** The grades part from the standing set's distance to target: exp(−emd), null when the distance is. */
     public static Double gradesPart(Double emdToTarget) {

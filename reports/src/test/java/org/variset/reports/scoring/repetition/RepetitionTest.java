@@ -7,6 +7,7 @@ import java.math.BigDecimal;
 import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import org.variset.archive.settings.GymSettings;
 
 class RepetitionTest {
     private static RouteFeatures route(String id, List<String> moves, RouteFeatures.HandHold... holds) {
@@ -90,8 +91,8 @@ class RepetitionTest {
         assertThat(cd.shared()).isEqualTo(4);
         assertThat(cd.union()).isEqualTo(12);
         Similarity six = new Similarity(6, 10, Set.of());
-        assertThat(six.atLeast(Repetition.DEFAULT_THRESHOLD)).isTrue();
-        assertThat(new Similarity(5, 9, Set.of()).atLeast(Repetition.DEFAULT_THRESHOLD))
+        assertThat(six.atLeast(GymSettings.DEFAULT_THRESHOLD)).isTrue();
+        assertThat(new Similarity(5, 9, Set.of()).atLeast(GymSettings.DEFAULT_THRESHOLD))
                 .isFalse();
     }
 
@@ -100,7 +101,7 @@ class RepetitionTest {
         RouteFeatures thin = route("thin", List.of("dyno"), hold("jug", 0));
         RouteFeatures rich = route("rich", List.of("dyno", "match"), hold("jug", 0), hold("crimp", 2));
         assertThat(Similarity.of(thin, rich)).isNull();
-        RepetitionFigures r = Repetition.of(List.of(thin), List.of(rich), Repetition.DEFAULT_THRESHOLD);
+        RepetitionFigures r = Repetition.of(List.of(thin), List.of(rich), GymSettings.DEFAULT_THRESHOLD);
         assertThat(r.notEnoughDetail()).containsExactly("thin");
         assertThat(r.novelty()).isNull();
     }
@@ -110,14 +111,14 @@ class RepetitionTest {
         RouteFeatures earlier = route("Blue 3", List.of("heel hook", "dyno"), hold("crimp", 0), hold("pinch", 2));
         RouteFeatures again = route("Blue 7", List.of("heel hook", "dyno"), hold("crimp", 0), hold("pinch", 2));
         RouteFeatures twin = route("Red 2", List.of("heel hook", "dyno"), hold("crimp", 0), hold("pinch", 2));
-        RepetitionFigures r = Repetition.of(List.of(again, twin), List.of(earlier), Repetition.DEFAULT_THRESHOLD);
+        RepetitionFigures r = Repetition.of(List.of(again, twin), List.of(earlier), GymSettings.DEFAULT_THRESHOLD);
         assertThat(r.nearRepeats()).hasSize(2);
         assertThat(r.nearRepeats().get(0).similarity().sharedFeatures()).contains("pair:heel hook>dyno");
         assertThat(r.internalRepeats())
                 .singleElement()
                 .satisfies(p -> assertThat(p.other()).isEqualTo("Red 2"));
         assertThat(r.novelty()).isCloseTo(0.0, within(1e-12));
-        assertThat(Repetition.of(List.of(again), List.of(), Repetition.DEFAULT_THRESHOLD)
+        assertThat(Repetition.of(List.of(again), List.of(), GymSettings.DEFAULT_THRESHOLD)
                         .novelty())
                 .isEqualTo(1.0);
     }
@@ -129,7 +130,7 @@ class RepetitionTest {
         RouteFeatures rope = RouteFeatures.of(
                 "r", "rope", List.of(hold("crimp", 0), hold("pinch", 2)), List.of("heel hook", "dyno"), "2", "V3");
         assertThat(Similarity.of(boulder, rope)).isNull();
-        RepetitionFigures r = Repetition.of(List.of(boulder), List.of(rope), Repetition.DEFAULT_THRESHOLD);
+        RepetitionFigures r = Repetition.of(List.of(boulder), List.of(rope), GymSettings.DEFAULT_THRESHOLD);
         assertThat(r.nearRepeats()).isEmpty();
         assertThat(r.novelty()).isEqualTo(1.0);
     }

@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.within;
 import java.util.HashMap;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
+import org.variset.archive.settings.GymSettings;
 
 class CompositeScoreTest {
     /** Worked by hand: 100 × (0.25·0.8 + 0.2·0.5 + 0.2·0.6 + 0.15·e^-0.5 + 0.2·0.9). */
@@ -13,7 +14,7 @@ class CompositeScoreTest {
     void weighsAllFivePartsWithTheDefaults() {
         Map<String, Double> parts = Map.of(
                 "grip", 0.8, "holds", 0.5, "moves", 0.6, "grades", CompositeScore.gradesPart(0.5), "novelty", 0.9);
-        CompositeScore s = CompositeScore.of(parts, CompositeScore.defaultWeights());
+        CompositeScore s = CompositeScore.of(parts, GymSettings.DEFAULT_SCORE_WEIGHTS);
         double expected = 100 * (0.25 * 0.8 + 0.2 * 0.5 + 0.2 * 0.6 + 0.15 * Math.exp(-0.5) + 0.2 * 0.9);
         assertThat(s.score()).isCloseTo(expected, within(1e-9));
         assertThat(s.dropped()).isEmpty();
@@ -24,7 +25,7 @@ class CompositeScoreTest {
     void rescalesOverThePartsThatAreNotNull() {
         Map<String, Double> parts = new HashMap<>(Map.of("grip", 1.0, "holds", 0.0, "moves", 0.5, "novelty", 1.0));
         parts.put("grades", null);
-        CompositeScore s = CompositeScore.of(parts, CompositeScore.defaultWeights());
+        CompositeScore s = CompositeScore.of(parts, GymSettings.DEFAULT_SCORE_WEIGHTS);
         assertThat(s.score()).isCloseTo(100 * (0.25 + 0.2 * 0.5 + 0.2) / 0.85, within(1e-9));
         assertThat(s.dropped()).containsExactly("grades");
         assertThat(s.weightsUsed().values().stream()
@@ -35,7 +36,7 @@ class CompositeScoreTest {
 
     @Test
     void hasNoScoreWithFewerThanThreeParts() {
-        CompositeScore s = CompositeScore.of(Map.of("grip", 0.4, "novelty", 0.3), CompositeScore.defaultWeights());
+        CompositeScore s = CompositeScore.of(Map.of("grip", 0.4, "novelty", 0.3), GymSettings.DEFAULT_SCORE_WEIGHTS);
         assertThat(s.score()).isNull();
         assertThat(s.dropped()).containsExactly("holds", "moves", "grades");
     }
