@@ -56,6 +56,29 @@ class WorkbookAndJsonImportTest {
         });
     }
 
+    /** A file's format is known by its ending in any case: the spec's reset document named in capitals imports. */
+    @Test
+    void knowsAFormatByItsEndingWhateverItsCase() throws Exception {
+        Path upper = Files.copy(ImportFiles.specExample("reset.json"), dir.resolve("RESET.JSON"));
+        run(upper);
+        assertThat(route("N1").holds()).isNotEmpty();
+    }
+
+    /** A workbook named as a CSV file is refused by its content, naming the file and the fix. */
+    @Test
+    void refusesAWorkbookNamedAsText() throws Exception {
+        Path book = dir.resolve("book.xlsx");
+        try (XSSFWorkbook wb = new XSSFWorkbook();
+                OutputStream out = Files.newOutputStream(book)) {
+            wb.createSheet("routes");
+            wb.write(out);
+        }
+        Path misnamed = Files.move(book, dir.resolve("routes.csv"));
+        assertThatThrownBy(() -> run(misnamed))
+                .isInstanceOf(ImportException.class)
+                .hasMessageContaining("routes.csv: is a zip or workbook, not CSV");
+    }
+
     /** A workbook as a spreadsheet user makes it: a date cell, number cells, and a grip typed as a time. */
     @Test
     void readsDateNumberAndTimeCellsOfAWorkbook() throws Exception {

@@ -3,7 +3,6 @@ package org.variset.imports.export;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -13,10 +12,9 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
 import org.hibernate.Session;
+import org.variset.archive.file.AtomicFile;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.gym.Wall;
-import org.variset.archive.problem.InputException;
-import org.variset.archive.problem.Remedy;
 import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
@@ -74,51 +72,28 @@ public final class ArchiveExporter {
         List<Path> targets = format == ExportFormat.CSV
                 ? tables.stream().map(t -> out.resolve(t.name() + ".csv")).toList()
                 : List.of(out);
-        for (Path t : targets) {
-            if (Files.exists(t) && !force) {
-                throw new InputException(
-                        InputException.Reason.EXISTS,
-                        t + " exists already",
-                        Remedy.of(Remedy.Kind.REPLACE_EXISTING, "file", t.toString()));
-            }
-        }
         try {
-            if (format == ExportFormat.CSV) {
-                Files.createDirectories(out);
-                for (int i = 0; i < tables.size(); i++) {
-                    ExportTable t = tables.get(i);
-                    writeAtomically(targets.get(i), tmp -> CsvExport.write(t, tmp));
-                }
-            } else if (format == ExportFormat.XLSX) {
-                writeAtomically(out, tmp -> XlsxExport.write(tables, tmp));
-            } else {
-                writeAtomically(out, tmp -> JsonExport.write(sel.gym(), tables, tmp));
-            }
+            Files.createDirectories(
+                    format == ExportFormat.CSV ? out : out.toAbsolutePath().getParent());
         } catch (IOException e) {
-            throw new IllegalArgumentException("cannot write " + out + ": " + e.getMessage(), e);
+            throw new IllegalArgumentException("cannot create the folder for " + out + ": " + e.getMessage(), e);
+        }
+        AtomicFile.checkWritable(targets, force);
+        if (format == ExportFormat.CSV) {
+            for (int i = 0; i < tables.size(); i++) {
+                ExportTable t = tables.get(i);
+                AtomicFile.writeThrough(targets.get(i), force, tmp -> CsvExport.write(t, tmp));
+            }
+        } else if (format == ExportFormat.XLSX) {
+            AtomicFile.writeThrough(out, force, tmp -> XlsxExport.write(tables, tmp));
+        } else {
+            AtomicFile.writeThrough(out, force, tmp -> JsonExport.write(sel.gym(), tables, tmp));
         }
         return new Result(
                 targets,
                 tables.get(0).rows().size(),
                 tables.get(1).rows().size(),
                 tables.get(2).rows().size());
-    }
-
-    /** Writes one file through a temporary sibling. */
-    interface FileWriter {
-        void write(Path tmp) throws IOException;
-    }
-
-    private static void writeAtomically(Path target, FileWriter writer) throws IOException {
-        Path dir = target.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".part");
-        try {
-            writer.write(tmp);
-            Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
     }
 
     private static List<ExportTable> tables(Session s, Selection sel) {

@@ -15,8 +15,7 @@ import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.ss.util.CellRangeAddressList;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
-import org.variset.archive.problem.InputException;
-import org.variset.archive.problem.Remedy;
+import org.variset.archive.file.AtomicFile;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 import org.variset.imports.table.TableKind;
@@ -76,29 +75,27 @@ public final class TemplateWriter {
         if (format == ExportFormat.JSON) {
             throw new IllegalArgumentException("templates are CSV or XLSX (JSON has no header to fill in)");
         }
-        for (Path f : files) {
-            if (Files.exists(f) && !force) {
-                throw new InputException(
-                        InputException.Reason.EXISTS,
-                        f + " exists already",
-                        Remedy.of(Remedy.Kind.REPLACE_EXISTING, "file", f.toString()));
-            }
-        }
         Files.createDirectories(dir);
+        AtomicFile.checkWritable(files, force);
         if (format == ExportFormat.XLSX) {
-            xlsx(files.get(0));
+            AtomicFile.writeThrough(files.get(0), force, TemplateWriter::xlsx);
         } else {
             TableKind[] kinds = {TableKind.WALLS, TableKind.ROUTES, TableKind.HOLDS};
             for (int i = 0; i < kinds.length; i++) {
-                try (CSVPrinter p = new CSVPrinter(
-                        Files.newBufferedWriter(files.get(i), StandardCharsets.UTF_8),
-                        CSVFormat.RFC4180.builder().setRecordSeparator("\n").get())) {
-                    p.printRecord(kinds[i].columns());
-                    p.printRecord(EXAMPLE.get(kinds[i]));
-                }
+                TableKind kind = kinds[i];
+                AtomicFile.writeThrough(files.get(i), force, tmp -> csv(kind, tmp));
             }
         }
         return files;
+    }
+
+    private static void csv(TableKind kind, Path file) throws IOException {
+        try (CSVPrinter p = new CSVPrinter(
+                Files.newBufferedWriter(file, StandardCharsets.UTF_8),
+                CSVFormat.RFC4180.builder().setRecordSeparator("\n").get())) {
+            p.printRecord(kind.columns());
+            p.printRecord(EXAMPLE.get(kind));
+        }
     }
 
     private static void xlsx(Path file) throws IOException {

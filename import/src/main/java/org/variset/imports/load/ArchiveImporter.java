@@ -122,7 +122,7 @@ public final class ArchiveImporter {
             } catch (InputFileException e) {
                 plan.problems.add(e.problem());
             }
-            if (rows == 0 && (s.kind() == TableKind.ROUTES || !s.file().endsWith(".json"))) {
+            if (rows == 0 && !s.format().emptyAllowed(s.kind())) {
                 plan.problems.add(s.file(), 0, "", "no rows after the header (nothing to import from it)");
             }
         }
@@ -155,7 +155,7 @@ public final class ArchiveImporter {
             } catch (InputFileException e) {
                 plan.problems.add(e.problem());
             }
-            if (rows == 0 && !s.file().endsWith(".json")) {
+            if (rows == 0 && !s.format().emptyAllowed(s.kind())) {
                 plan.problems.add(s.file(), 0, "", "no rows after the header (nothing to import from it)");
             }
         }

@@ -5,16 +5,13 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 import org.variset.imports.ProblemList;
 import org.variset.imports.table.Columns;
-import org.variset.imports.table.CsvSource;
 import org.variset.imports.table.InputFileException;
-import org.variset.imports.table.JsonDocument;
+import org.variset.imports.table.InputFormat;
 import org.variset.imports.table.RowSource;
 import org.variset.imports.table.TableKind;
-import org.variset.imports.table.XlsxWorkbook;
 
 /** Opens the input files by extension and checks every header before any row is read. */
 final class InputFiles {
@@ -29,17 +26,13 @@ final class InputFiles {
                 problems.add(name, 0, "", "no such file");
                 continue;
             }
-            String ext = name.toLowerCase(Locale.ROOT);
+            java.util.Optional<InputFormat> format = InputFormat.of(p);
+            if (format.isEmpty()) {
+                problems.add(name, 0, "", "unsupported file type (expected " + InputFormat.endingsInWords() + ")");
+                continue;
+            }
             try {
-                if (ext.endsWith(".csv") || ext.endsWith(".txt")) {
-                    out.add(CsvSource.open(p, name));
-                } else if (ext.endsWith(".xlsx")) {
-                    out.addAll(XlsxWorkbook.read(p, name));
-                } else if (ext.endsWith(".json")) {
-                    out.addAll(JsonDocument.read(p, name));
-                } else {
-                    problems.add(name, 0, "", "unsupported file type (expected .csv, .xlsx or .json)");
-                }
+                out.addAll(format.get().open(p, name));
             } catch (InputFileException e) {
                 problems.add(e.problem());
             }

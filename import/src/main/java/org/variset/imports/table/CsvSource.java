@@ -95,6 +95,11 @@ public final class CsvSource implements RowSource {
     }
 
     @Override
+    public InputFormat format() {
+        return InputFormat.CSV;
+    }
+
+    @Override
     public TableKind kind() {
         return kind;
     }

@@ -83,9 +83,9 @@ public final class JsonDocument {
             walls.replaceAll(r -> withGym(r, documentGym));
         }
         return List.of(
-                new ListSource(file, TableKind.WALLS, TableKind.WALLS.columns(), 1, walls),
-                new ListSource(file, TableKind.ROUTES, TableKind.ROUTES.columns(), 1, routes),
-                new ListSource(file, TableKind.HOLDS, TableKind.HOLDS.columns(), 1, holds));
+                new ListSource(file, InputFormat.JSON, TableKind.WALLS, TableKind.WALLS.columns(), 1, walls),
+                new ListSource(file, InputFormat.JSON, TableKind.ROUTES, TableKind.ROUTES.columns(), 1, routes),
+                new ListSource(file, InputFormat.JSON, TableKind.HOLDS, TableKind.HOLDS.columns(), 1, holds));
     }
 
     /** What is done with each object of an array. */

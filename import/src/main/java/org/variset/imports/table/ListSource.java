@@ -6,13 +6,16 @@ import java.util.List;
 /** A table already in memory (a JSON document's routes, an XLSX sheet). */
 final class ListSource implements RowSource {
     private final String file;
+    private final InputFormat format;
     private final TableKind kind;
     private final List<String> header;
     private final int headerLine;
     private final List<TableRow> rows;
 
-    ListSource(String file, TableKind kind, List<String> header, int headerLine, List<TableRow> rows) {
+    ListSource(
+            String file, InputFormat format, TableKind kind, List<String> header, int headerLine, List<TableRow> rows) {
         this.file = file;
+        this.format = format;
         this.kind = kind;
         this.header = List.copyOf(header);
         this.headerLine = headerLine;
@@ -22,6 +25,11 @@ final class ListSource implements RowSource {
     @Override
     public String file() {
         return file;
+    }
+
+    @Override
+    public InputFormat format() {
+        return format;
     }
 
     @Override

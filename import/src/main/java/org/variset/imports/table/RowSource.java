@@ -10,6 +10,9 @@ public interface RowSource {
     /** The file's display name, for messages. */
     String file();
 
+    /** The format of the file it comes from. */
+    InputFormat format();
+
     /** Which table it holds. */
     TableKind kind();
 

@@ -100,7 +100,7 @@ public final class XlsxWorkbook {
                 rows.add(new TableRow(file, row.getRowNum() + 1, cells, false));
             }
         }
-        return new ListSource(file, kind, header, headerLine, rows);
+        return new ListSource(file, InputFormat.XLSX, kind, header, headerLine, rows);
     }
 
     static String value(Cell cell) {
