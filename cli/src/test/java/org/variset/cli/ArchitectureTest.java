@@ -28,4 +28,37 @@ class ArchitectureTest {
             .doNotHaveFullyQualifiedName("org.variset.cli.VarisetMain")
             .should()
             .callMethod(System.class, "exit", int.class);
+
+    /** The commands parse and render; the use cases, their transactions and their reads live in the app layer. */
+    @ArchTest
+    static final ArchRule commandsLeaveTheWorkToTheUseCases = noClasses()
+            .that()
+            .resideInAPackage("org.variset.cli..")
+            .should()
+            .dependOnClassesThat()
+            .resideInAnyPackage("org.hibernate..", "jakarta.persistence..", "java.sql..")
+            .orShould()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.variset.archive.store.Archive")
+            .orShould()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.variset.archive.store.Transaction")
+            .orShould()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.variset.archive.search.SearchIndex")
+            .orShould()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.variset.reports.audit.Auditor")
+            .orShould()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.variset.reports.plan.ResetPlanner")
+            .orShould()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.variset.reports.trend.TrendReport")
+            .orShould()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.variset.imports.load.ArchiveImporter")
+            .orShould()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.variset.imports.export.ArchiveExporter");
 }

@@ -15,9 +15,9 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.variset.app.Workspace;
 import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveStats;
-import org.variset.cli.internal.IndexUpkeep;
 import org.variset.sample.generate.SampleGenerator;
 
 /**
@@ -88,7 +88,7 @@ class KillDuringImportIT {
         Path log = dir.resolve("run-" + i + ".log");
         Process p = ChildProcess.start(
                 log,
-                atTheSeam ? Map.of(IndexUpkeep.PAUSE_HOOK, "60000") : Map.of(),
+                atTheSeam ? Map.of(Workspace.PAUSE_HOOK, "60000") : Map.of(),
                 "--archive",
                 a.toString(),
                 "import",

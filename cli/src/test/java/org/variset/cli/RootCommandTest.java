@@ -27,41 +27,6 @@ class RootCommandTest {
     }
 
     @Test
-    void listsEveryCommandInTheHelpAlthoughARunBuildsOnlyTheOneItNames() {
-        String help = CliRun.run(home, "--help").exits(ExitCode.OK).out();
-        String helpCommand = CliRun.run(home, "help").exits(ExitCode.OK).out();
-        for (String name : new String[] {
-            "demo",
-            "init",
-            "info",
-            "import",
-            "export",
-            "audit",
-            "plan",
-            "trend",
-            "search",
-            "similar",
-            "reindex",
-            "generate",
-            "check",
-            "backup",
-            "restore",
-            "settings",
-            "strip",
-            "remove",
-            "amend",
-            "setter",
-            "template",
-            "grade",
-            "help"
-        }) {
-            assertThat(help).as(name).containsPattern("(?m)^  " + name + " ");
-            assertThat(helpCommand).as(name).containsPattern("(?m)^  " + name + " ");
-        }
-        assertThat(help).doesNotContain("train-start-up");
-    }
-
-    @Test
     void helpForOneCommandIsThatCommandsHelp() {
         CliRun r = CliRun.run(home, "help", "audit").exits(ExitCode.OK);
         assertThat(r.out()).contains("--standing-on").contains("--setter");

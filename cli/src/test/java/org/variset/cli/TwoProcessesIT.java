@@ -10,7 +10,7 @@ import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.variset.cli.internal.IndexUpkeep;
+import org.variset.app.Workspace;
 import org.variset.sample.generate.SampleGenerator;
 
 /**
@@ -32,7 +32,7 @@ class TwoProcessesIT {
         Path log = dir.resolve("import.log");
         Process importing = ChildProcess.start(
                 log,
-                Map.of(IndexUpkeep.PAUSE_HOOK, "15000"),
+                Map.of(Workspace.PAUSE_HOOK, "15000"),
                 "--archive",
                 archive.toString(),
                 "import",

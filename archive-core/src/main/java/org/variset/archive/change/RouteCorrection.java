@@ -8,8 +8,15 @@ import org.hibernate.Session;
 import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.grade.GradeReader;
 import org.variset.archive.grade.GradeScale;
+import org.variset.archive.gym.Gym;
+import org.variset.archive.gym.Wall;
+import org.variset.archive.problem.InputException;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
+import org.variset.archive.settings.GymVocabularies;
+import org.variset.archive.store.ArchiveQueries;
+import org.variset.archive.store.GymLookup;
+import org.variset.archive.store.Transaction;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 
@@ -39,6 +46,34 @@ public record RouteCorrection(
         boolean standing,
         String color,
         String notes) {
+
+    /**
+     * What a correction did.
+     *
+     * @param route the route corrected, as {@code label (set_on, wall)}
+     * @param changed what changed, as {@code field: old -> new}; empty when nothing was given
+     */
+    public record Result(String route, List<String> changed) {}
+
+    /**
+     * Applies the correction to the named route in the caller's transaction; moves and styles are read with the
+     * vocabulary its gym had on the day it was set, as an import reads them.
+     *
+     * @param gym the gym, or null when the archive holds one
+     * @throws IllegalArgumentException for an unknown gym, wall or route, or a bad grade, date or value
+     */
+    public Result apply(Transaction tx, String gym, String wall, String label, LocalDate setOn) {
+        GymLookup lookup = new GymLookup(tx);
+        Gym g = lookup.gym(gym);
+        Wall w = lookup.wall(g, wall);
+        Route r = new ArchiveQueries(tx.session())
+                .route(w, label, setOn)
+                .orElseThrow(() -> new InputException(
+                        InputException.Reason.NOT_FOUND,
+                        "no route '" + label + "' set on " + setOn + " on " + w.name()));
+        Vocabulary v = GymVocabularies.of(tx.readConnection()).on(g.name(), r.setOn());
+        return new Result(label + " (" + setOn + ", " + w.name() + ")", apply(tx.session(), r, v));
+    }
 
     /**
      * Applies the correction in the caller's transaction.

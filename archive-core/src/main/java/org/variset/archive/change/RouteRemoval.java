@@ -8,6 +8,8 @@ import org.variset.archive.gym.Unknown;
 import org.variset.archive.route.Reset;
 import org.variset.archive.route.Route;
 import org.variset.archive.store.ArchiveQueries;
+import org.variset.archive.store.GymLookup;
+import org.variset.archive.store.Transaction;
 
 /**
  * Takes back a mistaken import: the routes of a reset, or a given list of routes, with their holds. A reset left
@@ -24,7 +26,58 @@ public final class RouteRemoval {
      */
     public record Plan(List<String> routes, long holds, List<String> emptiedResets) {}
 
+    /** Which routes to take back. */
+    public sealed interface Target {}
+
+    /**
+     * The routes of a reset.
+     *
+     * @param gym the gym, or null when the archive holds one
+     * @param label the reset's label
+     */
+    public record OfReset(String gym, String label) implements Target {}
+
+    /**
+     * Routes named one by one (those of a routes file); the ones the archive does not hold are passed over.
+     *
+     * @param routes the routes
+     */
+    public record Listed(List<Named> routes) implements Target {}
+
+    /**
+     * A route by what identifies it.
+     *
+     * @param gym the gym, or null when the archive holds one
+     * @param wall the wall
+     * @param label the route's label
+     * @param setOn the day it was set
+     */
+    public record Named(String gym, String wall, String label, java.time.LocalDate setOn) {}
+
     private RouteRemoval() {}
+
+    /** What taking back the target would remove, without removing it. */
+    public static Plan preview(Transaction tx, Target target) {
+        return preview(tx.session(), routes(tx, target));
+    }
+
+    /** Removes the target's routes, their holds and the resets they empty, in the caller's transaction. */
+    public static Plan remove(Transaction tx, Target target) {
+        return remove(tx.session(), routes(tx, target));
+    }
+
+    private static List<Route> routes(Transaction tx, Target target) {
+        GymLookup lookup = new GymLookup(tx);
+        if (target instanceof OfReset r) {
+            return ofReset(tx.session(), lookup.gym(r.gym()), r.label());
+        }
+        ArchiveQueries q = new ArchiveQueries(tx.session());
+        java.util.List<Route> out = new java.util.ArrayList<>();
+        for (Named n : ((Listed) target).routes()) {
+            q.route(lookup.gym(n.gym()).name(), n.wall(), n.label(), n.setOn()).ifPresent(out::add);
+        }
+        return out;
+    }
 
     /**
      * The routes of a reset, found by label.

@@ -9,10 +9,21 @@ import org.variset.archive.problem.InputException;
 import org.variset.archive.problem.Remedy;
 import org.variset.archive.route.Route;
 import org.variset.archive.route.Setter;
+import org.variset.archive.store.Transaction;
 
 /** Renaming a setter, or merging two names of one person ("K. Ames" and "Kit Ames"), across the archive. */
 public final class SetterChanges {
     private SetterChanges() {}
+
+    /** As {@link #rename(Session, String, String)}, in a transaction. */
+    public static void rename(Transaction tx, String from, String to) {
+        rename(tx.session(), from, to);
+    }
+
+    /** As {@link #merge(Session, String, String)}, in a transaction. */
+    public static int merge(Transaction tx, String from, String into) {
+        return merge(tx.session(), from, into);
+    }
 
     /**
      * Renames a setter everywhere.

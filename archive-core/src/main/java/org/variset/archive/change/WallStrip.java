@@ -7,6 +7,8 @@ import org.hibernate.Session;
 import org.variset.archive.changelog.ChangeLog;
 import org.variset.archive.gym.Wall;
 import org.variset.archive.route.Route;
+import org.variset.archive.store.GymLookup;
+import org.variset.archive.store.Transaction;
 
 /**
  * Takes a wall's old routes down when it is reset: every route of the wall set before the date and still up
@@ -24,6 +26,17 @@ public final class WallStrip {
     public record Result(int stripped, int setThatDay, int alreadyDown) {}
 
     private WallStrip() {}
+
+    /**
+     * Strips the named wall on a date, in the caller's transaction.
+     *
+     * @param gym the gym, or null when the archive holds one
+     * @throws IllegalArgumentException naming what there is when the gym or wall is unknown
+     */
+    public static Result strip(Transaction tx, String gym, String wall, LocalDate on) {
+        GymLookup lookup = new GymLookup(tx);
+        return strip(tx.session(), lookup.wall(lookup.gym(gym), wall), on);
+    }
 
     /** Strips the wall on a date, in the caller's transaction. */
     public static Result strip(Session session, Wall wall, LocalDate on) {

@@ -12,6 +12,7 @@ import org.variset.archive.gym.Gym;
 import org.variset.archive.gym.GymSetting;
 import org.variset.archive.problem.InputException;
 import org.variset.archive.problem.Remedy;
+import org.variset.archive.store.Transaction;
 
 /**
  * Records a new setting value from a day on. Earlier values stay, so an audit of an earlier day still uses the
@@ -19,6 +20,20 @@ import org.variset.archive.problem.Remedy;
  */
 public final class SettingsWriter {
     private SettingsWriter() {}
+
+    /**
+     * Stores a value of a named gym from a day on, in the caller's transaction (see the session form for the rules).
+     *
+     * @param gym the gym, or null when the archive holds one
+     * @param value the new value, or null to go back to the default from that day
+     * @return the gym's name
+     */
+    public static String set(Transaction tx, String gym, SettingKey key, String scope, LocalDate from, JsonNode value) {
+        Gym g = new org.variset.archive.store.GymLookup(tx).gym(gym);
+        GymSettings before = new SettingsReader(tx.readConnection()).inEffectOn(g.id(), from);
+        set(tx.session(), g, key, scope, from, value, before);
+        return g.name();
+    }
 
     /**
      * Checks a value against the settings it must agree with, then stores it in the caller's transaction.

@@ -359,6 +359,14 @@ public final class Archive implements AutoCloseable {
         });
     }
 
+    /**
+     * Runs writes in one transaction, for the layers above the archive: committed when the work returns, rolled back
+     * when it throws; on a shared archive it first waits for its turn among writers.
+     */
+    public <T> T write(Function<Transaction, T> work) {
+        return fromTransaction(s -> work.apply(new Transaction(s, this)));
+    }
+
     /** As {@link #fromTransaction}, for work that returns nothing. */
     public void inTransaction(Consumer<Session> work) {
         fromTransaction(s -> {

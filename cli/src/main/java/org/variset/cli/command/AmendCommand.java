@@ -3,21 +3,17 @@ package org.variset.cli.command;
 import java.time.LocalDate;
 import java.util.Arrays;
 import java.util.List;
-import org.variset.archive.change.GymLookup;
+import org.variset.app.Workspace;
+import org.variset.app.change.AmendRoute;
 import org.variset.archive.change.RouteCorrection;
 import org.variset.archive.grade.GradeScale;
-import org.variset.archive.gym.Gym;
-import org.variset.archive.gym.Wall;
-import org.variset.archive.route.Route;
-import org.variset.archive.store.Archive;
-import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
 import org.variset.cli.convert.GradeScaleConverter;
-import org.variset.cli.internal.IndexUpkeep;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 
 /** Corrects one route's fields without re-importing a file. */
@@ -94,7 +90,7 @@ final class AmendCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
         if (stillUp && strippedOn != null) {
-            throw new IllegalArgumentException("give --stripped-on or --still-up, not both");
+            throw new ParameterException(spec.commandLine(), "give --stripped-on or --still-up, not both");
         }
         RouteCorrection c = new RouteCorrection(
                 grade,
@@ -109,25 +105,15 @@ final class AmendCommand extends VarisetSubcommand {
                 stillUp,
                 color,
                 notes);
-        List<String> changed;
-        try (Archive archive = openArchive()) {
-            changed = archive.fromTransaction(s -> {
-                GymLookup lookup = new GymLookup(s);
-                Gym g = lookup.gym(gym.gym);
-                Wall w = lookup.wall(g, wall);
-                Route r = new org.variset.archive.store.ArchiveQueries(s)
-                        .route(w, label, setOn)
-                        .orElseThrow(() -> new IllegalArgumentException(
-                                "no route '" + label + "' set on " + setOn + " on " + wall));
-                return c.apply(s, r, Vocabulary.defaults());
-            });
-            IndexUpkeep.afterWrite(archive, err());
+        RouteCorrection.Result r;
+        try (Workspace w = workspace()) {
+            r = new AmendRoute(w).amend(gym.gym, wall, label, setOn, c);
         }
-        if (changed.isEmpty()) {
+        if (r.changed().isEmpty()) {
             out().println("Nothing to change: give at least one field (see --help).");
         } else {
-            out().println("Amended " + label + " (" + setOn + ", " + wall + "):");
-            changed.forEach(x -> out().println("  " + x));
+            out().println("Amended " + r.route() + ":");
+            r.changed().forEach(x -> out().println("  " + x));
         }
         return ExitCode.OK;
     }

@@ -1,23 +1,15 @@
 package org.variset.cli.command;
 
 import java.time.LocalDate;
-import org.variset.archive.gym.GymCalendar;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.audit.AuditRequest;
+import org.variset.app.audit.AuditSets;
 import org.variset.archive.gym.PartialDate;
-import org.variset.archive.read.ArchiveCatalog;
-import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
 import org.variset.cli.convert.PartialDateConverter;
-import org.variset.cli.internal.Json;
 import org.variset.cli.render.AuditText;
-import org.variset.reports.audit.Audit;
-import org.variset.reports.audit.AuditJson;
-import org.variset.reports.audit.AuditTarget;
-import org.variset.reports.audit.Auditor;
-import org.variset.reports.audit.Subject;
-import org.variset.reports.pdf.AuditPdf;
-import org.variset.reports.plan.ResetPlan;
-import org.variset.reports.plan.ResetPlanner;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -110,38 +102,22 @@ final class AuditCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        Audit audit;
-        ResetPlan plan = null;
-        LocalDate today;
-        try (Archive archive = openArchive()) {
-            audit = new Auditor(archive.connection()).audit(target(archive));
-            today = new GymCalendar(root().cli().clock())
-                    .today(new ArchiveCatalog(archive.connection())
-                            .gym(audit.subject().gym())
-                            .zone());
-            if (pdf.wanted() && audit.subject().kind() == Subject.Kind.RESET) {
-                ResetPlanner planner = new ResetPlanner(archive.connection());
-                Subject s = audit.subject();
-                plan = planner.plan(
-                        s.gym(),
-                        s.wall(),
-                        planner.nextDue(s.gym(), s.wall(), s.on()),
-                        Math.max(1, audit.audited().routes().size()),
-                        ResetPlanner.DEFAULT_MARGIN);
-            }
+        AuditRequest request = request();
+        AuditSets.Report report;
+        try (Workspace w = workspace()) {
+            report = new AuditSets(w).audit(request, pdf.wanted());
         }
-        ResetPlan next = plan;
-        pdf.write(today, err(), (options, out) -> AuditPdf.write(audit, next, options, out));
+        pdf.write(report.today(), err(), report.document());
         if (format.json()) {
-            out().println(Json.write(AuditJson.of(audit)));
+            out().println(Json.write(report.json()));
         } else {
-            out().print(AuditText.of(audit, findings));
+            out().print(AuditText.of(report.audit(), findings));
         }
         return ExitCode.OK;
     }
 
-    /** The target the options name; usage errors for combinations that name none or several. */
-    AuditTarget target(Archive archive) {
+    /** The request the options name; usage errors for combinations that name none or several. */
+    AuditRequest request() {
         int kinds = (reset != null ? 1 : 0)
                 + (standingOn != null ? 1 : 0)
                 + (setter != null ? 1 : 0)
@@ -150,33 +126,31 @@ final class AuditCommand extends VarisetSubcommand {
             throw new ParameterException(
                     spec.commandLine(),
                     kinds == 0
-                            ? "say what to audit: --reset, --wall, " + "--standing-on or --setter"
-                            : "give only one of --reset, --wall (with --on), --standing-on "
-                                    + "(with or without --wall) and --setter");
+                            ? "say what to audit: --reset, --wall, --standing-on or --setter"
+                            : "give only one of --reset, --wall (with --on), --standing-on (with or without --wall) "
+                                    + "and --setter");
         }
         if (on != null && (wall == null || standingOn != null)) {
             throw new ParameterException(
                     spec.commandLine(),
-                    "--on goes with --wall (the wall's latest reset on or "
-                            + "before that day); for the routes up on a day use --standing-on");
+                    "--on goes with --wall (the wall's latest reset on or before that day); for the routes up on a "
+                            + "day use --standing-on");
         }
         if ((from != null || to != null) && setter == null) {
             throw new ParameterException(spec.commandLine(), "--from and --to go with --setter");
         }
         if (reset != null) {
-            return new AuditTarget.Reset(gym.gym, reset);
+            return new AuditRequest.Reset(gym.gym, reset);
         }
         if (standingOn != null) {
-            return new AuditTarget.Standing(gym.gym, wall, standingOn);
+            return new AuditRequest.Standing(gym.gym, wall, standingOn);
         }
-        LocalDate today = new GymCalendar(root().cli().clock())
-                .today(new ArchiveCatalog(archive.connection()).gym(gym.gym).zone());
         if (setter != null) {
             if (from == null) {
                 throw new ParameterException(spec.commandLine(), "--setter needs --from (the first day of the period)");
             }
-            return new AuditTarget.SetterPeriod(gym.gym, setter, from.first(), to == null ? today : to.last());
+            return new AuditRequest.SetterPeriod(gym.gym, setter, from.first(), to == null ? null : to.last());
         }
-        return new AuditTarget.LatestReset(gym.gym, wall, on == null ? today : on);
+        return new AuditRequest.LatestReset(gym.gym, wall, on);
     }
 }

@@ -1,10 +1,8 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.JsonNode;
 import java.nio.file.Path;
 import java.time.Duration;
-import org.variset.archive.backup.ArchiveBackup;
-import org.variset.archive.store.Archive;
+import org.variset.app.archive.BackupArchive;
 import org.variset.cli.ExitCode;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -37,17 +35,11 @@ final class BackupCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        JsonNode m;
-        try (Archive archive = Archive.open(embeddedDir("backup"), Duration.ofSeconds(Math.max(0, waitSeconds)))) {
-            m = ArchiveBackup.write(archive, file, force);
-        }
-        JsonNode c = m.get("counts");
-        out().println("Backed up " + c.get("routes").asLong() + " routes, "
-                + c.get("holds").asLong() + " holds, "
-                + c.get("gyms").asLong() + (c.get("gyms").asLong() == 1 ? " gym" : " gyms") + " to " + file
-                + " (schema version " + m.get("schema_version").asInt()
-                + ", SHA-256 of the database "
-                + m.at("/database/sha256").asText().substring(0, 16) + "...).");
+        BackupArchive.Result r =
+                BackupArchive.backup(root().location(), file, force, Duration.ofSeconds(Math.max(0, waitSeconds)));
+        out().println("Backed up " + r.routes() + " routes, " + r.holds() + " holds, " + r.gyms()
+                + (r.gyms() == 1 ? " gym" : " gyms") + " to " + file + " (schema version " + r.schemaVersion()
+                + ", SHA-256 of the database " + r.sha256().substring(0, 16) + "...).");
         return ExitCode.OK;
     }
 }

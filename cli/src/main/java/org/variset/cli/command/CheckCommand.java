@@ -1,14 +1,10 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
-import org.variset.archive.check.ArchiveCheck;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.archive.CheckArchive;
 import org.variset.archive.check.CheckReport;
-import org.variset.archive.search.IndexProgress;
-import org.variset.archive.search.SearchIndex;
-import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.Json;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -35,31 +31,16 @@ final class CheckCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        CheckReport report;
-        boolean repaired = false;
-        try (Archive archive = openArchive();
-                SearchIndex index = SearchIndex.of(archive)) {
-            report = ArchiveCheck.run(archive, index);
-            if (repair && !report.healthy() && report.databaseHealthy()) {
-                index.rebuild(archive.connection(), IndexProgress.NONE, "repair asked for");
-                repaired = true;
-                report = ArchiveCheck.run(archive, index);
-            }
+        CheckArchive.Result r;
+        try (Workspace w = workspace()) {
+            r = CheckArchive.run(w, repair);
         }
         if (format.json()) {
-            ObjectNode o = Json.object().put("healthy", report.healthy()).put("index_rebuilt", repaired);
-            ArrayNode a = o.putArray("checks");
-            report.items()
-                    .forEach(i -> a.addObject()
-                            .put("part", i.part())
-                            .put("check", i.name())
-                            .put("ok", i.ok())
-                            .put("detail", i.detail()));
-            out().println(Json.write(o));
+            out().println(Json.write(r.json()));
         } else {
-            print(report, repaired);
+            print(r.report(), r.repaired());
         }
-        return report.healthy() ? ExitCode.OK : ExitCode.ARCHIVE;
+        return r.report().healthy() ? ExitCode.OK : ExitCode.ARCHIVE;
     }
 
     private void print(CheckReport report, boolean repaired) {

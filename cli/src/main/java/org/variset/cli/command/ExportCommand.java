@@ -1,8 +1,9 @@
 package org.variset.cli.command;
 
 import java.nio.file.Path;
+import org.variset.app.Workspace;
+import org.variset.app.imports.ExportGym;
 import org.variset.archive.gym.PartialDate;
-import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.PartialDateConverter;
 import org.variset.imports.export.ArchiveExporter;
@@ -63,14 +64,14 @@ final class ExportCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
         ArchiveExporter.Result r;
-        try (Archive archive = openArchive()) {
-            r = new ArchiveExporter(archive)
-                    .export(
-                            new ArchiveExporter.Selection(
-                                    gym, from == null ? null : from.first(), to == null ? null : to.last(), wall),
-                            format,
-                            out,
-                            force);
+        try (Workspace w = workspace()) {
+            r = ExportGym.run(
+                    w,
+                    new ArchiveExporter.Selection(
+                            gym, from == null ? null : from.first(), to == null ? null : to.last(), wall),
+                    format,
+                    out,
+                    force);
         }
         out().println("Exported " + r.walls() + " walls, " + r.routes() + " routes and " + r.holds() + " holds to "
                 + String.join(", ", r.files().stream().map(Path::toString).toList()) + ".");

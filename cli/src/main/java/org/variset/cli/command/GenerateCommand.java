@@ -1,8 +1,8 @@
 package org.variset.cli.command;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
+import org.variset.app.sample.GenerateSample;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
 import org.variset.sample.generate.SampleGenerator;
@@ -57,22 +57,8 @@ final class GenerateCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        for (String f : new String[] {"walls.csv", "routes.csv", "holds.csv"}) {
-            if (!force && Files.exists(out.resolve(f))) {
-                throw new IllegalArgumentException(
-                        out.resolve(f) + " exists already; give --force to replace it, or " + "another --out");
-            }
-        }
-        SampleGenerator.Options o = gyms == null && seed == null && end == null && years == 2
-                ? SampleGenerator.sample()
-                : new SampleGenerator.Options(
-                        gyms == null ? 1 : gyms,
-                        years,
-                        seed == null ? SampleGenerator.SAMPLE_SEED : seed,
-                        end == null ? SampleGenerator.SAMPLE_END : end,
-                        gyms == null);
-        long start = System.nanoTime();
-        SampleGenerator.Summary s = SampleGenerator.write(o, out);
+        GenerateSample.Result r = GenerateSample.into(out, new GenerateSample.Request(gyms, years, seed, end), force);
+        SampleGenerator.Summary s = r.summary();
         out().printf(
                         "Wrote %d " + (s.gyms() == 1 ? "gym" : "gyms")
                                 + ", %d walls, %d routes and %d holds to %s in %.1f s.%n",
@@ -81,7 +67,7 @@ final class GenerateCommand extends VarisetSubcommand {
                         s.routes(),
                         s.holds(),
                         out,
-                        (System.nanoTime() - start) / 1e9);
+                        r.seconds());
         out().println("Import them with: variset import "
                 + String.join(" ", s.files().stream().map(Path::toString).toList()));
         return ExitCode.OK;

@@ -1,14 +1,12 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Path;
 import java.util.List;
-import org.variset.archive.store.Archive;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.imports.ImportFiles;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.ConsoleProgress;
-import org.variset.cli.internal.IndexUpkeep;
-import org.variset.cli.internal.Json;
-import org.variset.imports.load.ArchiveImporter;
 import org.variset.imports.load.ImportOptions;
 import org.variset.imports.load.ImportSummary;
 import picocli.CommandLine.Command;
@@ -56,20 +54,15 @@ final class ImportCommand extends VarisetSubcommand {
                 .withDryRun(dryRun)
                 .withSkipBadRows(skipBadRows)
                 .withUpdate(update);
-        ImportSummary s;
-        try (Archive archive = openArchive();
+        ImportFiles.Result r;
+        try (Workspace w = workspace();
                 ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal(), root().verbose)) {
-            s = new ArchiveImporter(archive).run(files, options, progress);
-            if (!s.dryRun()) {
-                long start = System.nanoTime();
-                IndexUpkeep.afterWrite(archive, err(), progress.indexing());
-                progress.finished("updating the search index", System.nanoTime() - start);
-            }
+            r = new ImportFiles(w).run(files, options, progress);
         }
         if (format.json()) {
-            out().println(Json.write(json(s)));
+            out().println(Json.write(r.json()));
         } else {
-            print(s);
+            print(r.summary());
         }
         return ExitCode.OK;
     }
@@ -95,22 +88,5 @@ final class ImportCommand extends VarisetSubcommand {
 
     private static List<String> sorted(java.util.Set<String> set) {
         return set.stream().sorted().toList();
-    }
-
-    private static ObjectNode json(ImportSummary s) {
-        ObjectNode o = Json.object();
-        o.put("dry_run", s.dryRun());
-        o.putObject("routes")
-                .put("new", s.routesNew())
-                .put("unchanged", s.routesUnchanged())
-                .put("changed", s.routesChanged());
-        o.putObject("walls").put("new", s.wallsNew()).put("changed", s.wallsChanged());
-        o.put("holds_written", s.holdsWritten());
-        s.changes().forEach(o.putArray("changes")::add);
-        o.put("skipped_rows", s.skippedCount());
-        s.skipped().forEach(o.putArray("skipped")::add);
-        s.extraColumns().stream().sorted().forEach(o.putArray("extra_columns")::add);
-        s.unknownTerms().stream().sorted().forEach(o.putArray("unknown_terms")::add);
-        return o;
     }
 }

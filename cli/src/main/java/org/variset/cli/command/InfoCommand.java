@@ -1,11 +1,11 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.archive.ArchiveInfo;
 import org.variset.archive.location.ArchiveLocation;
-import org.variset.archive.store.Archive;
 import org.variset.archive.store.ArchiveStats;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.Json;
 import org.variset.cli.render.CliWords;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -23,26 +23,15 @@ final class InfoCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
         ArchiveLocation where = root().location();
-        ArchiveStats s;
-        try (Archive archive = openArchive()) {
-            s = archive.stats();
+        ArchiveInfo.Result r;
+        try (Workspace w = workspace()) {
+            r = ArchiveInfo.of(w, where);
         }
         if (format.json()) {
-            ObjectNode o = Json.object();
-            o.put("archive", where.shown());
-            o.put("shared", where.shared());
-            o.put("schema_version", s.schemaVersion());
-            o.put("gyms", s.gyms());
-            o.put("walls", s.walls());
-            o.put("resets", s.resets());
-            o.put("routes", s.routes());
-            o.put("holds", s.holds());
-            o.put("setters", s.setters());
-            o.put("first_set_on", s.firstSetOn() == null ? null : s.firstSetOn().toString());
-            o.put("last_set_on", s.lastSetOn() == null ? null : s.lastSetOn().toString());
-            out().println(Json.write(o));
+            out().println(Json.write(r.json()));
             return ExitCode.OK;
         }
+        ArchiveStats s = r.stats();
         out().printf("Archive   %s (from %s)%n", where.shown(), CliWords.origin(where));
         if (where.shared()) {
             out().printf("Index     %s (this client's own)%n", where.indexDir());

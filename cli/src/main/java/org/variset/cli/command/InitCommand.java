@@ -1,10 +1,9 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.variset.app.Json;
+import org.variset.app.archive.InitArchive;
 import org.variset.archive.location.ArchiveLocation;
-import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.Json;
 import org.variset.cli.render.CliWords;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -25,32 +24,15 @@ final class InitCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
         ArchiveLocation where = root().location();
-        boolean existed;
-        int version;
-        if (where.shared()) {
-            try (Archive archive = Archive.openServer(
-                    where.server(), where.clientDir(), true, org.variset.archive.store.ArchiveLock.DEFAULT_WAIT)) {
-                existed = !archive.wasCreated();
-                version = archive.schemaVersion().version();
-            }
-        } else {
-            existed = Archive.existsAt(where.dir());
-            try (Archive archive = existed ? Archive.open(where.dir()) : Archive.create(where.dir())) {
-                version = archive.schemaVersion().version();
-            }
-        }
+        InitArchive.Result r = InitArchive.at(where);
         if (format.json()) {
-            ObjectNode o = Json.object();
-            o.put("archive", where.shown());
-            o.put("created", !existed);
-            o.put("schema_version", version);
-            out().println(Json.write(o));
-        } else if (existed) {
-            out().println("There is already an archive at " + where.shown() + " (schema version " + version
+            out().println(Json.write(r.json()));
+        } else if (!r.created()) {
+            out().println("There is already an archive at " + where.shown() + " (schema version " + r.schemaVersion()
                     + "); nothing changed.");
         } else {
-            out().println("Created an empty archive at " + where.shown() + " (schema version " + version + ", "
-                    + "location from " + CliWords.origin(where) + ").");
+            out().println("Created an empty archive at " + where.shown() + " (schema version " + r.schemaVersion()
+                    + ", location from " + CliWords.origin(where) + ").");
         }
         return ExitCode.OK;
     }

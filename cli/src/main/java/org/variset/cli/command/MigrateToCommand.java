@@ -1,15 +1,10 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.util.List;
+import org.variset.app.Json;
+import org.variset.app.archive.MigrateArchive;
 import org.variset.archive.location.ArchiveLocation;
-import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveLock;
 import org.variset.archive.transfer.ArchiveTransfer;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.Json;
-import org.variset.cli.render.CliWords;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
@@ -43,45 +38,22 @@ final class MigrateToCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
         ArchiveLocation source = root().location();
-        if (source.shared()) {
-            throw new IllegalArgumentException("migrate-to copies an embedded archive, and this run names the shared "
-                    + "archive " + source.shown() + " (from " + CliWords.origin(source)
-                    + "); name the embedded one with "
-                    + "--archive DIR");
-        }
         ArchiveLocation target = ArchiveLocation.resolve(
                 null, url, root().cli().env(), root().cli().home());
-        long start = System.nanoTime();
-        List<ArchiveTransfer.Copied> copied;
-        try (Archive from = Archive.open(source.dir());
-                Archive to = Archive.openServer(target.server(), target.clientDir(), true, ArchiveLock.DEFAULT_WAIT)) {
-            copied = ArchiveTransfer.copy(from, to, (table, rows) -> {
-                if (!format.json()) {
-                    err().printf("variset: copied %s (%d rows), verified%n", table, rows);
-                    err().flush();
-                }
-            });
-        }
-        double seconds = (System.nanoTime() - start) / 1e9;
-        if (format.json()) {
-            ObjectNode o = Json.object();
-            o.put("from", source.dir().toString());
-            o.put("to", target.shown());
-            o.put("verified", true);
-            ArrayNode tables = o.putArray("tables");
-            for (ArchiveTransfer.Copied c : copied) {
-                ObjectNode t = tables.addObject();
-                t.put("table", c.table());
-                t.put("rows", c.rows());
-                t.put("sha256", c.sha256());
+        MigrateArchive.Result r = MigrateArchive.run(source, target, (table, rows) -> {
+            if (!format.json()) {
+                err().printf("variset: copied %s (%d rows), verified%n", table, rows);
+                err().flush();
             }
-            out().println(Json.write(o));
+        });
+        if (format.json()) {
+            out().println(Json.write(r.json()));
             return ExitCode.OK;
         }
         out().printf(
                         "Copied the archive at %s into %s in %.1f s; every table's rows and SHA-256 match:%n",
-                        source.dir(), target.shown(), seconds);
-        for (ArchiveTransfer.Copied c : copied) {
+                        source.dir(), target.shown(), r.seconds());
+        for (ArchiveTransfer.Copied c : r.tables()) {
             out().printf(
                             "  %-15s %,10d rows  %s%n",
                             c.table(), c.rows(), c.sha256().substring(0, 16));

@@ -4,6 +4,8 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.Set;
+import org.variset.app.Document;
+import org.variset.app.VarisetVersion;
 import org.variset.archive.file.AtomicFile;
 import org.variset.reports.pdf.PdfOptions;
 import picocli.CommandLine.Option;
@@ -23,18 +25,12 @@ public final class PdfFileOptions {
     @Option(names = "--force", description = "Replace the PDF file if it exists.")
     boolean force;
 
-    /** What writes a document and says which characters it could not print. */
-    @FunctionalInterface
-    interface Document {
-        Set<String> write(PdfOptions options, java.io.OutputStream out);
-    }
-
     /** Writes the document when --pdf was given, warning about characters no font could print. */
     void write(LocalDate today, PrintWriter err, Document doc) {
         if (pdf == null) {
             return;
         }
-        PdfOptions options = new PdfOptions(paper, today, VersionProvider.version());
+        PdfOptions options = new PdfOptions(paper, today, VarisetVersion.current());
         java.util.concurrent.atomic.AtomicReference<Set<String>> missing =
                 new java.util.concurrent.atomic.AtomicReference<>(Set.of());
         AtomicFile.write(pdf, force, out -> missing.set(doc.write(options, out)));

@@ -1,16 +1,13 @@
 package org.variset.cli.command;
 
 import java.time.LocalDate;
-import org.variset.archive.gym.GymCalendar;
-import org.variset.archive.read.ArchiveCatalog;
-import org.variset.archive.store.Archive;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.plan.PlanReset;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
-import org.variset.cli.internal.Json;
 import org.variset.cli.render.PlanText;
-import org.variset.reports.plan.PlanJson;
 import org.variset.reports.plan.ResetPlan;
-import org.variset.reports.plan.ResetPlanner;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -63,22 +60,12 @@ final class PlanCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        if (!(margin >= 0 && margin < 1)) {
-            throw new IllegalArgumentException(
-                    "--margin " + margin + " is not a share between 0 and 1 (0.05 is five " + "points)");
-        }
         ResetPlan plan;
-        try (Archive archive = openArchive()) {
-            LocalDate day = on != null
-                    ? on
-                    : new GymCalendar(root().cli().clock())
-                            .today(new ArchiveCatalog(archive.connection())
-                                    .gym(gym.gym)
-                                    .zone());
-            plan = new ResetPlanner(archive.connection()).plan(gym.gym, wall, day, routes, margin);
+        try (Workspace w = workspace()) {
+            plan = new PlanReset(w).plan(gym.gym, wall, on, routes, margin);
         }
         if (format.json()) {
-            out().println(Json.write(PlanJson.of(plan)));
+            out().println(Json.write(PlanReset.json(plan)));
         } else {
             out().print(PlanText.of(plan));
         }

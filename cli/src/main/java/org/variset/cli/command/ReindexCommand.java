@@ -1,8 +1,7 @@
 package org.variset.cli.command;
 
-import org.variset.archive.search.IndexSync;
-import org.variset.archive.search.SearchIndex;
-import org.variset.archive.store.Archive;
+import org.variset.app.Workspace;
+import org.variset.app.archive.ReindexArchive;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.ConsoleProgress;
 import picocli.CommandLine.Command;
@@ -19,16 +18,14 @@ import picocli.CommandLine.Command;
 final class ReindexCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
-        long start = System.nanoTime();
-        IndexSync s;
-        try (Archive archive = openArchive();
-                ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal());
-                SearchIndex index = SearchIndex.of(archive)) {
-            s = index.rebuild(archive.connection(), (d, t) -> progress.advanced("indexing routes", d), "asked for");
+        ReindexArchive.Result r;
+        try (Workspace w = workspace();
+                ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal())) {
+            r = ReindexArchive.run(w, (d, t) -> progress.advanced("indexing routes", d));
         }
         out().printf(
                         "Indexed %d routes in %.1f s (change stamp %d).%n",
-                        s.routes(), (System.nanoTime() - start) / 1e9, s.stamp());
+                        r.sync().routes(), r.seconds(), r.sync().stamp());
         return ExitCode.OK;
     }
 }

@@ -2,17 +2,11 @@ package org.variset.cli.command;
 
 import java.io.IOException;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
-import org.hibernate.Session;
-import org.variset.archive.change.GymLookup;
+import org.variset.app.Workspace;
+import org.variset.app.change.RemoveRoutes;
 import org.variset.archive.change.RouteRemoval;
-import org.variset.archive.gym.Gym;
-import org.variset.archive.route.Route;
-import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveQueries;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.IndexUpkeep;
 import org.variset.imports.ImportException;
 import org.variset.imports.ProblemList;
 import org.variset.imports.load.RouteKeys;
@@ -59,8 +53,10 @@ final class RemoveCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        try (Archive archive = openArchive()) {
-            RouteRemoval.Plan plan = archive.fromTransaction(s -> RouteRemoval.preview(s, routes(s)));
+        try (Workspace w = workspace()) {
+            RemoveRoutes removal = new RemoveRoutes(w);
+            RouteRemoval.Target t = target();
+            RouteRemoval.Plan plan = removal.preview(t);
             if (plan.routes().isEmpty()) {
                 out().println("Nothing to remove: no archived route matches.");
                 return ExitCode.OK;
@@ -78,8 +74,7 @@ final class RemoveCommand extends VarisetSubcommand {
                 out().println("Nothing removed.");
                 return ExitCode.OK;
             }
-            RouteRemoval.Plan done = archive.fromTransaction(s -> RouteRemoval.remove(s, routes(s)));
-            IndexUpkeep.afterWrite(archive, err());
+            RouteRemoval.Plan done = removal.remove(t);
             out().println("Removed " + done.routes().size() + " routes and " + done.holds() + " holds.");
         }
         return ExitCode.OK;
@@ -97,22 +92,18 @@ final class RemoveCommand extends VarisetSubcommand {
         }
     }
 
-    private List<Route> routes(Session s) {
-        GymLookup lookup = new GymLookup(s);
+    /** The routes to take back: a reset's, or those a routes file lists (its unreadable rows are problems). */
+    private RouteRemoval.Target target() {
         if (target.reset != null) {
-            return RouteRemoval.ofReset(s, lookup.gym(gym.gym), target.reset);
+            return new RouteRemoval.OfReset(gym.gym, target.reset);
         }
         ProblemList problems = new ProblemList();
-        List<Route> out = new ArrayList<>();
-        for (var key : RouteKeys.read(target.file, problems)) {
-            Gym g = lookup.gym(key.gym());
-            new ArchiveQueries(s)
-                    .route(g.name(), key.wall(), key.label(), key.setOn())
-                    .ifPresent(out::add);
-        }
+        List<RouteRemoval.Named> named = RouteKeys.read(target.file, problems).stream()
+                .map(k -> new RouteRemoval.Named(k.gym(), k.wall(), k.label(), k.setOn()))
+                .toList();
         if (!problems.isEmpty()) {
             throw new ImportException(problems);
         }
-        return out;
+        return new RouteRemoval.Listed(named);
     }
 }

@@ -1,8 +1,7 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.JsonNode;
 import java.nio.file.Path;
-import org.variset.archive.backup.ArchiveRestore;
+import org.variset.app.archive.BackupArchive;
 import org.variset.cli.ExitCode;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -28,14 +27,10 @@ final class RestoreCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        Path dir = embeddedDir("restore");
-        ArchiveRestore.Result r = ArchiveRestore.restore(file, dir, force);
-        JsonNode c = r.manifest().get("counts");
-        out().println("Restored " + file + " into " + dir
-                + (r.replaced() ? " (the archive that was there is " + "replaced)" : "") + ": "
-                + c.get("routes").asLong() + " routes, " + c.get("holds").asLong()
-                + " holds, backed up " + r.manifest().get("created").asText() + ". The search index is rebuilt on the "
-                + "next search.");
+        BackupArchive.Result r = BackupArchive.restore(root().location(), file, force);
+        out().println("Restored " + file + " into " + root().location().dir()
+                + (r.replaced() ? " (the archive that was there is replaced)" : "") + ": " + r.routes() + " routes, "
+                + r.holds() + " holds, backed up " + r.created() + ". The search index is rebuilt on the next search.");
         return ExitCode.OK;
     }
 }

@@ -38,38 +38,6 @@ import picocli.CommandLine.ScopeType;
                     + "$XDG_CACHE_HOME/variset."
         })
 public final class RootCommand implements Runnable {
-    /**
-     * The subcommands, in the order the help lists them. They are added per run by {@link #addSubcommands}: building
-     * picocli's model of every command costs a few hundred milliseconds of start-up, so a run that names its command
-     * builds only that one.
-     */
-    static final List<Class<?>> SUBCOMMANDS = List.of(
-            DemoCommand.class,
-            InitCommand.class,
-            InfoCommand.class,
-            ImportCommand.class,
-            ExportCommand.class,
-            AuditCommand.class,
-            PlanCommand.class,
-            TrendCommand.class,
-            SearchCommand.class,
-            SimilarCommand.class,
-            ReindexCommand.class,
-            GenerateCommand.class,
-            CheckCommand.class,
-            BackupCommand.class,
-            RestoreCommand.class,
-            MigrateToCommand.class,
-            SettingsCommand.class,
-            StripCommand.class,
-            RemoveCommand.class,
-            AmendCommand.class,
-            SetterCommand.class,
-            TemplateCommand.class,
-            GradeCommand.class,
-            TrainStartUpCommand.class,
-            CommandLine.HelpCommand.class);
-
     private final VarisetCli cli;
 
     @Option(
@@ -126,35 +94,17 @@ public final class RootCommand implements Runnable {
 
     /**
      * Adds the subcommand a command line names, or all of them when it names none, names one that does not exist
-     * (so that picocli can suggest the nearest) or asks for {@code help}.
+     * (so that picocli can suggest the nearest) or asks for {@code help}. Building picocli's model of every command
+     * costs a few hundred milliseconds of start-up, so a run that names its command builds only that one.
      */
     public static void addSubcommands(CommandLine cl, String[] args) {
-        String wanted = commandName(args);
-        List<Class<?>> chosen =
-                SUBCOMMANDS.stream().filter(c -> nameOf(c).equals(wanted)).toList();
-        for (Class<?> c : chosen.isEmpty() || "help".equals(wanted) ? SUBCOMMANDS : chosen) {
-            cl.addSubcommand(c);
+        CommandCatalog catalog = CommandCatalog.get();
+        String wanted = catalog.commandName(args);
+        List<CommandCatalog.Entry> chosen =
+                catalog.commands().stream().filter(c -> c.name().equals(wanted)).toList();
+        for (CommandCatalog.Entry c : chosen.isEmpty() || "help".equals(wanted) ? catalog.commands() : chosen) {
+            cl.addSubcommand(c.type());
         }
-    }
-
-    /** The first word of a command line that is neither an option nor the value of {@code --archive} or {@code --db}. */
-    static String commandName(String[] args) {
-        int i = 0;
-        while (i < args.length) {
-            String a = args[i];
-            if (a.equals("--")) {
-                return null;
-            }
-            if (!a.startsWith("-")) {
-                return a;
-            }
-            i += a.equals("--archive") || a.equals("--db") ? 2 : 1;
-        }
-        return null;
-    }
-
-    static String nameOf(Class<?> command) {
-        return command.getAnnotation(Command.class).name();
     }
 
     /** Prints a usage error with the command's short help and returns the usage exit code. */

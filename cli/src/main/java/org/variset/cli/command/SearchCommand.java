@@ -1,29 +1,17 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.time.LocalDate;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
-import org.variset.archive.gym.GymCalendar;
-import org.variset.archive.read.ArchiveCatalog;
-import org.variset.archive.read.HoldRecord;
-import org.variset.archive.read.RouteFilter;
-import org.variset.archive.read.RouteReader;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.search.SearchRoutes;
 import org.variset.archive.read.RouteRecord;
 import org.variset.archive.search.QuerySyntaxException;
 import org.variset.archive.search.SearchHits;
-import org.variset.archive.search.SearchIndex;
 import org.variset.archive.search.SearchOrder;
 import org.variset.archive.search.SearchRequest;
-import org.variset.archive.search.SearchVocabulary;
-import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.ConsoleProgress;
-import org.variset.cli.internal.IndexUpkeep;
-import org.variset.cli.internal.Json;
-import org.variset.reports.pdf.StudySheetPdf;
 import org.variset.reports.route.RouteText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -111,49 +99,33 @@ final class SearchCommand extends VarisetSubcommand {
         if (limit < 1) {
             throw new IllegalArgumentException("--limit must be at least 1");
         }
-        try (Archive archive = openArchive();
-                ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal());
-                SearchIndex index =
-                        IndexUpkeep.current(archive, err(), (d, t) -> progress.advanced("indexing routes", d))) {
-            if (gym.gym != null) {
-                new ArchiveCatalog(archive.connection()).gym(gym.gym);
-            }
-            LocalDate today = new GymCalendar(root().cli().clock()).today(java.time.ZoneOffset.UTC);
-            SearchHits hits = index.search(
-                    new SearchRequest(query, gym.gym, wall, standingOn, order, limit, facets),
-                    SearchVocabulary.of(archive.connection(), gym.gym, today));
-            List<RouteRecord> routes = inOrder(
-                    hits,
-                    new RouteReader(archive.connection())
-                            .read(RouteFilter.all()
-                                    .withIds(hits.hits().stream()
-                                            .map(SearchHits.Hit::routeId)
-                                            .toList())));
-            if (format.json()) {
-                out().println(Json.write(json(query, hits, routes)));
-            } else {
-                print(hits, routes);
-            }
-            pdf.write(today, err(), (options, out) -> StudySheetPdf.write(query, hits.total(), routes, options, out));
+        SearchRoutes.Result r;
+        LocalDate today;
+        try (Workspace w = workspace();
+                ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal())) {
+            r = new SearchRoutes(w)
+                    .search(
+                            new SearchRequest(query, gym.gym, wall, standingOn, order, limit, facets),
+                            (d, t) -> progress.advanced("indexing routes", d));
+            today = w.today(gym.gym);
         } catch (QuerySyntaxException e) {
             err().println("variset search: " + e.getMessage());
             err().println(e.pointer());
             err().println("See 'variset search --help' for the query language.");
             return ExitCode.BAD_INPUT;
         }
+        if (format.json()) {
+            out().println(Json.write(r.json()));
+        } else {
+            print(r);
+        }
+        pdf.write(today, err(), r.studySheet());
         return ExitCode.OK;
     }
 
-    private static List<RouteRecord> inOrder(SearchHits hits, List<RouteRecord> read) {
-        Map<Long, RouteRecord> byId = new HashMap<>();
-        read.forEach(r -> byId.put(r.id(), r));
-        return hits.hits().stream()
-                .map(h -> byId.get(h.routeId()))
-                .filter(java.util.Objects::nonNull)
-                .toList();
-    }
-
-    private void print(SearchHits hits, List<RouteRecord> routes) {
+    private void print(SearchRoutes.Result r) {
+        SearchHits hits = r.hits();
+        List<RouteRecord> routes = r.routes();
         out().println(
                         hits.total() == 0
                                 ? "No route matches."
@@ -163,14 +135,14 @@ final class SearchCommand extends VarisetSubcommand {
                                                 : ", by " + order.word())
                                         + ":");
         int n = 0;
-        for (RouteRecord r : routes) {
+        for (RouteRecord x : routes) {
             out().println();
-            out().println((++n) + ". " + RouteText.heading(r));
-            String moves = RouteText.moves(r);
+            out().println((++n) + ". " + RouteText.heading(x));
+            String moves = RouteText.moves(x);
             if (!moves.isEmpty()) {
                 out().println("   " + moves);
             }
-            out().println("   " + RouteText.holds(r));
+            out().println("   " + RouteText.holds(x));
         }
         if (facets) {
             out().println();
@@ -185,50 +157,5 @@ final class SearchCommand extends VarisetSubcommand {
                                                     .map(v -> v.label() + " " + v.count())
                                                     .toList()))));
         }
-    }
-
-    private ObjectNode json(String query, SearchHits hits, List<RouteRecord> routes) {
-        ObjectNode o = Json.object()
-                .put("query", query)
-                .put("total", hits.total())
-                .put("shown", routes.size())
-                .put("sort", order.word());
-        ArrayNode a = o.putArray("hits");
-        for (int i = 0; i < routes.size(); i++) {
-            RouteRecord r = routes.get(i);
-            ObjectNode h = a.addObject()
-                    .put("id", r.id())
-                    .put("gym", r.gym())
-                    .put("wall", r.wall())
-                    .put("route", r.label())
-                    .put("discipline", r.discipline().word())
-                    .put("grade", r.gradeText())
-                    .put("ircra", r.ircra())
-                    .put("set_on", r.setOn().toString())
-                    .put(
-                            "stripped_on",
-                            r.strippedOn() == null ? null : r.strippedOn().toString())
-                    .put("score", hits.hits().get(i).score());
-            r.setters().forEach(h.putArray("setters")::add);
-            r.moves().forEach(h.putArray("moves")::add);
-            r.styles().forEach(h.putArray("styles")::add);
-            ArrayNode holds = h.putArray("holds");
-            for (HoldRecord x : r.holds()) {
-                ObjectNode hold = holds.addObject()
-                        .put("role", x.role().word())
-                        .put("type", x.type())
-                        .put("size", x.size() == null ? null : x.size().word())
-                        .put("hold_ref", x.holdRef());
-                x.grips().forEach(hold.putArray("grip")::add);
-            }
-        }
-        if (facets) {
-            ObjectNode f = o.putObject("facets");
-            hits.facets().forEach((dim, values) -> {
-                ObjectNode d = f.putObject(dim);
-                values.forEach(v -> d.put(v.label(), v.count()));
-            });
-        }
-        return o;
     }
 }

@@ -1,9 +1,8 @@
 package org.variset.cli.command;
 
-import org.variset.archive.change.SetterChanges;
-import org.variset.archive.store.Archive;
+import org.variset.app.Workspace;
+import org.variset.app.change.SetterNames;
 import org.variset.cli.ExitCode;
-import org.variset.cli.internal.IndexUpkeep;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
 
@@ -33,9 +32,8 @@ final class SetterCommand implements Runnable {
 
         @Override
         ExitCode execute() {
-            try (Archive archive = openArchive()) {
-                archive.inTransaction(s -> SetterChanges.rename(s, from, to));
-                IndexUpkeep.afterWrite(archive, err());
+            try (Workspace w = workspace()) {
+                new SetterNames(w).rename(from, to);
             }
             out().println("Renamed setter '" + from + "' to '" + to.strip() + "' on every route.");
             return ExitCode.OK;
@@ -57,9 +55,8 @@ final class SetterCommand implements Runnable {
         @Override
         ExitCode execute() {
             int n;
-            try (Archive archive = openArchive()) {
-                n = archive.fromTransaction(s -> SetterChanges.merge(s, from, into));
-                IndexUpkeep.afterWrite(archive, err());
+            try (Workspace w = workspace()) {
+                n = new SetterNames(w).merge(from, into);
             }
             out().println("Merged '" + from + "' into '" + into + "': " + n + " routes now name '" + into + "'.");
             return ExitCode.OK;

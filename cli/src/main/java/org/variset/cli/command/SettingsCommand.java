@@ -1,31 +1,18 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
-import org.variset.archive.grade.Discipline;
-import org.variset.archive.gym.Gym;
-import org.variset.archive.gym.GymCalendar;
-import org.variset.archive.read.ArchiveCatalog;
-import org.variset.archive.read.GymRecord;
-import org.variset.archive.read.WallRecord;
-import org.variset.archive.settings.GymSettings;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.settings.GymSettingsUse;
 import org.variset.archive.settings.SettingKey;
-import org.variset.archive.settings.SettingValue;
 import org.variset.archive.settings.SettingsListing;
-import org.variset.archive.settings.SettingsReader;
-import org.variset.archive.settings.SettingsWriter;
-import org.variset.archive.store.Archive;
-import org.variset.archive.store.ArchiveQueries;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
-import org.variset.cli.internal.IndexUpkeep;
-import org.variset.cli.internal.Json;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -79,27 +66,18 @@ final class SettingsCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        try (Archive archive = openArchive()) {
-            ArchiveCatalog catalog = new ArchiveCatalog(archive.connection());
-            GymRecord g = catalog.gym(gym.gym);
-            LocalDate day = on != null ? on : new GymCalendar(root().cli().clock()).today(g.zone());
-            GymSettings s = new SettingsReader(archive.connection()).inEffectOn(g.id(), day);
-            List<SettingsListing.Row> rows = SettingsListing.of(s, catalog.walls(g.id()));
-            if (format.json()) {
-                ObjectNode o = Json.object().put("gym", g.name()).put("on", day.toString());
-                ArrayNode a = o.putArray("settings");
-                rows.forEach(r -> a.addObject()
-                        .put("key", r.key())
-                        .put("scope", r.scope())
-                        .put("value", r.value())
-                        .put("source", r.source()));
-                out().println(Json.write(o));
-            } else {
-                out().println("Settings of " + g.name() + " in effect on " + day);
-                int w = rows.stream().mapToInt(r -> label(r).length()).max().orElse(0);
-                rows.forEach(r -> out().println("  " + label(r) + " ".repeat(w - label(r).length()) + "  " + r.value()
-                        + "  [" + r.source() + "]"));
-            }
+        GymSettingsUse.InEffect e;
+        try (Workspace w = workspace()) {
+            e = new GymSettingsUse(w).inEffect(gym.gym, on);
+        }
+        if (format.json()) {
+            out().println(Json.write(e.json()));
+        } else {
+            out().println("Settings of " + e.gym() + " in effect on " + e.on());
+            int width = e.rows().stream().mapToInt(r -> label(r).length()).max().orElse(0);
+            e.rows()
+                    .forEach(r -> out().println("  " + label(r) + " ".repeat(width - label(r).length()) + "  "
+                            + r.value() + "  [" + r.source() + "]"));
         }
         return ExitCode.OK;
     }
@@ -129,37 +107,20 @@ final class SettingsCommand extends VarisetSubcommand {
 
     /** Stores a value (or, with a null value, the return to the default) from a day on. */
     static ExitCode change(VarisetSubcommand cmd, Where where, SettingKey key, String text) {
-        try (Archive archive = cmd.openArchive()) {
-            ArchiveCatalog catalog = new ArchiveCatalog(archive.connection());
-            GymRecord g = catalog.gym(where.gym.gym);
-            if (where.discipline != null && where.wall != null) {
-                throw new ParameterException(cmd.spec.commandLine(), "give --discipline or --wall, not both");
-            }
-            String scope = where.wall != null
-                    ? GymSettings.scopeOf(catalog.wall(g, where.wall))
-                    : where.discipline != null
-                            ? Discipline.parse(where.discipline).word()
-                            : "";
-            LocalDate from = where.from != null
-                    ? where.from
-                    : new GymCalendar(cmd.root().cli().clock()).today(g.zone());
-            GymSettings before = new SettingsReader(archive.connection()).inEffectOn(g.id(), from);
-            archive.inTransaction(s -> {
-                Gym entity = new ArchiveQueries(s).gym(g.name()).orElseThrow();
-                SettingsWriter.set(s, entity, key, scope, from, text == null ? null : key.parse(text), before);
-            });
-            IndexUpkeep.afterWrite(archive, cmd.err());
-            String what = key.word()
-                    + (where.wall != null
-                            ? " of wall " + where.wall.strip()
-                            : where.discipline != null ? " (" + scope + ")" : "");
-            cmd.out()
-                    .println(
-                            text == null
-                                    ? "From " + from + ", " + what + " of " + g.name() + " is back to its " + "default."
-                                    : "From " + from + ", " + what + " of " + g.name() + " is "
-                                            + key.text(key.parse(text)) + ".");
+        if (where.discipline != null && where.wall != null) {
+            throw new ParameterException(cmd.spec.commandLine(), "give --discipline or --wall, not both");
         }
+        GymSettingsUse.Change c;
+        try (Workspace w = cmd.workspace()) {
+            c = new GymSettingsUse(w)
+                    .set(new GymSettingsUse.Scope(where.gym.gym, where.discipline, where.wall, where.from), key, text);
+        }
+        String what = c.key().word() + c.scopeWords();
+        cmd.out()
+                .println(
+                        c.valueText() == null
+                                ? "From " + c.from() + ", " + what + " of " + c.gym() + " is back to its default."
+                                : "From " + c.from() + ", " + what + " of " + c.gym() + " is " + c.valueText() + ".");
         return ExitCode.OK;
     }
 
@@ -234,37 +195,23 @@ final class SettingsCommand extends VarisetSubcommand {
 
         @Override
         ExitCode execute() {
-            try (Archive archive = openArchive()) {
-                ArchiveCatalog catalog = new ArchiveCatalog(archive.connection());
-                GymRecord g = catalog.gym(gym.gym);
-                List<SettingValue> h = new SettingsReader(archive.connection()).history(g.id());
-                List<WallRecord> walls = catalog.walls(g.id());
-                if (format.json()) {
-                    ObjectNode o = Json.object().put("gym", g.name());
-                    ArrayNode a = o.putArray("changes");
-                    h.forEach(v -> a.addObject()
-                            .put("from", v.effectiveOn().toString())
-                            .put("key", v.key().word())
-                            .put("scope", scope(v, walls))
-                            .put("value", v.value() == null ? null : v.text()));
-                    out().println(Json.write(o));
-                } else if (h.isEmpty()) {
-                    out().println(g.name() + " has changed no setting: every value is the default.");
-                } else {
-                    h.forEach(v -> out().println(v.effectiveOn() + "  "
-                            + v.key().word() + (scope(v, walls).isEmpty() ? "" : " (" + scope(v, walls) + ")") + "  "
-                            + v.text()));
-                }
+            String name;
+            List<GymSettingsUse.Past> h;
+            try (Workspace w = workspace()) {
+                GymSettingsUse settings = new GymSettingsUse(w);
+                name = settings.gymName(gym.gym);
+                h = settings.history(gym.gym);
+            }
+            if (format.json()) {
+                out().println(Json.write(GymSettingsUse.json(name, h)));
+            } else if (h.isEmpty()) {
+                out().println(name + " has changed no setting: every value is the default.");
+            } else {
+                h.forEach(p -> out().println(p.value().effectiveOn() + "  "
+                        + p.value().key().word() + (p.scopeWords().isEmpty() ? "" : " (" + p.scopeWords() + ")") + "  "
+                        + p.value().text()));
             }
             return ExitCode.OK;
-        }
-
-        private static String scope(SettingValue v, List<WallRecord> walls) {
-            return walls.stream()
-                    .filter(w -> GymSettings.scopeOf(w).equals(v.scope()))
-                    .map(w -> "wall " + w.name())
-                    .findFirst()
-                    .orElse(v.scope());
         }
     }
 }

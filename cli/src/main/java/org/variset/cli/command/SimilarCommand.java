@@ -1,18 +1,11 @@
 package org.variset.cli.command;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.time.LocalDate;
-import org.variset.archive.read.ArchiveCatalog;
-import org.variset.archive.read.GymRecord;
-import org.variset.archive.read.RouteRecord;
-import org.variset.archive.search.IndexProgress;
-import org.variset.archive.search.SearchIndex;
-import org.variset.archive.store.Archive;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.search.FindSimilar;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
-import org.variset.cli.internal.IndexUpkeep;
-import org.variset.cli.internal.Json;
 import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FeatureText;
 import org.variset.reports.route.RouteText;
@@ -80,15 +73,11 @@ final class SimilarCommand extends VarisetSubcommand {
             day = new DateConverter().convert(parts[2]);
         }
         SimilarRoutes.Result r;
-        try (Archive archive = openArchive();
-                SearchIndex index = IndexUpkeep.current(archive, err(), IndexProgress.NONE)) {
-            GymRecord g = new ArchiveCatalog(archive.connection()).gym(gymName);
-            SimilarRoutes similar = new SimilarRoutes(archive.connection());
-            RouteRecord target = similar.route(g.name(), label, wall, day);
-            r = similar.find(target, index, g, Math.max(1, limit));
+        try (Workspace w = workspace()) {
+            r = new FindSimilar(w).find(new FindSimilar.RouteName(gymName, label, wall, day), limit);
         }
         if (format.json()) {
-            out().println(Json.write(json(r)));
+            out().println(Json.write(FindSimilar.json(r)));
             return ExitCode.OK;
         }
         out().println("Routes most like " + RouteText.heading(r.route()));
@@ -110,23 +99,5 @@ final class SimilarCommand extends VarisetSubcommand {
             out().println("   " + FeatureText.shared(m.similarity().sharedFeatures()));
         }
         return ExitCode.OK;
-    }
-
-    private static ObjectNode json(SimilarRoutes.Result r) {
-        ObjectNode o = Json.object()
-                .put("route", r.route().name())
-                .put("comparable", r.comparable())
-                .put("candidates_scored", r.candidates());
-        ArrayNode a = o.putArray("similar");
-        for (SimilarRoutes.Match m : r.matches()) {
-            ObjectNode x = a.addObject()
-                    .put("route", m.other().name())
-                    .put("gym", m.other().gym())
-                    .put("jaccard", m.similarity().jaccard())
-                    .put("shared_count", m.similarity().shared())
-                    .put("union_count", m.similarity().union());
-            m.similarity().sharedFeatures().forEach(x.putArray("shared")::add);
-        }
-        return o;
     }
 }

@@ -1,13 +1,11 @@
 package org.variset.cli.command;
 
 import java.time.LocalDate;
-import org.variset.archive.change.GymLookup;
+import org.variset.app.Workspace;
+import org.variset.app.change.StripWall;
 import org.variset.archive.change.WallStrip;
-import org.variset.archive.gym.Wall;
-import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
-import org.variset.cli.internal.IndexUpkeep;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -39,13 +37,8 @@ final class StripCommand extends VarisetSubcommand {
     @Override
     ExitCode execute() {
         WallStrip.Result r;
-        try (Archive archive = openArchive()) {
-            r = archive.fromTransaction(s -> {
-                GymLookup lookup = new GymLookup(s);
-                Wall w = lookup.wall(lookup.gym(gym.gym), wall);
-                return WallStrip.strip(s, w, on);
-            });
-            IndexUpkeep.afterWrite(archive, err());
+        try (Workspace w = workspace()) {
+            r = new StripWall(w).strip(gym.gym, wall, on);
         }
         out().println("Stripped " + r.stripped() + " routes of " + wall + " on " + on + "; " + r.setThatDay()
                 + " set that day stay up; " + r.alreadyDown() + " were already down.");

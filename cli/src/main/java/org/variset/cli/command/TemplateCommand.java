@@ -1,11 +1,10 @@
 package org.variset.cli.command;
 
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import org.variset.app.imports.WriteTemplates;
 import org.variset.cli.ExitCode;
 import org.variset.imports.export.ExportFormat;
-import org.variset.imports.export.TemplateWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -30,12 +29,7 @@ final class TemplateCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        List<Path> files;
-        try {
-            files = TemplateWriter.write(format, out, force);
-        } catch (IOException e) {
-            throw new IllegalArgumentException("cannot write the templates into " + out + ": " + e.getMessage(), e);
-        }
+        List<Path> files = WriteTemplates.into(out, format, force);
         out().println("Wrote "
                 + String.join(", ", files.stream().map(Path::toString).toList()) + ".");
         return ExitCode.OK;

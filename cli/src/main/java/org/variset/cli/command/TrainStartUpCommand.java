@@ -9,6 +9,7 @@ import java.io.Writer;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import org.variset.app.sample.RunDemo;
 import org.variset.cli.ExitCode;
 import org.variset.cli.VarisetCli;
 import picocli.CommandLine.Command;
@@ -75,7 +76,7 @@ final class TrainStartUpCommand extends VarisetSubcommand {
 
     private static void deleteQuietly(Path dir) {
         try {
-            DemoCommand.deleteTree(dir);
+            RunDemo.deleteTree(dir);
         } catch (IOException e) {
             // a temporary folder; the system cleans it up in time
         }

@@ -1,23 +1,14 @@
 package org.variset.cli.command;
 
-import java.time.LocalDate;
 import java.util.ArrayList;
-import java.util.LinkedHashSet;
 import java.util.List;
-import org.variset.archive.gym.GymCalendar;
+import org.variset.app.Json;
+import org.variset.app.Workspace;
+import org.variset.app.trend.TrendPeriod;
 import org.variset.archive.gym.PartialDate;
-import org.variset.archive.read.ArchiveCatalog;
-import org.variset.archive.read.GymRecord;
-import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.PartialDateConverter;
-import org.variset.cli.internal.Json;
 import org.variset.cli.render.TrendText;
-import org.variset.reports.pdf.TrendPdf;
-import org.variset.reports.trend.ChainComparison;
-import org.variset.reports.trend.Trend;
-import org.variset.reports.trend.TrendJson;
-import org.variset.reports.trend.TrendReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -97,44 +88,22 @@ final class TrendCommand extends VarisetSubcommand {
         if (allGyms && !gyms.isEmpty()) {
             throw new ParameterException(spec.commandLine(), "give --gym, or --all-gyms, not both");
         }
-        List<Trend> trends = new ArrayList<>();
-        LocalDate today;
-        try (Archive archive = openArchive()) {
-            ArchiveCatalog catalog = new ArchiveCatalog(archive.connection());
-            List<String> names = allGyms
-                    ? catalog.gyms().stream().map(GymRecord::name).toList()
-                    : gyms.isEmpty()
-                            ? java.util.Collections.singletonList(null)
-                            : List.copyOf(new LinkedHashSet<>(gyms));
-            if (names.isEmpty()) {
-                throw new IllegalArgumentException("the archive holds no gym yet; import some sets first");
-            }
-            // One "today" for all: the first gym's (gyms of a chain may lie in several time zones).
-            today = new GymCalendar(root().cli().clock())
-                    .today(catalog.gym(names.get(0)).zone());
-            LocalDate first = year != null ? LocalDate.of(year, 1, 1) : from.first();
-            LocalDate last = year != null ? LocalDate.of(year, 12, 31) : to == null ? today : to.last();
-            TrendReport report = new TrendReport(archive.connection());
-            for (String name : names) {
-                trends.add(report.of(name, first, last, today));
-            }
+        TrendPeriod.Request request = year != null
+                ? TrendPeriod.Request.year(year, gyms, allGyms)
+                : new TrendPeriod.Request(gyms, allGyms, from.first(), to == null ? null : to.last());
+        TrendPeriod.Result r;
+        try (Workspace w = workspace()) {
+            r = new TrendPeriod(w).run(request);
         }
-        if (trends.size() > 1) {
-            ChainComparison c = ChainComparison.of(trends);
-            pdf.write(today, err(), (options, out) -> TrendPdf.write(c, trends, options, out));
-            switch (format) {
-                case "json" -> out().println(Json.write(TrendJson.of(c, trends)));
-                case "csv" -> out().print(TrendJson.csv(c));
-                default -> out().print(TrendText.of(c, trends));
-            }
-            return ExitCode.OK;
-        }
-        Trend t = trends.get(0);
-        pdf.write(today, err(), (options, out) -> TrendPdf.write(t, options, out));
+        pdf.write(r.today(), err(), r.document());
         switch (format) {
-            case "json" -> out().println(Json.write(TrendJson.of(t)));
-            case "csv" -> out().print(TrendJson.csv(t));
-            default -> out().print(TrendText.of(t));
+            case "json" -> out().println(Json.write(r.json()));
+            case "csv" -> out().print(r.csv());
+            default ->
+                out().print(
+                                r.compared()
+                                        ? TrendText.of(r.comparison(), r.trends())
+                                        : TrendText.of(r.trends().get(0)));
         }
         return ExitCode.OK;
     }

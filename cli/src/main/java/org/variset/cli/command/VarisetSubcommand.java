@@ -2,10 +2,10 @@ package org.variset.cli.command;
 
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
-import org.variset.archive.location.ArchiveLocation;
+import org.variset.app.Notices;
+import org.variset.app.Workspace;
 import org.variset.archive.problem.ArchiveException;
 import org.variset.archive.problem.InputException;
-import org.variset.archive.store.Archive;
 import org.variset.cli.ExitCode;
 import org.variset.cli.internal.Logging;
 import org.variset.cli.render.CliWords;
@@ -37,20 +37,14 @@ abstract class VarisetSubcommand implements Callable<Integer> {
         return root().cli().err();
     }
 
-    /** The folder of an embedded archive; a clear error for a shared one, whose server keeps its own files. */
-    java.nio.file.Path embeddedDir(String what) {
-        ArchiveLocation where = root().location();
-        if (where.shared()) {
-            throw new IllegalArgumentException(what + " works on an embedded archive, and this one is shared on "
-                    + where.shown() + "; back up a PostgreSQL archive with the server's own tools (pg_dump and "
-                    + "pg_restore, or the server's continuous archiving)");
-        }
-        return where.dir();
+    /** Notices of the use cases, on standard error. */
+    Notices notices() {
+        return CliWords.notices(err());
     }
 
-    /** Opens the archive of this run, migrating it if it is behind. */
-    Archive openArchive() {
-        return Archive.open(root().location(), org.variset.archive.store.ArchiveLock.DEFAULT_WAIT);
+    /** Opens the archive of this run as a workspace, migrating it if it is behind. */
+    Workspace workspace() {
+        return Workspace.open(root().location(), root().cli().clock(), notices());
     }
 
     @Override

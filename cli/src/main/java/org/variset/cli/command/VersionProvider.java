@@ -1,24 +1,14 @@
 package org.variset.cli.command;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.util.Properties;
+import org.variset.app.VarisetVersion;
 import picocli.CommandLine.IVersionProvider;
 
-/** Reads the version written into the jar at build time. */
+/** The version picocli prints for {@code --version}. */
 public final class VersionProvider implements IVersionProvider {
 
-    /** The version of this build, or {@code unknown} when run from unpackaged classes without resources. */
+    /** The version of this build, or {@code unknown} when run from classes without their resources. */
     public static String version() {
-        Properties p = new Properties();
-        try (InputStream in = VersionProvider.class.getResourceAsStream("/org/variset/cli/version.properties")) {
-            if (in != null) {
-                p.load(in);
-            }
-        } catch (IOException e) {
-            return "unknown";
-        }
-        return p.getProperty("version", "unknown");
+        return VarisetVersion.current();
     }
 
     @Override

@@ -1,7 +1,10 @@
 package org.variset.cli.render;
 
+import java.io.PrintWriter;
 import java.util.Arrays;
 import java.util.stream.Collectors;
+import org.variset.app.Notice;
+import org.variset.app.Notices;
 import org.variset.archive.location.ArchiveLocation;
 import org.variset.archive.problem.Remedy;
 import org.variset.imports.ImportException;
@@ -83,6 +86,14 @@ public final class CliWords {
     /** One located problem, with its remedy in parentheses. */
     public static String problem(Problem p) {
         return p.remedy().kind() == Remedy.Kind.NONE ? p.toString() : p + " (" + remedy(p.remedy()) + ")";
+    }
+
+    /** Notices printed on a writer: {@code variset: warning: ...} for warnings, {@code variset: ...} otherwise. */
+    public static Notices notices(PrintWriter err) {
+        return n -> {
+            err.println("variset: " + (n.kind() == Notice.Kind.WARNING ? "warning: " : "") + n.text());
+            err.flush();
+        };
     }
 
     /** Where a location came from, naming this command line's options for one given on it. */

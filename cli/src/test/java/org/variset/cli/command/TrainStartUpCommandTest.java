@@ -25,9 +25,9 @@ class TrainStartUpCommandTest {
     @Test
     void everyCommandOfTheScriptExists() {
         for (var line : TrainStartUpCommand.SCRIPT) {
-            String name = RootCommand.commandName(line.toArray(String[]::new));
+            String name = CommandCatalog.get().commandName(line.toArray(String[]::new));
             if (name != null) {
-                assertThat(RootCommand.SUBCOMMANDS.stream().map(RootCommand::nameOf))
+                assertThat(CommandCatalog.get().commands().stream().map(CommandCatalog.Entry::name))
                         .as(line.toString())
                         .contains(name);
             }

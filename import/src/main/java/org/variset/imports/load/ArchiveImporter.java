@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Set;
 import java.util.TreeSet;
+import org.variset.archive.settings.GymVocabularies;
 import org.variset.archive.store.Archive;
 import org.variset.imports.ImportException;
 import org.variset.imports.ProblemList;
@@ -49,8 +50,9 @@ public final class ArchiveImporter {
             throw new ImportException(fatal);
         }
         ImportPlan plan = new ImportPlan(options, new ProblemList());
-        RowParser parser = new RowParser(options.vocabulary(), plan.problems);
-        RowParser quiet = new RowParser(options.vocabulary(), new ProblemList());
+        GymVocabularies vocabularies = GymVocabularies.of(archive.connection());
+        RowParser parser = new RowParser(vocabularies, plan.problems);
+        RowParser quiet = new RowParser(vocabularies, new ProblemList());
         Stopwatch clock = new Stopwatch(progress);
         read(sources, parser, plan);
         clock.lap("reading routes");

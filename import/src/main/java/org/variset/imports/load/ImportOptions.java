@@ -2,7 +2,6 @@ package org.variset.imports.load;
 
 import java.time.ZoneId;
 import java.util.Objects;
-import org.variset.archive.vocabulary.Vocabulary;
 
 /**
  * How to import.
@@ -10,35 +9,32 @@ import org.variset.archive.vocabulary.Vocabulary;
  * @param dryRun validate and report what would change, write nothing
  * @param skipBadRows import the good rows and list each skipped one
  * @param update let changed rows replace what the archive holds for their route
- * @param vocabulary the terms hold types, moves and styles are read with
  * @param newGymZone the time zone given to a gym the import creates
  */
-public record ImportOptions(
-        boolean dryRun, boolean skipBadRows, boolean update, Vocabulary vocabulary, ZoneId newGymZone) {
+public record ImportOptions(boolean dryRun, boolean skipBadRows, boolean update, ZoneId newGymZone) {
 
     /** Checks the fields. */
     public ImportOptions {
-        Objects.requireNonNull(vocabulary, "vocabulary");
         Objects.requireNonNull(newGymZone, "newGymZone");
     }
 
-    /** Defaults: write, refuse bad rows and changes, default vocabulary, the system's time zone. */
+    /** Defaults: write, refuse bad rows and changes, the system's time zone. */
     public static ImportOptions defaults() {
-        return new ImportOptions(false, false, false, Vocabulary.defaults(), ZoneId.systemDefault());
+        return new ImportOptions(false, false, false, ZoneId.systemDefault());
     }
 
     /** The same options with dry-run set. */
     public ImportOptions withDryRun(boolean on) {
-        return new ImportOptions(on, skipBadRows, update, vocabulary, newGymZone);
+        return new ImportOptions(on, skipBadRows, update, newGymZone);
     }
 
     /** The same options with skip-bad-rows set. */
     public ImportOptions withSkipBadRows(boolean on) {
-        return new ImportOptions(dryRun, on, update, vocabulary, newGymZone);
+        return new ImportOptions(dryRun, on, update, newGymZone);
     }
 
     /** The same options with update set. */
     public ImportOptions withUpdate(boolean on) {
-        return new ImportOptions(dryRun, skipBadRows, on, vocabulary, newGymZone);
+        return new ImportOptions(dryRun, skipBadRows, on, newGymZone);
     }
 }

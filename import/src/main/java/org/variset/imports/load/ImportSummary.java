@@ -9,12 +9,12 @@ import java.util.Set;
  * @param dryRun true when nothing was written
  * @param routesNew routes not in the archive before
  * @param routesUnchanged routes the archive already held exactly (holds included)
- * @param routesChanged routes whose rows differ from the archive (updated with --update, else refused)
+ * @param routesChanged routes whose rows differ from the archive (updated when the import allows updates, else refused)
  * @param wallsNew walls created
  * @param wallsChanged walls whose attributes changed
  * @param holdsWritten hold placements written (or that would be)
  * @param changes one line per changed route or wall, naming what differs
- * @param skipped problems of rows that were skipped (with --skip-bad-rows), each naming file and line
+ * @param skipped problems of rows that were skipped (when bad rows are skipped), each naming file and line
  * @param skippedCount how many rows were skipped
  * @param extraColumns columns the spec does not define, kept as extra fields
  * @param unknownTerms moves and styles not in the vocabulary, kept as written

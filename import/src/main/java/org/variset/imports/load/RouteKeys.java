@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import java.util.TreeSet;
-import org.variset.archive.vocabulary.Vocabulary;
+import org.variset.archive.settings.GymVocabularies;
 import org.variset.imports.ProblemList;
 import org.variset.imports.row.RouteKey;
 import org.variset.imports.row.RouteRow;
@@ -22,7 +22,7 @@ public final class RouteKeys {
     public static List<RouteKey> read(Path file, ProblemList problems) {
         Set<String> ignored = new TreeSet<>();
         List<RowSource> sources = InputFiles.open(List.of(file), problems, ignored);
-        RowParser parser = new RowParser(Vocabulary.defaults(), problems);
+        RowParser parser = new RowParser(GymVocabularies.DEFAULT, problems);
         List<RouteKey> keys = new ArrayList<>();
         for (RowSource s : sources) {
             if (s.kind() != TableKind.ROUTES) {

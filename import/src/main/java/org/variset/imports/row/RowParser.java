@@ -16,6 +16,7 @@ import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.HoldRole;
 import org.variset.archive.route.HoldSize;
 import org.variset.archive.route.Reset;
+import org.variset.archive.settings.GymVocabularies;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 import org.variset.imports.ProblemList;
@@ -30,13 +31,16 @@ import org.variset.imports.table.TableRow;
  */
 public final class RowParser {
     private final GradeReader grades = GradeReader.standard();
-    private final Vocabulary vocabulary;
+    private final GymVocabularies vocabularies;
     private final ProblemList problems;
     private final Set<String> unknownTerms = new TreeSet<>();
 
-    /** A parser with a vocabulary, recording problems in a list. */
-    public RowParser(Vocabulary vocabulary, ProblemList problems) {
-        this.vocabulary = vocabulary;
+    /**
+     * A parser recording problems in a list. Each row's terms are read with the vocabulary its gym had on its set
+     * date, so a gym's own spellings become its canonical terms.
+     */
+    public RowParser(GymVocabularies vocabularies, ProblemList problems) {
+        this.vocabularies = vocabularies;
         this.problems = problems;
     }
 
@@ -66,8 +70,9 @@ public final class RowParser {
                 .map(s -> java.text.Normalizer.normalize(s, java.text.Normalizer.Form.NFC))
                 .toList();
         Double angle = c.number("angle_deg", -45, 90, "degrees from vertical, -45 to 90");
-        List<String> moves = terms(c, VocabularyField.MOVES, "moves");
-        List<String> styles = terms(c, VocabularyField.STYLES, "styles");
+        Vocabulary vocabulary = vocabularies.on(gym, setOn);
+        List<String> moves = terms(c, vocabulary, VocabularyField.MOVES, "moves");
+        List<String> styles = terms(c, vocabulary, VocabularyField.STYLES, "styles");
         List<Integer> difficulty = difficulties(c);
         var extras = c.extras(TableKind.ROUTES);
         if (!c.ok()) {
@@ -114,7 +119,7 @@ public final class RowParser {
         String route = c.name("route", true);
         LocalDate setOn = c.date("set_on", true);
         Integer seq = c.integer("seq", 1, 100_000, "the hold's order along the route, from 1");
-        String type = holdType(c);
+        String type = holdType(c, vocabularies.on(gym, setOn));
         HoldRole role = role(c, type);
         HoldSize size = size(c);
         List<Double> grips = grips(c);
@@ -205,7 +210,7 @@ public final class RowParser {
         }
     }
 
-    private List<String> terms(CellReader c, VocabularyField field, String column) {
+    private List<String> terms(CellReader c, Vocabulary vocabulary, VocabularyField field, String column) {
         List<String> out = new ArrayList<>();
         for (String t : c.list(column)) {
             String term = vocabulary.termOrAsWritten(field, t);
@@ -237,7 +242,7 @@ public final class RowParser {
         return out;
     }
 
-    private String holdType(CellReader c) {
+    private String holdType(CellReader c, Vocabulary vocabulary) {
         String t = c.text("type");
         if (t == null) {
             c.problem(

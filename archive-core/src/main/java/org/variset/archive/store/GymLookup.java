@@ -1,11 +1,10 @@
-package org.variset.archive.change;
+package org.variset.archive.store;
 
 import java.util.List;
 import org.hibernate.Session;
 import org.variset.archive.gym.Gym;
 import org.variset.archive.gym.Unknown;
 import org.variset.archive.gym.Wall;
-import org.variset.archive.store.ArchiveQueries;
 
 /**
  * Finds the gym and wall a command names, with messages that list what there is. The gym may be left out when
@@ -13,6 +12,11 @@ import org.variset.archive.store.ArchiveQueries;
  */
 public final class GymLookup {
     private final ArchiveQueries q;
+
+    /** Lookups in a transaction. */
+    public GymLookup(Transaction tx) {
+        this(tx.session());
+    }
 
     /** Lookups in a session. */
     public GymLookup(Session session) {

@@ -1,4 +1,4 @@
-package org.variset.cli.command;
+package org.variset.app.sample;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -6,7 +6,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /** File names made from wall and setter names never leave the reports folder. */
-class DemoReportsTest {
+class DemoFileNamesTest {
     @ParameterizedTest(name = "{0}")
     @CsvSource(
             delimiter = '|',
@@ -19,6 +19,6 @@ class DemoReportsTest {
                 "C:\\\\Windows\\\\x|c-windows-x"
             })
     void makesSafeFileNames(String name, String expected) {
-        assertThat(DemoReports.file(name)).isEqualTo(expected).doesNotContain("/", "\\", "..");
+        assertThat(RunDemo.fileName(name)).isEqualTo(expected).doesNotContain("/", "\\", "..");
     }
 }

@@ -1,11 +1,11 @@
-package org.variset.cli.internal;
+package org.variset.app;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
-/** The JSON written by {@code --format json}: pretty-printed, keys in insertion order, unrounded numbers. */
+/** The JSON the use cases give for scripts and the web: keys in insertion order, numbers unrounded. */
 public final class Json {
     private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
@@ -16,12 +16,17 @@ public final class Json {
         return MAPPER.createObjectNode();
     }
 
-    /** The text of a JSON value. */
+    /** The text of a JSON value, pretty-printed. */
     public static String write(Object value) {
         try {
             return MAPPER.writeValueAsString(value);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("cannot write JSON", e);
         }
+    }
+
+    /** A date as JSON text, or null. */
+    public static String date(java.time.LocalDate d) {
+        return d == null ? null : d.toString();
     }
 }
