@@ -92,12 +92,14 @@ public record RouteCorrection(
             r.setSetters(setters.stream().map(n -> setter(s, n)).toList());
         }
         if (moves != null) {
-            changed.add("moves: " + r.moves() + " -> " + moves);
-            r.setMoves(terms(vocabulary, VocabularyField.MOVES, moves));
+            List<String> terms = terms(vocabulary, VocabularyField.MOVES, moves);
+            changed.add("moves: " + r.moves() + " -> " + terms);
+            r.setMoves(terms);
         }
         if (styles != null) {
-            changed.add("styles: " + r.styles() + " -> " + styles);
-            r.setStyles(terms(vocabulary, VocabularyField.STYLES, styles));
+            List<String> terms = terms(vocabulary, VocabularyField.STYLES, styles);
+            changed.add("styles: " + r.styles() + " -> " + terms);
+            r.setStyles(terms);
         }
         if (moveDifficulty != null) {
             changed.add("move_difficulty: " + r.moveDifficulty() + " -> " + moveDifficulty);
