@@ -22,7 +22,7 @@ class ArchiveCommandsTest {
         CliRun info =
                 CliRun.run(home, "--archive", dir, "info", "--format", "json").exits(ExitCode.OK);
         JsonNode j = new ObjectMapper().readTree(info.out());
-        assertThat(j.get("schema_version").asInt()).isEqualTo(org.variset.archive.schema.SchemaVersion.LATEST);
+        assertThat(j.required("schema_version").asInt()).isEqualTo(org.variset.archive.schema.SchemaVersion.LATEST);
         for (String key : new String[] {"gyms", "walls", "resets", "routes", "holds", "setters"}) {
             assertThat(j.get(key).asLong()).as(key).isZero();
         }

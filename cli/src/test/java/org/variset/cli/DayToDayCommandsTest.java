@@ -46,8 +46,8 @@ class DayToDayCommandsTest {
         CliRun r = run("import", example("routes.csv").toString(), "--format", "json")
                 .exits(ExitCode.OK);
         var j = new ObjectMapper().readTree(r.out());
-        assertThat(j.at("/routes/unchanged").asInt()).isEqualTo(3);
-        assertThat(j.at("/routes/new").asInt()).isZero();
+        assertThat(j.requiredAt("/routes/unchanged").asInt()).isEqualTo(3);
+        assertThat(j.requiredAt("/routes/new").asInt()).isZero();
     }
 
     @Test
@@ -94,9 +94,38 @@ class DayToDayCommandsTest {
     }
 
     @Test
-    void correctsOneRouteAndMergesSetters() {
-        run("amend", "N1", "--wall", "North Arch", "--set-on", "2026-03-02", "--grade", "V3", "--setters", "K. Ames")
+    void correctsOneRouteAndMergesSetters() throws java.io.IOException {
+        CliRun amend = run(
+                        "amend",
+                        "N1",
+                        "--wall",
+                        "North Arch",
+                        "--set-on",
+                        "2026-03-02",
+                        "--grade",
+                        "V3",
+                        "--setters",
+                        "K. Ames")
                 .exits(ExitCode.OK);
+        assertThat(amend.out())
+                .contains("Amended N1 (2026-03-02, North Arch):")
+                .contains("grade: V2 -> V3")
+                .contains("setters: ")
+                .contains("-> [K. Ames]");
+        CliRun exported = run(
+                        "export",
+                        "--gym",
+                        "Example Gym",
+                        "--format",
+                        "json",
+                        "--out",
+                        home.resolve("amended.json").toString())
+                .exits(ExitCode.OK);
+        assertThat(exported.out()).contains("Exported");
+        String routes = java.nio.file.Files.readString(home.resolve("amended.json"));
+        assertThat(routes)
+                .containsPattern("\"route\" : \"N1\"[^}]*\"grade\" : \"V3\"")
+                .containsPattern("\"route\" : \"N1\"[^}]*\"setters\" : \\[ \"K. Ames\" \\]");
         CliRun merge = run("setter", "merge", "K. Ames", "Kit Ames").exits(ExitCode.OK);
         assertThat(merge.out()).contains("1 routes now name 'Kit Ames'");
         CliRun rename = run("setter", "rename", "Rui Sol", "Kit Ames").exits(ExitCode.BAD_INPUT);

@@ -54,9 +54,9 @@ class GradeCommandTest {
     void writesJsonForScripts() throws Exception {
         CliRun r = CliRun.run(home, "grade", "V2", "--format", "json").exits(ExitCode.OK);
         JsonNode j = new ObjectMapper().readTree(r.out());
-        assertThat(j.get("ircra").asDouble()).isEqualTo(15.5);
-        assertThat(j.get("band").asText()).isEqualTo("V2");
-        assertThat(j.at("/equivalents/font").toString()).isEqualTo("[\"5+\",\"6A\",\"6A+\"]");
+        assertThat(j.required("ircra").asDouble()).isEqualTo(15.5);
+        assertThat(j.required("band").asText()).isEqualTo("V2");
+        assertThat(j.requiredAt("/equivalents/font").toString()).isEqualTo("[\"5+\",\"6A\",\"6A+\"]");
     }
 
     @Test

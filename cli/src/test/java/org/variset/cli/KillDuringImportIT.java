@@ -123,7 +123,7 @@ class KillDuringImportIT {
                         "--format",
                         "json")
                 .exits(ExitCode.OK);
-        assertThat(JSON.readTree(search.out()).get("total").asLong())
+        assertThat(JSON.readTree(search.out()).required("total").asLong())
                 .as("run %d: search agrees", i)
                 .isEqualTo(imported ? extra.routes() : 0);
         if (atTheSeam) {

@@ -91,9 +91,10 @@ class PdfDocumentsTest {
         void printsTheScoreAndTheFirstTenFindingsOfTheJson() {
             assertThat(text)
                     .contains("Score "
-                            + Figures.SCORE.text(json.at("/score/score").asDouble()) + " of 100");
+                            + Figures.SCORE.text(json.requiredAt("/score/score").asDouble()) + " of 100");
             for (int i = 0; i < Math.min(10, json.get("findings").size()); i++) {
-                String start = json.get("findings").get(i).get("text").asText().substring(0, 40);
+                String start =
+                        json.get("findings").get(i).required("text").asText().substring(0, 40);
                 assertThat(text.replace("\n", " ")).as(start).contains(start);
             }
         }
@@ -103,9 +104,10 @@ class PdfDocumentsTest {
         void printsTheSideBySideFiguresOfTheJson() {
             List<String> lines = text.lines().toList();
             for (Figure k : Figures.HEADLINE) {
-                JsonNode row = json.at("/context/figures/" + k.key());
+                JsonNode row = json.requiredAt("/context/figures/" + k.key());
                 assertThat(row.isArray()
-                                && row.size() == json.at("/context/columns").size())
+                                && row.size()
+                                        == json.requiredAt("/context/columns").size())
                         .as("a value per column for %s", k.key())
                         .isTrue();
                 List<String> values = new ArrayList<>();
@@ -120,12 +122,12 @@ class PdfDocumentsTest {
             assertThat(text.replace("\n", " "))
                     .contains("Resultant length "
                             + Figures.GRIP_RESULTANT.text(
-                                    json.at("/grip/resultant_length").asDouble()))
+                                    json.requiredAt("/grip/resultant_length").asDouble()))
                     .contains("circular standard deviation "
                             + Figures.GRIP_SD.text(
-                                    json.at("/grip/circular_sd_deg").asDouble()) + "°")
+                                    json.requiredAt("/grip/circular_sd_deg").asDouble()) + "°")
                     .contains("Rayleigh test p < 0.001");
-            assertThat(text).contains("up " + json.at("/grip/sectors/0").asInt());
+            assertThat(text).contains("up " + json.requiredAt("/grip/sectors/0").asInt());
         }
 
         @Test
@@ -212,15 +214,17 @@ class PdfDocumentsTest {
                     .contains("Setters")
                     .contains("Notable repeats")
                     .contains("Safety.");
+            assertThat(json.required("walls")).hasSize(3);
             for (JsonNode w : json.get("walls")) {
                 assertThat(text)
-                        .contains(w.get("wall").asText() + " " + w.get("resets").size() + " "
-                                + Figures.SCORE.text(w.get("mean_score").asDouble()) + " "
-                                + w.get("last_reset").asText()
-                                + " " + w.get("days_since_reset").asInt() + " "
-                                + w.get("cycle_days").asInt() + " "
-                                + w.get("status").asText() + " "
-                                + w.get("days_past_due").asInt());
+                        .contains(w.required("wall").asText() + " "
+                                + w.get("resets").size() + " "
+                                + Figures.SCORE.text(w.required("mean_score").asDouble()) + " "
+                                + w.required("last_reset").asText()
+                                + " " + w.required("days_since_reset").asInt() + " "
+                                + w.required("cycle_days").asInt() + " "
+                                + w.required("status").asText() + " "
+                                + w.required("days_past_due").asInt());
             }
         }
     }

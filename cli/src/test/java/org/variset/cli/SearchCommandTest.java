@@ -59,11 +59,11 @@ class SearchCommandTest {
         JsonNode j = JSON.readTree(run("search", "wall:Bay", "--facets", "--sort", "grade", "--format", "json")
                 .exits(ExitCode.OK)
                 .out());
-        assertThat(j.get("total").asInt()).isEqualTo(3);
-        assertThat(j.at("/hits/0/route").asText()).isEqualTo("B1");
-        assertThat(j.at("/hits/2/holds/0/type").asText()).isEqualTo("volume");
-        assertThat(j.at("/facets/setter/Bo Renner").asInt()).isEqualTo(2);
-        assertThat(j.at("/facets/band/V5").asInt()).isEqualTo(1);
+        assertThat(j.required("total").asInt()).isEqualTo(3);
+        assertThat(j.requiredAt("/hits/0/route").asText()).isEqualTo("B1");
+        assertThat(j.requiredAt("/hits/2/holds/0/type").asText()).isEqualTo("volume");
+        assertThat(j.requiredAt("/facets/setter/Bo Renner").asInt()).isEqualTo(2);
+        assertThat(j.requiredAt("/facets/band/V5").asInt()).isEqualTo(1);
     }
 
     @Test
@@ -125,11 +125,11 @@ class SearchCommandTest {
         JsonNode j = JSON.readTree(run("similar", "A2", "--set-on", "2026-02-02", "--limit", "3", "--format", "json")
                 .exits(ExitCode.OK)
                 .out());
-        assertThat(j.at("/similar/0/route").asText()).isEqualTo("A1 (Arch, 2026-01-05)");
-        assertThat(j.at("/similar/0/jaccard").asDouble()).isEqualTo(11 / 13.0);
-        assertThat(j.at("/similar/1/jaccard").asDouble()).isEqualTo(10 / 13.0);
-        assertThat(j.at("/similar/2/route").asText()).isEqualTo("A1 (Arch, 2025-12-08)");
-        assertThat(j.at("/similar/2/jaccard").asDouble()).isEqualTo(8 / 12.0);
+        assertThat(j.requiredAt("/similar/0/route").asText()).isEqualTo("A1 (Arch, 2026-01-05)");
+        assertThat(j.requiredAt("/similar/0/jaccard").asDouble()).isEqualTo(11 / 13.0);
+        assertThat(j.requiredAt("/similar/1/jaccard").asDouble()).isEqualTo(10 / 13.0);
+        assertThat(j.requiredAt("/similar/2/route").asText()).isEqualTo("A1 (Arch, 2025-12-08)");
+        assertThat(j.requiredAt("/similar/2/jaccard").asDouble()).isEqualTo(8 / 12.0);
         assertThat(run("similar", "A1").exits(ExitCode.BAD_INPUT).err())
                 .contains("'A1' names 3 routes")
                 .contains("--wall and --set-on");

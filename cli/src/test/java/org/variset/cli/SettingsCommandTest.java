@@ -59,13 +59,13 @@ class SettingsCommandTest {
         ObjectMapper m = new ObjectMapper();
         JsonNode after = m.readTree(
                 run("audit", "--reset", "Arch 2026-02-02", "--format", "json").out());
-        assertThat(after.at("/settings_used/lookback_days").asInt()).isEqualTo(30);
+        assertThat(after.requiredAt("/settings_used/lookback_days").asInt()).isEqualTo(30);
         // Set in [2026-01-03, 2026-02-02): the three Arch routes of 01-05, Bay's three, Spire's two.
-        assertThat(after.at("/repetition/window_routes").asInt()).isEqualTo(8);
+        assertThat(after.requiredAt("/repetition/window_routes").asInt()).isEqualTo(8);
         JsonNode before = m.readTree(
                 run("audit", "--reset", "Arch 2026-01-05", "--format", "json").out());
-        assertThat(before.at("/settings_used/lookback_days").asInt()).isEqualTo(365);
-        assertThat(before.at("/repetition/window_routes").asInt()).isEqualTo(3);
+        assertThat(before.requiredAt("/settings_used/lookback_days").asInt()).isEqualTo(365);
+        assertThat(before.requiredAt("/repetition/window_routes").asInt()).isEqualTo(3);
     }
 
     @Test

@@ -82,18 +82,19 @@ class SharedArchivePostgresTest {
                 .isEqualTo(labels(json(embedded(search))))
                 .isNotEmpty();
         JsonNode info = json(onServer(url, "a", "info", "--format", "json"));
-        assertThat(info.get("shared").asBoolean()).isTrue();
-        assertThat(info.get("routes").asLong())
-                .isEqualTo(
-                        json(embedded("info", "--format", "json")).get("routes").asLong());
+        assertThat(info.required("shared").asBoolean()).isTrue();
+        assertThat(info.required("routes").asLong())
+                .isEqualTo(json(embedded("info", "--format", "json"))
+                        .required("routes")
+                        .asLong());
         onServer(url, "a", "check").exits(ExitCode.OK);
     }
 
     private static List<String> labels(JsonNode search) {
         List<String> out = new java.util.ArrayList<>();
         search.get("hits")
-                .forEach(h ->
-                        out.add(h.get("gym").asText() + "/" + h.get("route").asText()));
+                .forEach(h -> out.add(
+                        h.required("gym").asText() + "/" + h.required("route").asText()));
         return out;
     }
 
@@ -125,13 +126,13 @@ class SharedArchivePostgresTest {
             pool.shutdownNow();
         }
         String[] search = {"search", "crimp", "--format", "json"};
-        long north1 = json(onServer(url, "north", search)).get("total").asLong();
-        long south1 = json(onServer(url, "south", search)).get("total").asLong();
+        long north1 = json(onServer(url, "north", search)).required("total").asLong();
+        long south1 = json(onServer(url, "south", search)).required("total").asLong();
         assertThat(north1).isEqualTo(south1).isPositive();
         for (String client : List.of("north", "south")) {
             JsonNode info = json(onServer(url, client, "info", "--format", "json"));
-            assertThat(info.get("gyms").asInt()).isEqualTo(2);
-            assertThat(info.get("routes").asLong()).isEqualTo(s.routes());
+            assertThat(info.required("gyms").asInt()).isEqualTo(2);
+            assertThat(info.required("routes").asLong()).isEqualTo(s.routes());
             // check compares this client's index with the database: one document per route, none missing.
             CliRun check = onServer(url, client, "check").exits(ExitCode.OK);
             assertThat(check.out()).contains(s.routes() + " documents, " + s.routes() + " routes");
@@ -158,15 +159,16 @@ class SharedArchivePostgresTest {
         String url = TestArchives.url(TestArchives.newSchema());
 
         JsonNode copied = json(embedded("migrate-to", url, "--format", "json"));
-        assertThat(copied.get("verified").asBoolean()).isTrue();
+        assertThat(copied.required("verified").asBoolean()).isTrue();
         JsonNode before = json(embedded("info", "--format", "json"));
         Map<String, Long> rows = new java.util.HashMap<>();
         copied.get("tables")
-                .forEach(t -> rows.put(t.get("table").asText(), t.get("rows").asLong()));
+                .forEach(t -> rows.put(
+                        t.required("table").asText(), t.required("rows").asLong()));
         assertThat(rows)
-                .containsEntry("route", before.get("routes").asLong())
-                .containsEntry("hold_placement", before.get("holds").asLong())
-                .containsEntry("reset", before.get("resets").asLong());
+                .containsEntry("route", before.required("routes").asLong())
+                .containsEntry("hold_placement", before.required("holds").asLong())
+                .containsEntry("reset", before.required("resets").asLong());
 
         JsonNode after = json(onServer(url, "c", "info", "--format", "json"));
         for (String k :

@@ -62,7 +62,7 @@ class BackupRestoreTest {
         Path copy = tmp.resolve("copy");
         ArchiveRestore.Result r = ArchiveRestore.restore(backup, copy, false);
         assertThat(r.replaced()).isFalse();
-        assertThat(r.manifest().at("/counts/routes").asLong()).isEqualTo(2);
+        assertThat(r.manifest().requiredAt("/counts/routes").asLong()).isEqualTo(2);
         assertThat(content(copy)).isEqualTo(content(original)).contains("Blue 3");
     }
 

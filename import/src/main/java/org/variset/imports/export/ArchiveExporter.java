@@ -14,6 +14,7 @@ import java.util.Set;
 import org.hibernate.Session;
 import org.variset.archive.file.AtomicFile;
 import org.variset.archive.gym.Gym;
+import org.variset.archive.gym.Unknown;
 import org.variset.archive.gym.Wall;
 import org.variset.archive.route.HoldPlacement;
 import org.variset.archive.route.Route;
@@ -99,11 +100,13 @@ public final class ArchiveExporter {
     private static List<ExportTable> tables(Session s, Selection sel) {
         ArchiveQueries q = new ArchiveQueries(s);
         Gym gym = q.gym(sel.gym())
-                .orElseThrow(() -> new IllegalArgumentException("no gym named '" + sel.gym()
-                        + "' in the archive (gyms: "
-                        + String.join(", ", q.gyms().stream().map(Gym::name).toList()) + ")"));
+                .orElseThrow(() ->
+                        Unknown.gym(sel.gym(), q.gyms().stream().map(Gym::name).toList()));
         if (sel.wall() != null && q.wall(gym, sel.wall()).isEmpty()) {
-            throw new IllegalArgumentException("no wall named '" + sel.wall() + "' in " + gym.name());
+            throw Unknown.wall(
+                    gym.name(),
+                    sel.wall(),
+                    q.walls(gym).stream().map(Wall::name).toList());
         }
         LocalDate from = sel.from() == null ? LocalDate.of(1, 1, 1) : sel.from();
         LocalDate to = sel.to() == null ? LocalDate.of(9999, 12, 31) : sel.to();

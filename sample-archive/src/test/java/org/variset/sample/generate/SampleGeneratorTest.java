@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.variset.sample.SampleArchive;
@@ -27,7 +28,11 @@ class SampleGeneratorTest {
         }
     }
 
-    /** The committed sample is exactly what the generator writes (regenerate with 'variset generate --out ...'). */
+    /**
+     * Snapshot: the committed sample is exactly what the generator writes (regenerate with
+     * {@code variset generate --out ...}); it guards against an unintended change of the sample, not its content.
+     */
+    @Tag("snapshot")
     @Test
     void matchesTheCommittedSample() throws IOException {
         SampleGenerator.write(SampleGenerator.sample(), tmp.resolve("fresh"));
