@@ -5,7 +5,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Map;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -15,23 +14,19 @@ class DayToDayCommandsTest {
     @TempDir
     Path home;
 
-    private String archive;
+    private TestArchive archive;
 
     private static Path example(String name) {
         return Path.of("../docs/spec/examples", name);
     }
 
     private CliRun run(String... args) {
-        String[] all = new String[args.length + 2];
-        all[0] = "--archive";
-        all[1] = archive;
-        System.arraycopy(args, 0, all, 2, args.length);
-        return CliRun.run(home, all);
+        return archive.run(home, args);
     }
 
     @BeforeEach
     void importExamples() {
-        archive = home.resolve("a").toString();
+        archive = TestArchive.fresh(home, "a");
         run("init").exits(ExitCode.OK);
         CliRun r = run(
                         "import",
@@ -134,7 +129,7 @@ class DayToDayCommandsTest {
 
     @Test
     void asksBeforeRemovingAResetAndRemovesWithYes() {
-        CliRun no = CliRun.withInput("n\n", Map.of(), home, "--archive", archive, "remove", "--reset", "N-2026-03-02")
+        CliRun no = archive.runWithInput("n\n", home, "remove", "--reset", "N-2026-03-02")
                 .exits(ExitCode.OK);
         assertThat(no.out()).contains("This removes 2 routes and 8 holds").contains("Nothing removed");
         CliRun yes = run("remove", "--reset", "N-2026-03-02", "--yes").exits(ExitCode.OK);

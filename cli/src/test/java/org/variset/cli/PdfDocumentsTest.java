@@ -37,19 +37,15 @@ class PdfDocumentsTest {
     @TempDir
     static Path home;
 
-    private String archive;
+    private TestArchive archive;
 
     private CliRun run(String... args) {
-        String[] all = new String[args.length + 2];
-        all[0] = "--archive";
-        all[1] = archive;
-        System.arraycopy(args, 0, all, 2, args.length);
-        return CliRun.run(home, all);
+        return archive.run(home, args);
     }
 
     @BeforeAll
     void importTheGym() {
-        archive = home.resolve("a").toString();
+        archive = TestArchive.fresh(home, "a");
         run("init").exits(ExitCode.OK);
         run(
                         "import",

@@ -28,9 +28,18 @@ record TestArchive(String[] where, Map<String, String> env) {
 
     /** Runs a command on this archive. */
     CliRun run(Path home, String... args) {
+        return CliRun.run(env, home, on(args));
+    }
+
+    /** Runs a command on this archive that reads the given text from standard input. */
+    CliRun runWithInput(String input, Path home, String... args) {
+        return CliRun.withInput(input, env, home, on(args));
+    }
+
+    private String[] on(String... args) {
         String[] all = new String[args.length + where.length];
         System.arraycopy(where, 0, all, 0, where.length);
         System.arraycopy(args, 0, all, where.length, args.length);
-        return CliRun.run(env, home, all);
+        return all;
     }
 }

@@ -149,6 +149,49 @@ public final class Archive implements AutoCloseable {
     }
 
     /**
+     * A new archive in memory made from a script of another ({@link #script()}), gone when closed: the same schema
+     * and rows without running the migrations again (tests make hundreds). It gets an identity of its own.
+     *
+     * @throws ArchiveException when the script cannot be run
+     */
+    public static Archive inMemoryFrom(String script) {
+        JdbcDataSource ds = h2("jdbc:h2:mem:variset-" + MEMORY_IDS.incrementAndGet());
+        Connection keeper;
+        try {
+            keeper = ds.getConnection();
+            org.h2.tools.RunScript.execute(keeper, new java.io.StringReader(script));
+            try (java.sql.Statement st = keeper.createStatement()) {
+                st.execute("DELETE FROM archive_info WHERE info_key = 'identity'");
+            }
+        } catch (SQLException e) {
+            throw new ArchiveException(Problem.DAMAGED, "Cannot copy an archive into memory: " + e.getMessage(), e);
+        }
+        return connect(null, null, null, ds, keeper);
+    }
+
+    /**
+     * The whole database of an embedded or in-memory archive as an SQL script (H2's {@code SCRIPT}), for
+     * {@link #inMemoryFrom}.
+     *
+     * @throws ArchiveException on a shared archive, or when the database cannot be read
+     */
+    public String script() {
+        if (server != null) {
+            throw new ArchiveException(Problem.DAMAGED, "A shared archive's server writes its own dumps (pg_dump).");
+        }
+        StringBuilder b = new StringBuilder();
+        try (java.sql.Statement st = keeper.createStatement();
+                java.sql.ResultSet rs = st.executeQuery("SCRIPT")) {
+            while (rs.next()) {
+                b.append(rs.getString(1)).append('\n');
+            }
+        } catch (SQLException e) {
+            throw new ArchiveException(Problem.DAMAGED, "Cannot script the archive: " + e.getMessage(), e);
+        }
+        return b.toString();
+    }
+
+    /**
      * Opens the shared archive on a PostgreSQL server. This client's own files (its search index, in {@code index})
      * live in {@code clientDir}, whose lock keeps two processes of this client from using them at once.
      *
