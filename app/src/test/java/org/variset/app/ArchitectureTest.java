@@ -1,12 +1,12 @@
 package org.variset.app;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
-import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.importer.ImportOption;
 import com.tngtech.archunit.junit.AnalyzeClasses;
 import com.tngtech.archunit.junit.ArchTest;
 import com.tngtech.archunit.lang.ArchRule;
+import org.variset.archive.testing.ArchitectureRules;
 
 /**
  * The application layer's rules: below every front end, it knows none of them, never prints or exits, and reaches
@@ -28,15 +28,8 @@ class ArchitectureTest {
             .resideInAnyPackage("org.hibernate..", "jakarta.persistence..", "java.sql..");
 
     @ArchTest
-    static final ArchRule printsNothing = noClasses()
-            .should()
-            .accessField(System.class, "out")
-            .orShould()
-            .accessField(System.class, "err")
-            .orShould()
-            .callMethod(System.class, "exit", int.class);
+    static final ArchRule printsNothing = ArchitectureRules.printsNothing();
 
     @ArchTest
-    static final ArchRule packagesFormNoCycle =
-            slices().matching("org.variset.app.(*)..").should().beFreeOfCycles();
+    static final ArchRule packagesFormNoCycle = ArchitectureRules.noPackageCycles("org.variset.app");
 }

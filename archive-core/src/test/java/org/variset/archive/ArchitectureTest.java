@@ -1,12 +1,12 @@
 package org.variset.archive;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
-import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.importer.ImportOption;
 import com.tngtech.archunit.junit.AnalyzeClasses;
 import com.tngtech.archunit.junit.ArchTest;
 import com.tngtech.archunit.lang.ArchRule;
+import org.variset.archive.testing.ArchitectureRules;
 
 /** The archive core's own dependency rules (DEVELOPERS.md, "Where each concern lives"). */
 @AnalyzeClasses(packages = "org.variset.archive", importOptions = ImportOption.DoNotIncludeTests.class)
@@ -25,8 +25,7 @@ class ArchitectureTest {
                     "org.variset.web..");
 
     @ArchTest
-    static final ArchRule packagesFormNoCycle =
-            slices().matching("org.variset.archive.(*)..").should().beFreeOfCycles();
+    static final ArchRule packagesFormNoCycle = ArchitectureRules.noPackageCycles("org.variset.archive");
 
     /** Hibernate and JPA stay with the entities, the store and the write operations that use them. */
     @ArchTest
@@ -61,11 +60,5 @@ class ArchitectureTest {
                     "org.variset.archive.store..");
 
     @ArchTest
-    static final ArchRule printsNothing = noClasses()
-            .should()
-            .accessField(System.class, "out")
-            .orShould()
-            .accessField(System.class, "err")
-            .orShould()
-            .callMethod(System.class, "exit", int.class);
+    static final ArchRule printsNothing = ArchitectureRules.printsNothing();
 }

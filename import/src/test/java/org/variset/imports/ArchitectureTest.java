@@ -1,12 +1,12 @@
 package org.variset.imports;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
-import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.importer.ImportOption;
 import com.tngtech.archunit.junit.AnalyzeClasses;
 import com.tngtech.archunit.junit.ArchTest;
 import com.tngtech.archunit.lang.ArchRule;
+import org.variset.archive.testing.ArchitectureRules;
 
 /** The import module's own rules: files to rows to validated rows to the archive, each layer below the next. */
 @AnalyzeClasses(packages = "org.variset.imports", importOptions = ImportOption.DoNotIncludeTests.class)
@@ -36,15 +36,8 @@ class ArchitectureTest {
             .resideInAnyPackage("org.variset.reports..", "org.variset.app..", "org.variset.cli..", "org.variset.web..");
 
     @ArchTest
-    static final ArchRule packagesFormNoCycle =
-            slices().matching("org.variset.imports.(*)..").should().beFreeOfCycles();
+    static final ArchRule packagesFormNoCycle = ArchitectureRules.noPackageCycles("org.variset.imports");
 
     @ArchTest
-    static final ArchRule printsNothing = noClasses()
-            .should()
-            .accessField(System.class, "out")
-            .orShould()
-            .accessField(System.class, "err")
-            .orShould()
-            .callMethod(System.class, "exit", int.class);
+    static final ArchRule printsNothing = ArchitectureRules.printsNothing();
 }

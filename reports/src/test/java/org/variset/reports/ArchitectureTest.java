@@ -1,12 +1,12 @@
 package org.variset.reports;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
-import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.importer.ImportOption;
 import com.tngtech.archunit.junit.AnalyzeClasses;
 import com.tngtech.archunit.junit.ArchTest;
 import com.tngtech.archunit.lang.ArchRule;
+import org.variset.archive.testing.ArchitectureRules;
 
 /** The reports' own dependency rules: scoring is pure, Hibernate stays in the archive, only front ends print. */
 @AnalyzeClasses(packages = "org.variset.reports", importOptions = ImportOption.DoNotIncludeTests.class)
@@ -62,15 +62,8 @@ class ArchitectureTest {
             .resideInAnyPackage("org.variset.imports..", "org.variset.app..", "org.variset.cli..", "org.variset.web..");
 
     @ArchTest
-    static final ArchRule packagesFormNoCycle =
-            slices().matching("org.variset.reports.(*)..").should().beFreeOfCycles();
+    static final ArchRule packagesFormNoCycle = ArchitectureRules.noPackageCycles("org.variset.reports");
 
     @ArchTest
-    static final ArchRule printsNothing = noClasses()
-            .should()
-            .accessField(System.class, "out")
-            .orShould()
-            .accessField(System.class, "err")
-            .orShould()
-            .callMethod(System.class, "exit", int.class);
+    static final ArchRule printsNothing = ArchitectureRules.printsNothing();
 }

@@ -44,30 +44,16 @@ public final class AuditSets {
     }
 
     /**
-     * Audits what a request names.
+     * Audits a target; a day it leaves out is today at the gym.
      *
      * @param withPlan true to plan the next reset too (a reset's document prints it)
-     * @throws IllegalArgumentException when the request names what the archive does not hold (the message lists
+     * @throws IllegalArgumentException when the target names what the archive does not hold (the message lists
      *     what it does)
      */
-    public Report audit(AuditRequest request, boolean withPlan) {
-        LocalDate today = workspace.today(request.gym());
-        Audit a = new Auditor(workspace.archive().connection()).audit(target(request, today));
+    public Report audit(AuditTarget target, boolean withPlan) {
+        LocalDate today = workspace.today(target.gym());
+        Audit a = new Auditor(workspace.archive().connection()).audit(target.onDay(today));
         ResetPlan plan = withPlan ? new PlanReset(workspace).after(a) : null;
         return new Report(a, plan, today);
-    }
-
-    private static AuditTarget target(AuditRequest r, LocalDate today) {
-        if (r instanceof AuditRequest.Reset x) {
-            return new AuditTarget.Reset(x.gym(), x.label());
-        }
-        if (r instanceof AuditRequest.LatestReset x) {
-            return new AuditTarget.LatestReset(x.gym(), x.wall(), x.on() == null ? today : x.on());
-        }
-        if (r instanceof AuditRequest.Standing x) {
-            return new AuditTarget.Standing(x.gym(), x.wall(), x.on());
-        }
-        AuditRequest.SetterPeriod x = (AuditRequest.SetterPeriod) r;
-        return new AuditTarget.SetterPeriod(x.gym(), x.setter(), x.from(), x.to() == null ? today : x.to());
     }
 }

@@ -17,7 +17,6 @@ import org.variset.app.Notice;
 import org.variset.app.Notices;
 import org.variset.app.VarisetVersion;
 import org.variset.app.Workspace;
-import org.variset.app.audit.AuditRequest;
 import org.variset.app.audit.AuditSets;
 import org.variset.app.imports.ImportFiles;
 import org.variset.app.trend.TrendPeriod;
@@ -29,6 +28,7 @@ import org.variset.archive.store.ArchiveStats;
 import org.variset.imports.load.ImportOptions;
 import org.variset.imports.load.ImportProgress;
 import org.variset.reports.audit.Audit;
+import org.variset.reports.audit.AuditTarget;
 import org.variset.reports.audit.Finding;
 import org.variset.reports.pdf.PdfOptions;
 import org.variset.reports.trend.Trend;
@@ -115,14 +115,14 @@ public final class RunDemo {
         ArchiveCatalog catalog = new ArchiveCatalog(w.archive().connection());
         String gym = catalog.gym(null).name();
         for (WallRecord wall : catalog.walls(catalog.gym(gym).id())) {
-            AuditSets.Report r = audits.audit(new AuditRequest.LatestReset(gym, wall.name(), asOf), true);
+            AuditSets.Report r = audits.audit(new AuditTarget.LatestReset(gym, wall.name(), asOf), true);
             String name = "audit-" + fileName(wall.name());
             json(out, name, r.json());
             AtomicFile.write(out.resolve(name + ".pdf"), true, o -> r.document().write(pdf, o));
             written.add(name + ".pdf");
             walls.add(new WallAudit(wall.name(), r.audit()));
         }
-        AuditSets.Report standing = audits.audit(new AuditRequest.Standing(gym, null, asOf), false);
+        AuditSets.Report standing = audits.audit(new AuditTarget.Standing(gym, null, asOf), false);
         json(out, "gym-standing", standing.json());
         AtomicFile.write(
                 out.resolve("gym-standing.pdf"), true, o -> standing.document().write(pdf, o));
@@ -130,7 +130,7 @@ public final class RunDemo {
         List<Finding> habits = new ArrayList<>();
         for (String s : catalog.setterNames()) {
             AuditSets.Report r = audits.audit(
-                    new AuditRequest.SetterPeriod(gym, s, asOf.minusYears(1).plusDays(1), asOf), false);
+                    new AuditTarget.SetterPeriod(gym, s, asOf.minusYears(1).plusDays(1), asOf), false);
             json(out, "setter-" + fileName(s), r.json());
             r.audit().findings().stream()
                     .filter(f -> f.kind().equals("setter_habit"))

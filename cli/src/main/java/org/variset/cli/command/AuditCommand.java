@@ -3,13 +3,13 @@ package org.variset.cli.command;
 import java.time.LocalDate;
 import org.variset.app.Json;
 import org.variset.app.Workspace;
-import org.variset.app.audit.AuditRequest;
 import org.variset.app.audit.AuditSets;
 import org.variset.archive.gym.PartialDate;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
 import org.variset.cli.convert.PartialDateConverter;
 import org.variset.cli.render.AuditText;
+import org.variset.reports.audit.AuditTarget;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -102,7 +102,7 @@ final class AuditCommand extends VarisetSubcommand {
 
     @Override
     ExitCode execute() {
-        AuditRequest request = request();
+        AuditTarget request = request();
         AuditSets.Report report;
         try (Workspace w = workspace()) {
             report = new AuditSets(w).audit(request, pdf.wanted());
@@ -117,7 +117,7 @@ final class AuditCommand extends VarisetSubcommand {
     }
 
     /** The request the options name; usage errors for combinations that name none or several. */
-    AuditRequest request() {
+    AuditTarget request() {
         int kinds = (reset != null ? 1 : 0)
                 + (standingOn != null ? 1 : 0)
                 + (setter != null ? 1 : 0)
@@ -140,17 +140,17 @@ final class AuditCommand extends VarisetSubcommand {
             throw new ParameterException(spec.commandLine(), "--from and --to go with --setter");
         }
         if (reset != null) {
-            return new AuditRequest.Reset(gym.gym, reset);
+            return new AuditTarget.Reset(gym.gym, reset);
         }
         if (standingOn != null) {
-            return new AuditRequest.Standing(gym.gym, wall, standingOn);
+            return new AuditTarget.Standing(gym.gym, wall, standingOn);
         }
         if (setter != null) {
             if (from == null) {
                 throw new ParameterException(spec.commandLine(), "--setter needs --from (the first day of the period)");
             }
-            return new AuditRequest.SetterPeriod(gym.gym, setter, from.first(), to == null ? null : to.last());
+            return new AuditTarget.SetterPeriod(gym.gym, setter, from.first(), to == null ? null : to.last());
         }
-        return new AuditRequest.LatestReset(gym.gym, wall, on);
+        return new AuditTarget.LatestReset(gym.gym, wall, on);
     }
 }

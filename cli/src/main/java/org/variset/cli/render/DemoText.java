@@ -38,14 +38,8 @@ public final class DemoText {
                 standing);
         s.setterHabits().forEach(f -> out.println("  " + AuditText.finding(f)));
         Trend t = s.annual();
-        t.months().stream()
-                .filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
-                .forEach(p -> out.println("  On " + p.day() + " the gym had no "
-                        + String.join(
-                                "; ",
-                                p.gradeGaps().entrySet().stream()
-                                        .map(e -> e.getKey() + " " + String.join(" or ", e.getValue()))
-                                        .toList())
+        t.gymGaps()
+                .forEach(p -> out.println("  On " + p.day() + " the gym had no " + p.gapWords(" or ")
                         + " up, though its target expects them."));
         t.walls().stream()
                 .filter(w -> !w.status().equals("ok"))

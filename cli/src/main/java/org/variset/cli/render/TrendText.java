@@ -47,15 +47,8 @@ public final class TrendText {
                     b.append(String.format(" %10s", k.text(p.figures().get(k.key())))));
             b.append('\n');
         }
-        List<String> gaps = t.months().stream()
-                .filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
-                .map(p -> p.day() + ": "
-                        + String.join(
-                                "; ",
-                                p.gradeGaps().entrySet().stream()
-                                        .map(e -> e.getKey() + " " + String.join(", ", e.getValue()))
-                                        .toList()))
-                .toList();
+        List<String> gaps =
+                t.gymGaps().stream().map(p -> p.day() + ": " + p.gapWords(", ")).toList();
         b.append(
                 gaps.isEmpty()
                         ? ""

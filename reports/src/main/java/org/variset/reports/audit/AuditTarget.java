@@ -3,11 +3,25 @@ package org.variset.reports.audit;
 import java.time.LocalDate;
 import java.util.Objects;
 
-/** What to audit. Every target names its gym, or null when the archive holds one. */
+/**
+ * What to audit. Every target names its gym, or null when the archive holds one. A wall's latest reset and a setter's
+ * period may leave their day out (null: today at the gym); {@link #onDay} fills it in before an audit.
+ */
 public sealed interface AuditTarget {
 
     /** The gym's name, or null for the only one. */
     String gym();
+
+    /** This target with "today" given where it left its day out. */
+    default AuditTarget onDay(LocalDate today) {
+        if (this instanceof LatestReset l && l.on() == null) {
+            return new LatestReset(l.gym(), l.wall(), today);
+        }
+        if (this instanceof SetterPeriod p && p.to() == null) {
+            return new SetterPeriod(p.gym(), p.setter(), p.from(), today);
+        }
+        return this;
+    }
 
     /**
      * One reset by its label.
@@ -27,13 +41,12 @@ public sealed interface AuditTarget {
      *
      * @param gym the gym, or null
      * @param wall the wall
-     * @param on the day
+     * @param on the day, or null for today
      */
     record LatestReset(String gym, String wall, LocalDate on) implements AuditTarget {
-        /** Checks the fields. */
+        /** Checks the wall. */
         public LatestReset {
             Objects.requireNonNull(wall, "wall");
-            Objects.requireNonNull(on, "on");
         }
     }
 
@@ -57,13 +70,14 @@ public sealed interface AuditTarget {
      * @param gym the gym, or null
      * @param setter the setter's name
      * @param from the first day
-     * @param to the last day
+     * @param to the last day, or null for today
      */
     record SetterPeriod(String gym, String setter, LocalDate from, LocalDate to) implements AuditTarget {
         /** Checks the period. */
         public SetterPeriod {
             Objects.requireNonNull(setter, "setter");
-            if (from.isAfter(to)) {
+            Objects.requireNonNull(from, "from");
+            if (to != null && from.isAfter(to)) {
                 throw new IllegalArgumentException("the period starts (" + from + ") after it ends (" + to + ")");
             }
         }

@@ -47,6 +47,10 @@ public final class Auditor {
      *     what it does)
      */
     public Audit audit(AuditTarget target) {
+        if (target instanceof AuditTarget.LatestReset l && l.on() == null
+                || target instanceof AuditTarget.SetterPeriod p && p.to() == null) {
+            throw new IllegalStateException("give the target its day first (AuditTarget.onDay): " + target);
+        }
         GymRecord gym = catalog.gym(target.gym());
         if (target instanceof AuditTarget.Reset r) {
             return auditReset(gym, catalog.reset(gym, r.label()));

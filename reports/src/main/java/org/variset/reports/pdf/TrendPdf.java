@@ -200,14 +200,8 @@ public final class TrendPdf {
                 true,
                 Palette.INK);
         doc.chart(Charts.lines(doc.fonts(), "bands", grades), doc.width(), 130);
-        List<String> gaps = t.months().stream()
-                .filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
-                .map(p -> p.day() + ": no "
-                        + String.join(
-                                "; ",
-                                p.gradeGaps().entrySet().stream()
-                                        .map(e -> e.getKey() + " " + String.join(", ", e.getValue()))
-                                        .toList()))
+        List<String> gaps = t.gymGaps().stream()
+                .map(p -> p.day() + ": no " + p.gapWords(", "))
                 .toList();
         doc.paragraph(
                 gaps.isEmpty()

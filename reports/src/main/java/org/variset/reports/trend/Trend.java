@@ -50,11 +50,24 @@ public record Trend(
      *     ({@link org.variset.reports.figures.GradeGaps})
      */
     public record MonthPoint(
-            LocalDate day,
-            String scope,
-            int routes,
-            Map<String, Double> figures,
-            Map<String, List<String>> gradeGaps) {}
+            LocalDate day, String scope, int routes, Map<String, Double> figures, Map<String, List<String>> gradeGaps) {
+
+        /** The gaps in words, {@code boulder V5, V6; rope 6a}, the bands of a discipline joined by {@code between}. */
+        public String gapWords(String between) {
+            return String.join(
+                    "; ",
+                    gradeGaps.entrySet().stream()
+                            .map(e -> e.getKey() + " " + String.join(between, e.getValue()))
+                            .toList());
+        }
+    }
+
+    /** The gym's month-end points that have a grade gap. */
+    public List<MonthPoint> gymGaps() {
+        return months.stream()
+                .filter(p -> p.scope().equals("gym") && !p.gradeGaps().isEmpty())
+                .toList();
+    }
 
     /**
      * A wall over the period.
