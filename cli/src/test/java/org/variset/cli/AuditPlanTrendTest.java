@@ -142,6 +142,10 @@ class AuditPlanTrendTest {
                     .containsExactlyInAnyOrderElementsOf(pairs(e.get("near_repeats")));
             assertThat(pairs(a.requiredAt("/repetition/internal_repeats")))
                     .containsExactlyInAnyOrderElementsOf(pairs(e.get("internal_repeats")));
+            // Look-alikes the evidence sets aside: other hold shapes, or too few of the same ones.
+            assertThat(pairs(a.requiredAt("/repetition/similar_not_repeats")))
+                    .isNotEmpty()
+                    .containsExactlyInAnyOrderElementsOf(pairs(e.get("similar_not_repeats")));
             assertThat(a.requiredAt("/repetition/novelty").asDouble())
                     .isCloseTo(e.required("novelty").asDouble(), within(TOL));
             assertThat(a.requiredAt("/repetition/window_routes").asInt())
@@ -185,10 +189,15 @@ class AuditPlanTrendTest {
                     .exits(ExitCode.OK)
                     .out();
             assertThat(text)
-                    .contains("Score 49 of 100")
-                    .contains("A2 (Arch, 2026-02-02) repeats A1 (Arch, 2026-01-05): same crimp@0, jug@0, "
-                            + "pinch@90, pinch@270 and 1 more holds, same heel hook > dyno > match "
-                            + "(Jaccard 0.846).")
+                    .contains("Score 48 of 100")
+                    // The evidence in words: the same five shapes in the same layout one metre nine to the right.
+                    .contains(
+                            "A2 (Arch, 2026-02-02) repeats A1 (Arch, 2026-01-05): same 5 of 5 hold shapes within "
+                                    + "20 cm once shifted 1.9 m, same moves heel hook > dyno > match, same wall (Jaccard 0.846).")
+                    // A3 shares A1's types, directions and moves (Jaccard 0.769) on other shapes: not called a repeat.
+                    .doesNotContain("A3 (Arch, 2026-02-02) repeats")
+                    .contains("No boulder from V7 to V9 is up in the gym on 2026-02-02, a range where the target "
+                            + "expects 1.0 of its 7 routes")
                     .contains("13 of 19 hand grips face up; no gaston in this set.")
                     .contains("35% of this reset's placements put a hold shape back")
                     .contains("Safety: Route setting is work at height");
@@ -326,7 +335,8 @@ class AuditPlanTrendTest {
                 n.forEach(x -> walk(path, x));
             } else if ((n.isNumber() || n.isNull()) && PER_CATEGORY.stream().noneMatch(path::contains)) {
                 reported.add(path.replaceFirst("^grades\\.(boulder|rope)\\.", "grades.")
-                        .replaceFirst("^repetition\\.(near|internal)_repeats\\.", "repetition."));
+                        .replaceFirst(
+                                "^repetition\\.(near_repeats|internal_repeats|similar_not_repeats)\\.", "repetition."));
             }
         }
 

@@ -82,7 +82,7 @@ class DayToDayCommandsTest {
     @Test
     void stripsAWallsOldRoutesOnResetDay() {
         CliRun r = run("strip", "--wall", "South Lead", "--on", "2026-04-01").exits(ExitCode.OK);
-        assertThat(r.out()).contains("Stripped 1 routes").contains("0 set that day");
+        assertThat(r.out()).contains("Stripped 1 route").contains("0 set that day");
         CliRun again =
                 run("strip", "--wall", "North Arch", "--on", "2026-03-02").exits(ExitCode.OK);
         assertThat(again.out()).contains("Stripped 0 routes").contains("2 set that day stay up");
@@ -122,7 +122,7 @@ class DayToDayCommandsTest {
                 .containsPattern("\"route\" : \"N1\"[^}]*\"grade\" : \"V3\"")
                 .containsPattern("\"route\" : \"N1\"[^}]*\"setters\" : \\[ \"K. Ames\" \\]");
         CliRun merge = run("setter", "merge", "K. Ames", "Kit Ames").exits(ExitCode.OK);
-        assertThat(merge.out()).contains("1 routes now name 'Kit Ames'");
+        assertThat(merge.out()).contains("1 route now names 'Kit Ames'");
         CliRun rename = run("setter", "rename", "Rui Sol", "Kit Ames").exits(ExitCode.BAD_INPUT);
         assertThat(rename.err()).contains("exists already").contains("setter merge");
     }
@@ -159,16 +159,29 @@ class DayToDayCommandsTest {
     }
 
     @Test
-    void writesTemplatesThatImportCleanly() {
+    void writesTemplatesWhoseExampleRowImportRefusesUntilReplaced() throws java.io.IOException {
         Path t = home.resolve("t");
         CliRun.run(home, "template", "--format", "csv", "--out", t.toString()).exits(ExitCode.OK);
-        CliRun r = run(
-                        "import",
-                        t.resolve("walls.csv").toString(),
-                        t.resolve("routes.csv").toString(),
-                        t.resolve("holds.csv").toString())
-                .exits(ExitCode.OK);
-        assertThat(r.out()).contains("1 routes new").contains("1 holds written");
+        String[] files = {
+            t.resolve("walls.csv").toString(),
+            t.resolve("routes.csv").toString(),
+            t.resolve("holds.csv").toString()
+        };
+        CliRun refused = run("import", files[0], files[1], files[2]).exits(ExitCode.BAD_INPUT);
+        assertThat(refused.err())
+                .contains(files[1] + ":2: gym: this is the template's example row: delete it")
+                .contains(files[2] + ":2: gym: this is the template's example row");
+        // A gym fills in its own row in the example's place: the layout imports cleanly.
+        for (String f : files) {
+            Path p = Path.of(f);
+            Files.writeString(p, Files.readString(p).replace("EXAMPLE ROW (delete it)", "Harbour Hall"));
+        }
+        CliRun r = run("import", files[0], files[1], files[2]).exits(ExitCode.OK);
+        assertThat(r.out())
+                .contains("1 route new")
+                .contains("1 hold written")
+                .contains("gyms new: Harbour Hall")
+                .contains("walls new: Cave (Harbour Hall)");
         CliRun.run(home, "template", "--format", "xlsx", "--out", t.toString()).exits(ExitCode.OK);
         assertThat(t.resolve("variset-template.xlsx")).exists();
     }

@@ -136,10 +136,11 @@ class DemoCommandTest {
                 .exits(ExitCode.OK)
                 .out();
         assertThat(out)
-                .startsWith("Reset Cave 2026-11-24 (Cave, 2026-11-24) · Lantern Rock · 13 routes\n"
-                        + "Score 66 of 100 (a heuristic: weighted mean of grip 0.71, holds 0.72, moves 0.60, grades 0.72, "
+                .startsWith("Reset Cave 2026-11-24 · Lantern Rock · 13 routes\n"
+                        + "Score 62 of 100 (a heuristic: weighted mean of grip 0.71, holds 0.72, moves 0.60, grades 0.45, "
                         + "novelty 0.55)\n\nWhat stands out\n  - Green 1 (Cave, 2026-11-24) repeats Red 1 (Cave, 2026-06-01): "
-                        + "same jug@0, jug@180, pinch@90, pinch@270 and 3 more holds, same lock-off (Jaccard 1.000).\n"
+                        + "same 7 of 7 hold shapes within 20 cm once shifted 0.4 m, same move lock-off, same grade band V3, "
+                        + "same wall (Jaccard 1.000).\n"
                         + "  - 53 of 104 hand grips face up.\n");
     }
 

@@ -140,7 +140,7 @@ class PdfDocumentsTest {
                     "Repetition",
                     "Near-repeats of earlier routes",
                     "Route lines and reach",
-                    "Next reset of Arch: 4 boulder routes",
+                    "Next reset of Arch, due 2026-03-02: 4 boulder routes",
                     "Settings used",
                     "Safety.")) {
                 assertThat(text).as(section).contains(section);

@@ -1,5 +1,6 @@
 package org.variset.app.imports;
 
+import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Path;
 import java.util.List;
@@ -39,8 +40,13 @@ public final class ImportFiles {
                     .put("unchanged", s.routesUnchanged())
                     .put("changed", s.routesChanged());
             o.putObject("walls").put("new", s.wallsNew()).put("changed", s.wallsChanged());
+            s.newGyms().forEach(o.putArray("new_gyms")::add);
+            ArrayNode walls = o.putArray("new_walls");
+            s.newWalls().forEach(w -> walls.addObject().put("gym", w.gym()).put("wall", w.wall()));
+            s.newSetters().forEach(o.putArray("new_setters")::add);
             o.put("holds_written", s.holdsWritten());
             s.changes().forEach(o.putArray("changes")::add);
+            s.warnings().forEach(o.putArray("warnings")::add);
             o.put("skipped_rows", s.skippedCount());
             s.skipped().forEach(o.putArray("skipped")::add);
             s.extraColumns().stream().sorted().forEach(o.putArray("extra_columns")::add);

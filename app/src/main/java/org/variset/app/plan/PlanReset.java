@@ -3,6 +3,8 @@ package org.variset.app.plan;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.time.LocalDate;
 import org.variset.app.Workspace;
+import org.variset.archive.read.ArchiveCatalog;
+import org.variset.archive.read.WallRecord;
 import org.variset.reports.audit.Audit;
 import org.variset.reports.audit.Subject;
 import org.variset.reports.plan.PlanJson;
@@ -44,11 +46,12 @@ public final class PlanReset {
 
     /**
      * The plan for the reset after an audited one: due when its wall's cycle ends, as many routes as it had. Null for
-     * an audit of anything but one reset.
+     * an audit of anything but one reset, and for a reset the wall has had another after (its next reset is history,
+     * not a plan).
      */
     public ResetPlan after(Audit audit) {
         Subject s = audit.subject();
-        if (s.kind() != Subject.Kind.RESET) {
+        if (s.kind() != Subject.Kind.RESET || !isLatest(s)) {
             return null;
         }
         ResetPlanner planner = new ResetPlanner(workspace.archive().connection());
@@ -58,6 +61,15 @@ public final class PlanReset {
                 planner.nextDue(s.gym(), s.wall(), s.on()),
                 Math.max(1, audit.audited().routes().size()),
                 DEFAULT_MARGIN);
+    }
+
+    private boolean isLatest(Subject s) {
+        ArchiveCatalog catalog = new ArchiveCatalog(workspace.archive().connection());
+        WallRecord wall = catalog.wall(catalog.gym(s.gym()), s.wall());
+        LocalDate today = workspace.today(s.gym());
+        return catalog.latestResetOnOrBefore(wall.id(), today.isAfter(s.on()) ? today : s.on())
+                .map(r -> r.label().equals(s.reset()))
+                .orElse(true);
     }
 
     /** A plan for scripts. */

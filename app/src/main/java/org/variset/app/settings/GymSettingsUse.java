@@ -56,7 +56,8 @@ public final class GymSettingsUse {
      * @param gym the gym, or null when the archive holds one
      * @param discipline the discipline's word, or null
      * @param wall the wall, or null
-     * @param from the day the value takes effect, or null for today at the gym
+     * @param from the day the value takes effect; null for today at the gym, or for the archive's beginning when the
+     *     setting has no earlier value in this scope (a first target then applies to every reset already archived)
      */
     public record Scope(String gym, String discipline, String wall, LocalDate from) {}
 
@@ -66,10 +67,15 @@ public final class GymSettingsUse {
      * @param gym the gym's name
      * @param key the setting
      * @param scopeWords what it applies to, for people ({@code  of wall Cave}, {@code  (rope)}, or empty)
-     * @param from the day it takes effect
+     * @param from the day it takes effect ({@link SettingValue#THE_START} for a first value given no day)
      * @param valueText the value as typed back, or null for a return to the default
      */
-    public record Change(String gym, SettingKey key, String scopeWords, LocalDate from, String valueText) {}
+    public record Change(String gym, SettingKey key, String scopeWords, LocalDate from, String valueText) {
+        /** True when the value applies from the archive's beginning: the gym's first, given no day. */
+        public boolean fromTheStart() {
+            return !from.isAfter(SettingValue.THE_START);
+        }
+    }
 
     /**
      * A change in the history.
@@ -105,7 +111,11 @@ public final class GymSettingsUse {
                 : where.discipline() != null
                         ? Discipline.parse(where.discipline()).word()
                         : "";
-        LocalDate from = where.from() != null ? where.from() : workspace.today(g.name());
+        boolean first = new SettingsReader(workspace.archive().connection())
+                .history(g.id()).stream()
+                        .noneMatch(v -> v.key() == key && v.scope().equals(scope));
+        LocalDate from =
+                where.from() != null ? where.from() : first ? SettingValue.THE_START : workspace.today(g.name());
         var parsed = value == null ? null : key.parse(value);
         workspace.write(tx -> SettingsWriter.set(tx, g.name(), key, scope, from, parsed));
         String words = where.wall() != null
@@ -131,6 +141,7 @@ public final class GymSettingsUse {
         ArrayNode a = o.putArray("changes");
         history.forEach(p -> a.addObject()
                 .put("from", p.value().effectiveOn().toString())
+                .put("from_the_start", p.value().fromTheStart())
                 .put("key", p.value().key().word())
                 .put("scope", p.scopeWords())
                 .put("value", p.value().value() == null ? null : p.value().text()));

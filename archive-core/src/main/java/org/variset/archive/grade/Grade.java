@@ -36,6 +36,23 @@ public record Grade(
         }
     }
 
+    /**
+     * The lowest IRCRA value a search for this grade matches: half a level below the levels its table cell covers
+     * (docs/spec/grades.md); a quarter below an older French letter grade, which sits half a level from its neighbours.
+     */
+    public double searchLow() {
+        return olderFrench() ? ircra - 0.25 : lowLevel - 0.5;
+    }
+
+    /** The value a search for this grade matches up to, not included: as {@link #searchLow}, above. */
+    public double searchHigh() {
+        return olderFrench() ? ircra + 0.25 : highLevel + 0.5;
+    }
+
+    private boolean olderFrench() {
+        return scale == GradeScale.FRENCH && GradeNotation.OLDER_FRENCH.containsKey(canonical);
+    }
+
     /** The IRCRA value as people read it: {@code 17}, {@code 15.5}. */
     public String ircraText() {
         return ircra == Math.rint(ircra) ? String.valueOf((long) ircra) : String.valueOf(ircra);

@@ -1,6 +1,7 @@
 package org.variset.archive.grade;
 
 import java.util.Locale;
+import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -80,9 +81,10 @@ final class GradeNotation {
                         ? ""
                         : scale == GradeScale.FONT ? letter.toUpperCase(Locale.ROOT) : letter.toLowerCase(Locale.ROOT));
         String mod = m.group(3);
-        if (scale == GradeScale.FRENCH && !olderFrench(base).equals(base)) {
-            base = olderFrench(base);
-            letter = null;
+        if (scale == GradeScale.FRENCH && OLDER_FRENCH.containsKey(base)) {
+            double at = OLDER_FRENCH.get(base);
+            GradeModifier flag = mod == null ? GradeModifier.NONE : GradeModifier.of(mod.charAt(0));
+            return new Grade(text, scale, base, at, (int) Math.floor(at), (int) Math.ceil(at), flag, false);
         }
         if (letter == null) {
             return place(text, scale, base, mod, NO_ORDINAL, NO_ORDINAL);
@@ -96,16 +98,14 @@ final class GradeNotation {
         return place(text, scale, base, mod, ordinalLettered(base), ordinalLettered(top));
     }
 
-    /** Older French grades with letters: 4a, 4b read as 4; 4c as 4+; 5a, 5b as 5; 5c as 5+ (from memory). */
-    private static String olderFrench(String base) {
-        return switch (base) {
-            case "4a", "4b" -> "4";
-            case "4c" -> "4+";
-            case "5a", "5b" -> "5";
-            case "5c" -> "5+";
-            default -> base;
-        };
-    }
+    /**
+     * Older French grades with letters, on the IRCRA axis: the table has 4 and 4+ at levels 7 and 8, 5 and 5+ at 9
+     * and 10, and the three letters of a number are spaced evenly over its two levels (4a 7, 4b 7.5, 4c 8; 5a 9, 5b
+     * 9.5, 5c 10). That 4a sits with 4 and 4c with 4+ is common practice, from memory; the even spacing is ours, so
+     * that 5a and 5b read as the grades they are (docs/spec/grades.md). A plus or minus on them is kept as a flag.
+     */
+    static final Map<String, Double> OLDER_FRENCH =
+            Map.of("4a", 7.0, "4b", 7.5, "4c", 8.0, "5a", 9.0, "5b", 9.5, "5c", 10.0);
 
     private Grade readYds(String text, String token) {
         Matcher m = YDS.matcher(token);

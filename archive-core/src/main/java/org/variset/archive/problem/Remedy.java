@@ -53,7 +53,12 @@ public record Remedy(Kind kind, Map<String, String> facts) {
         /** The work needs an embedded archive as its source, and a shared one was named: name the embedded one. */
         NAME_EMBEDDED_ARCHIVE,
         /** A grade fits more than one scale: say which. Facts: {@code scales}, their words joined by {@code , }. */
-        CHOOSE_SCALE
+        CHOOSE_SCALE,
+        /**
+         * A new name is close to one the archive or the files already have: write it as that one, or confirm that it
+         * is another. Facts: {@code name} (the new one), {@code known} (the close one), {@code what} (its word).
+         */
+        CONFIRM_NEW_NAME
     }
 
     /** Checks the fields; the facts are copied. */

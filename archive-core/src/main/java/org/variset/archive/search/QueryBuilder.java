@@ -20,6 +20,7 @@ import org.variset.archive.grade.GradeException;
 import org.variset.archive.grade.GradeReader;
 import org.variset.archive.gym.PartialDate;
 import org.variset.archive.route.GripDirection;
+import org.variset.archive.route.HoldSize;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
 
@@ -161,7 +162,7 @@ final class QueryBuilder {
             case "wall" -> keyword(SearchFields.WALL, v);
             case "route" -> keyword(SearchFields.LABEL, v);
             case "color" -> keyword(SearchFields.COLOR, v);
-            case "setter" -> keyword(SearchFields.SETTER, v);
+            case "setter" -> setter(v);
             case "band" -> keyword(SearchFields.BAND, v);
             case "size" -> keyword(SearchFields.SIZE, v);
             case "discipline" ->
@@ -193,16 +194,47 @@ final class QueryBuilder {
         }
     }
 
+    /** A setter's whole name, or one word of it ({@code setter:dario}, {@code setter:pen*}). */
+    private static Query setter(String v) {
+        Query whole = keyword(SearchFields.SETTER, v);
+        if (TermKeys.keyword(v).contains(" ")) {
+            return whole;
+        }
+        return new BooleanQuery.Builder()
+                .add(whole, Occur.SHOULD)
+                .add(keyword(SearchFields.SETTER_WORD, v), Occur.SHOULD)
+                .build();
+    }
+
+    /**
+     * One hold: {@code type}, {@code type@direction}, and either with {@code +size} ({@code sloper+xl},
+     * {@code crimp@up+s}): the type, direction and size of the same hold. (Separate terms, {@code hold:sloper size:xl},
+     * ask for a sloper and an xl hold, maybe two holds.)
+     */
     private Query hold(String v, QueryNode.Field f) {
-        int at = v.indexOf('@');
-        String type = keys.key(VocabularyField.HOLD_TYPES, at < 0 ? v : v.substring(0, at));
+        int plus = v.indexOf('+');
+        String size = plus < 0 ? "" : "+" + size(v.substring(plus + 1), f, plus + 1);
+        String body = plus < 0 ? v : v.substring(0, plus);
+        int at = body.indexOf('@');
+        String type = keys.key(VocabularyField.HOLD_TYPES, at < 0 ? body : body.substring(0, at));
         if (at < 0) {
-            return new TermQuery(new Term(SearchFields.HOLD, type));
+            return new TermQuery(new Term(SearchFields.HOLD, type + size));
         }
         int deg = direction(
-                v.substring(at + 1),
+                body.substring(at + 1),
                 new QueryNode.Field(f.field(), v, false, f.position(), f.valuePosition() + at + 1));
-        return new TermQuery(new Term(SearchFields.HOLD, type + "@" + deg));
+        return new TermQuery(new Term(SearchFields.HOLD, type + "@" + deg + size));
+    }
+
+    private String size(String v, QueryNode.Field f, int offset) {
+        try {
+            return HoldSize.parse(v).word();
+        } catch (IllegalArgumentException e) {
+            throw new QuerySyntaxException(
+                    query,
+                    f.valuePosition() + offset,
+                    "'" + v + "' is not a hold size (expected xs, s, m, l or xl after the +, as in hold:sloper+xl)");
+        }
     }
 
     /** A direction as the centre of its sector: {@code 90}, {@code right} and {@code 3:00} all give 90. */
@@ -224,10 +256,10 @@ final class QueryBuilder {
             try {
                 double lo = ends[0].isEmpty()
                         ? Double.NEGATIVE_INFINITY
-                        : read(ends[0], d).lowLevel() - 0.5;
+                        : read(ends[0], d).searchLow();
                 double hi = ends[1].isEmpty()
                         ? Double.POSITIVE_INFINITY
-                        : Math.nextDown(read(ends[1], d).highLevel() + 0.5);
+                        : Math.nextDown(read(ends[1], d).searchHigh());
                 if (lo > hi) {
                     throw new QuerySyntaxException(
                             query,

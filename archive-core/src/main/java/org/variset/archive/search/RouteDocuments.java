@@ -1,5 +1,6 @@
 package org.variset.archive.search;
 
+import java.util.Arrays;
 import java.util.LinkedHashSet;
 import java.util.Set;
 import org.apache.lucene.document.Document;
@@ -49,6 +50,10 @@ final class RouteDocuments {
         keyword(d, SearchFields.DISCIPLINE, r.discipline().word());
         keyword(d, SearchFields.GRADE, r.gradeText());
         r.setters().forEach(x -> keyword(d, SearchFields.SETTER, x));
+        r.setters().stream()
+                .flatMap(x -> Arrays.stream(TermKeys.keyword(x).split(" ")))
+                .distinct()
+                .forEach(w -> keyword(d, SearchFields.SETTER_WORD, w));
         d.add(new DoublePoint(SearchFields.IRCRA, r.ircra()));
         d.add(new DoubleDocValuesField(SearchFields.IRCRA, r.ircra()));
         d.add(new LongPoint(SearchFields.SET, r.setOn().toEpochDay()));
@@ -102,15 +107,20 @@ final class RouteDocuments {
         Set<String> facetTypes = new LinkedHashSet<>();
         for (HoldRecord h : r.holds()) {
             String type = keys.key(VocabularyField.HOLD_TYPES, h.type());
+            String size = h.size() == null ? null : "+" + h.size().word();
             hold.add(type);
             facetTypes.add(h.type());
-            if (h.size() != null) {
+            if (size != null) {
                 sizes.add(h.size().word());
+                hold.add(type + size);
             }
             if (h.isHand()) {
                 for (double g : h.grips()) {
                     int sector = GripDirection.sector(g);
                     hold.add(type + "@" + 45 * sector);
+                    if (size != null) {
+                        hold.add(type + "@" + 45 * sector + size);
+                    }
                     grips.add(Integer.toString(45 * sector));
                 }
             }

@@ -10,6 +10,9 @@ final class SearchFields {
     static final String LABEL = "route";
     static final String COLOR = "color";
     static final String SETTER = "setter";
+    /** Each word of each setter's name, so that {@code setter:dario} finds Dario Penhale. */
+    static final String SETTER_WORD = "setter_word";
+
     static final String DISCIPLINE = "discipline";
     static final String GRADE = "grade";
     static final String BAND = "band";
@@ -21,7 +24,10 @@ final class SearchFields {
     static final String STRIPPED = "stripped";
 
     static final String ANGLE = "angle";
-    /** Hold types and type@direction ({@code crimp}, {@code crimp@90}) of hand-role placements and all types. */
+    /**
+     * Hold types and type@direction ({@code crimp}, {@code crimp@90}) of hand-role placements and all types, and the
+     * same with the hold's size ({@code sloper+xl}, {@code sloper@90+xl}), so that one query term asks for one hold.
+     */
     static final String HOLD = "hold";
     /** Directions of hand grips as sector centres ({@code 0}, {@code 45}, ..., {@code 315}). */
     static final String GRIP = "grip";

@@ -13,6 +13,22 @@ import java.time.LocalDate;
  */
 public record SettingValue(SettingKey key, String scope, LocalDate effectiveOn, JsonNode value) {
 
+    /**
+     * The day a gym's first value of a setting takes effect when no day is given: before any route, so the value
+     * applies from the archive's beginning (audits of earlier resets use it too).
+     */
+    public static final LocalDate THE_START = LocalDate.of(1900, 1, 1);
+
+    /** True when the value applies from the archive's beginning. */
+    public boolean fromTheStart() {
+        return !effectiveOn.isAfter(THE_START);
+    }
+
+    /** The day it took effect in words: the date, or {@code the start}. */
+    public String fromWords() {
+        return fromTheStart() ? "the start" : effectiveOn.toString();
+    }
+
     /** The value as a person types it, or {@code (default)}. */
     public String text() {
         return value == null ? "(default)" : key.text(value);

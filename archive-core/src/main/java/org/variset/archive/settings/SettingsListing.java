@@ -94,7 +94,7 @@ public final class SettingsListing {
                         SettingKey.CYCLE_DAYS.word(),
                         "wall " + w.name(),
                         own.get().text(),
-                        "set from " + own.get().effectiveOn()));
+                        "set from " + own.get().fromWords()));
             } else if (w.cycleDays() != null) {
                 rows.add(new Row(
                         SettingKey.CYCLE_DAYS.word(), "wall " + w.name(), String.valueOf(w.cycleDays()), "walls file"));
@@ -108,7 +108,7 @@ public final class SettingsListing {
                 key.word(),
                 scope,
                 value,
-                v.map(x -> "set from " + x.effectiveOn()).orElse(defaultSource));
+                v.map(x -> "set from " + x.fromWords()).orElse(defaultSource));
     }
 
     private static String weights(Map<String, Double> m) {

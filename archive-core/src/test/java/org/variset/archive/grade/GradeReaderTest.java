@@ -129,9 +129,14 @@ class GradeReaderTest {
             "5.10-, 10.5",
             "5.10+, 12.5",
             "5.10, 11.5",
-            // docs/spec/grades.md: older French letters (common practice, from memory): 4c reads as 4+, 5b as 5.
+            // docs/spec/grades.md: older French letters. 4a with 4 and 4c with 4+ is common practice, from memory; the
+            // b half a level between them is our even spacing, so that 5a and 5b are two grades.
+            "4a, 7",
+            "4b, 7.5",
             "4c, 8",
-            "5b, 9",
+            "5a, 9",
+            "5b, 9.5",
+            "5c, 10",
         })
         void readsSlashAndShorthandGrades(String text, double expected) {
             Discipline d = text.startsWith("V") ? Discipline.BOULDER : Discipline.ROPE;

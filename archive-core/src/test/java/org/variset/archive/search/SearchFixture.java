@@ -57,7 +57,7 @@ final class SearchFixture {
                 s,
                 feb,
                 List.of(ada, bo),
-                "C2|V5|2026-02-07||blue|toe hook;gaston|slopey|slopey top out|sloper@180 crimp@0");
+                "C2|V5|2026-02-07||blue|toe hook;gaston|slopey|slopey top out|sloper@180 crimp@0+xl");
         route(s, feb, List.of(bo), "C3|6A|2026-02-07||green|heel hook;mantle|technical||pinch@270 volume");
         route(s, mar, List.of(cy), "C4|V8|2026-03-14||black|campus;dyno|power||crimp@45 pocket@0");
         route(s, tow, List.of(cy), "T1|6a|2026-01-20||teal|layback;stem|endurance||jug@0 edge@90");
@@ -89,7 +89,7 @@ final class SearchFixture {
 
     /**
      * A route from one row: {@code label|grade|set_on|stripped_on|color|moves|styles|notes|holds}, lists separated by
-     * {@code ;}, holds as {@code type@degrees} separated by spaces; the discipline is the reset's wall's.
+     * {@code ;}, holds as {@code type@degrees} (size m) or {@code type@degrees+size} separated by spaces; the discipline is the reset's wall's.
      */
     private static void route(Session s, Reset reset, List<Setter> setters, String row) {
         String[] f = row.split("\\|", -1);
@@ -105,10 +105,11 @@ final class SearchFixture {
         String holds = f[8];
         int seq = 1;
         for (String h : holds.split(" ")) {
-            String[] td = h.split("@");
+            String[] sized = h.split("\\+");
+            HoldSize size = sized.length == 1 ? HoldSize.M : HoldSize.parse(sized[1]);
+            String[] td = sized[0].split("@");
             List<Double> grips = td.length == 1 ? List.of() : List.of(Double.parseDouble(td[1]));
-            r.addHold(
-                    new HoldPlacement.Spec(seq++, HoldRole.HAND, td[0], HoldSize.M, grips, null, null, null, Map.of()));
+            r.addHold(new HoldPlacement.Spec(seq++, HoldRole.HAND, td[0], size, grips, null, null, null, Map.of()));
         }
         s.persist(r);
         r.holds().forEach(s::persist);

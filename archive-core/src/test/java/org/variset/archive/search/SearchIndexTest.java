@@ -72,6 +72,9 @@ class SearchIndexTest {
                     "color:red|B:C1,Q:Q1",
                     "colour:RED|B:C1,Q:Q1",
                     "setter:\"bo renner\"|B:C3,B:C2",
+                    "setter:bo|B:C3,B:C2",
+                    "setter:Renner|B:C3,B:C2",
+                    "setter:ren*|B:C3,B:C2",
                     "discipline:rope|B:T1,B:T2",
                     "band:V5|B:C2",
                     "size:m discipline:rope|B:T1,B:T2",
@@ -123,6 +126,17 @@ class SearchIndexTest {
                                     gyms)
                             .total())
                     .isEqualTo(3);
+        }
+
+        /** C2 has an m sloper facing down and an xl crimp facing up: apart, the terms match it; together, no hold. */
+        @Test
+        void askForOneHoldsTypeDirectionAndSizeTogether() {
+            assertThat(find("size:xl hold:sloper")).containsExactly("B:C2");
+            assertThat(find("hold:sloper+xl")).isEmpty();
+            assertThat(find("hold:sloper+m")).containsExactly("B:C2");
+            assertThat(find("hold:crimp+xl")).containsExactly("B:C2");
+            assertThat(find("hold:crimp@up+xl")).containsExactly("B:C2");
+            assertThat(find("hold:crimp@90+xl")).isEmpty();
         }
 
         @Test
@@ -245,6 +259,7 @@ class SearchIndexTest {
                     "colr:red|1|there is no field 'colr'",
                     "angle:steep|7|not an angle",
                     "grade:5+|7|French 5+",
+                    "hold:sloper+huge|13|'huge' is not a hold size",
                     "   |1|the query is empty"
                 })
         void sayWhereAndWhatWasExpected(String query, int position, String message) {

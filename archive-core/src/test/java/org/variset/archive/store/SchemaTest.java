@@ -23,15 +23,20 @@ class SchemaTest {
 
     @Test
     void knowsTheNewestMigrationAsItsLatestVersion() throws IOException, URISyntaxException {
-        Path dir = Path.of(SchemaTest.class.getResource("/db/migration").toURI());
-        Pattern name = Pattern.compile("V(\\d+)__.+\\.sql");
-        int highest;
-        try (Stream<Path> files = Files.list(dir)) {
-            highest = files.map(p -> name.matcher(p.getFileName().toString()))
-                    .filter(Matcher::matches)
-                    .mapToInt(m -> Integer.parseInt(m.group(1)))
-                    .max()
-                    .orElse(0);
+        // SQL steps are resources; a step that needs Java (V5, reading grades again) is a class in db.migration.
+        Pattern name = Pattern.compile("V(\\d+)__.+\\.(sql|class)");
+        int highest = 0;
+        for (java.net.URL url :
+                java.util.Collections.list(SchemaTest.class.getClassLoader().getResources("db/migration"))) {
+            try (Stream<Path> files = Files.list(Path.of(url.toURI()))) {
+                highest = Math.max(
+                        highest,
+                        files.map(p -> name.matcher(p.getFileName().toString()))
+                                .filter(Matcher::matches)
+                                .mapToInt(m -> Integer.parseInt(m.group(1)))
+                                .max()
+                                .orElse(0));
+            }
         }
         assertThat(SchemaVersion.LATEST).isEqualTo(highest);
     }

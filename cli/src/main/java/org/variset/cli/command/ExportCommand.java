@@ -8,6 +8,7 @@ import org.variset.cli.ExitCode;
 import org.variset.cli.convert.PartialDateConverter;
 import org.variset.imports.export.ArchiveExporter;
 import org.variset.imports.export.ExportFormat;
+import org.variset.reports.format.FigureFormat;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -73,7 +74,9 @@ final class ExportCommand extends VarisetSubcommand {
                     out,
                     force);
         }
-        out().println("Exported " + r.walls() + " walls, " + r.routes() + " routes and " + r.holds() + " holds to "
+        out().println("Exported " + FigureFormat.count(r.walls(), "wall") + ", "
+                + FigureFormat.count(r.routes(), "route")
+                + " and " + FigureFormat.count(r.holds(), "hold") + " to "
                 + String.join(", ", r.files().stream().map(Path::toString).toList()) + ".");
         return ExitCode.OK;
     }

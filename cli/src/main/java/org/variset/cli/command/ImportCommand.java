@@ -1,7 +1,9 @@
 package org.variset.cli.command;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import org.variset.app.Json;
 import org.variset.app.Workspace;
 import org.variset.app.imports.ImportFiles;
@@ -9,6 +11,7 @@ import org.variset.cli.ExitCode;
 import org.variset.cli.internal.ConsoleProgress;
 import org.variset.imports.load.ImportOptions;
 import org.variset.imports.load.ImportSummary;
+import org.variset.reports.format.FigureFormat;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -45,6 +48,13 @@ final class ImportCommand extends VarisetSubcommand {
     @Option(names = "--update", description = "Let changed rows replace what the archive holds for their route.")
     boolean update;
 
+    @Option(
+            names = "--new-name",
+            paramLabel = "NAME",
+            description = "Create this gym, wall or setter although its name is close to one the archive or the files "
+                    + "already have (\"Milk slab\" beside \"Milk Slab\" is refused without it). Repeat for several.")
+    List<String> newNames = new ArrayList<>();
+
     @Mixin
     FormatOptions format;
 
@@ -53,7 +63,8 @@ final class ImportCommand extends VarisetSubcommand {
         ImportOptions options = ImportOptions.defaults()
                 .withDryRun(dryRun)
                 .withSkipBadRows(skipBadRows)
-                .withUpdate(update);
+                .withUpdate(update)
+                .withNewNames(Set.copyOf(newNames));
         ImportFiles.Result r;
         try (Workspace w = workspace();
                 ConsoleProgress progress = new ConsoleProgress(err(), ConsoleProgress.onTerminal(), root().verbose)) {
@@ -69,11 +80,34 @@ final class ImportCommand extends VarisetSubcommand {
 
     private void print(ImportSummary s) {
         String changed = s.dryRun() ? " would change" : " changed";
-        out().println((s.dryRun() ? "Dry run, nothing written: " : "Imported: ") + s.routesNew() + " routes new, "
-                + s.routesUnchanged() + " unchanged, " + s.routesChanged() + changed + "; " + s.holdsWritten()
-                + " holds" + (s.dryRun() ? " would be" : "") + " written; " + s.wallsNew() + " walls new, "
+        out().println((s.dryRun() ? "Dry run, nothing written: " : "Imported: ")
+                + FigureFormat.count(s.routesNew(), "route") + " new, " + s.routesUnchanged() + " unchanged, "
+                + s.routesChanged() + changed + "; " + FigureFormat.count(s.holdsWritten(), "hold")
+                + (s.dryRun() ? " would be" : "") + " written; " + FigureFormat.count(s.wallsNew(), "wall") + " new, "
                 + s.wallsChanged() + changed + ".");
         s.changes().forEach(c -> out().println("  changed: " + c));
+        String created = s.dryRun() ? "would be new" : "new";
+        if (!s.newGyms().isEmpty()) {
+            out().println("  gyms " + created + ": " + String.join(", ", s.newGyms()));
+        }
+        if (!s.newWalls().isEmpty()) {
+            boolean oneGym = s.newWalls().stream()
+                            .map(ImportSummary.NewWall::gym)
+                            .distinct()
+                            .count()
+                    == 1;
+            out().println("  walls " + created + ": "
+                    + String.join(
+                            ", ",
+                            s.newWalls().stream()
+                                    .map(w -> oneGym ? w.wall() : w.wall() + " (" + w.gym() + ")")
+                                    .toList())
+                    + (oneGym ? " (" + s.newWalls().get(0).gym() + ")" : ""));
+        }
+        if (!s.newSetters().isEmpty()) {
+            out().println("  setters " + created + ": " + String.join(", ", s.newSetters()));
+        }
+        s.warnings().forEach(w -> err().println("variset: warning: " + w));
         if (!s.extraColumns().isEmpty()) {
             out().println("Extra columns kept as extra fields: " + String.join(", ", sorted(s.extraColumns())));
         }
@@ -86,7 +120,7 @@ final class ImportCommand extends VarisetSubcommand {
         }
     }
 
-    private static List<String> sorted(java.util.Set<String> set) {
+    private static List<String> sorted(Set<String> set) {
         return set.stream().sorted().toList();
     }
 }

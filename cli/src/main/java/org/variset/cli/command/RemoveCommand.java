@@ -10,6 +10,7 @@ import org.variset.cli.ExitCode;
 import org.variset.imports.ImportException;
 import org.variset.imports.ProblemList;
 import org.variset.imports.load.RouteKeys;
+import org.variset.reports.format.FigureFormat;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -61,7 +62,8 @@ final class RemoveCommand extends VarisetSubcommand {
                 out().println("Nothing to remove: no archived route matches.");
                 return ExitCode.OK;
             }
-            out().println("This removes " + plan.routes().size() + " routes and " + plan.holds() + " holds"
+            out().println("This removes " + FigureFormat.count(plan.routes().size(), "route") + " and "
+                    + FigureFormat.count(plan.holds(), "hold")
                     + (plan.emptiedResets().isEmpty()
                             ? ""
                             : ", and the resets " + String.join(", ", plan.emptiedResets()))
@@ -75,7 +77,8 @@ final class RemoveCommand extends VarisetSubcommand {
                 return ExitCode.OK;
             }
             RouteRemoval.Plan done = removal.remove(t);
-            out().println("Removed " + done.routes().size() + " routes and " + done.holds() + " holds.");
+            out().println("Removed " + FigureFormat.count(done.routes().size(), "route") + " and "
+                    + FigureFormat.count(done.holds(), "hold") + ".");
         }
         return ExitCode.OK;
     }

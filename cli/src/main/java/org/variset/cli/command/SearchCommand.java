@@ -34,10 +34,13 @@ import picocli.CommandLine.Parameters;
             "  move:dyno  style:power  hold:sloper  hold:pinch@90  grip:down   moves, styles, hold types, a hold",
             "                         type facing a direction (degrees, clock 4:30, or up/right/down-left...),",
             "                         any hand grip facing a direction",
+            "  hold:sloper+xl  hold:crimp@up+s   one hold's type, direction and size together (size:xl hold:sloper",
+            "                         asks for an xl hold and a sloper, maybe two holds)",
             "  grade:V4  grade:V3..V5  grade:6a..6b+  grade:V5..   grades in any scale, compared on the IRCRA axis",
             "  band:V4                a band of the gym's grade bands",
             "  set:2026-03  set:2026-01..2026-06  stripped:2026-04  standing:2026-03-02   dates",
             "  gym:  wall:  route:  color:  setter:  discipline:  size:  angle:20..45  notes:",
+            "  setter:dario           a setter by a word of their name, or the whole name in quotes",
             "  a b   a AND b   a OR b   NOT a   -a   ( )   combine; names with spaces go in quotes",
             "  wall:cav*              a name that starts with cav",
             ""

@@ -3,6 +3,7 @@ package org.variset.cli.command;
 import org.variset.app.Workspace;
 import org.variset.app.change.SetterNames;
 import org.variset.cli.ExitCode;
+import org.variset.reports.format.FigureFormat;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
 
@@ -58,7 +59,8 @@ final class SetterCommand implements Runnable {
             try (Workspace w = workspace()) {
                 n = new SetterNames(w).merge(from, into);
             }
-            out().println("Merged '" + from + "' into '" + into + "': " + n + " routes now name '" + into + "'.");
+            out().println("Merged '" + from + "' into '" + into + "': " + FigureFormat.count(n, "route")
+                    + (n == 1 ? " now names '" : " now name '") + into + "'.");
             return ExitCode.OK;
         }
     }

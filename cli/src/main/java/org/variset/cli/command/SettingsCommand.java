@@ -101,7 +101,8 @@ final class SettingsCommand extends VarisetSubcommand {
                 names = "--from",
                 paramLabel = "DATE",
                 converter = DateConverter.class,
-                description = "The day the value takes effect (default: today).")
+                description = "The day the value takes effect (default: today; for a setting's first value, the "
+                        + "start of the archive, so that audits of earlier resets use it).")
         LocalDate from;
     }
 
@@ -116,11 +117,15 @@ final class SettingsCommand extends VarisetSubcommand {
                     .set(new GymSettingsUse.Scope(where.gym.gym, where.discipline, where.wall, where.from), key, text);
         }
         String what = c.key().word() + c.scopeWords();
+        String from = c.fromTheStart()
+                ? "From the start of the archive (its first value, so audits of earlier resets use it too; give "
+                        + "--from to start it later)"
+                : "From " + c.from();
         cmd.out()
                 .println(
                         c.valueText() == null
-                                ? "From " + c.from() + ", " + what + " of " + c.gym() + " is back to its default."
-                                : "From " + c.from() + ", " + what + " of " + c.gym() + " is " + c.valueText() + ".");
+                                ? from + ", " + what + " of " + c.gym() + " is back to its default."
+                                : from + ", " + what + " of " + c.gym() + " is " + c.valueText() + ".");
         return ExitCode.OK;
     }
 
@@ -207,7 +212,7 @@ final class SettingsCommand extends VarisetSubcommand {
             } else if (h.isEmpty()) {
                 out().println(name + " has changed no setting: every value is the default.");
             } else {
-                h.forEach(p -> out().println(p.value().effectiveOn() + "  "
+                h.forEach(p -> out().println(p.value().fromWords() + "  "
                         + p.value().key().word() + (p.scopeWords().isEmpty() ? "" : " (" + p.scopeWords() + ")") + "  "
                         + p.value().text()));
             }

@@ -6,6 +6,7 @@ import org.variset.app.change.StripWall;
 import org.variset.archive.change.WallStrip;
 import org.variset.cli.ExitCode;
 import org.variset.cli.convert.DateConverter;
+import org.variset.reports.format.FigureFormat;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -40,7 +41,8 @@ final class StripCommand extends VarisetSubcommand {
         try (Workspace w = workspace()) {
             r = new StripWall(w).strip(gym.gym, wall, on);
         }
-        out().println("Stripped " + r.stripped() + " routes of " + wall + " on " + on + "; " + r.setThatDay()
+        out().println("Stripped " + FigureFormat.count(r.stripped(), "route") + " of " + wall + " on " + on + "; "
+                + r.setThatDay()
                 + " set that day stay up; " + r.alreadyDown() + " were already down.");
         return ExitCode.OK;
     }

@@ -13,6 +13,7 @@ import org.variset.reports.audit.Headline;
 import org.variset.reports.audit.SetResult;
 import org.variset.reports.catalogue.Figure;
 import org.variset.reports.catalogue.Figures;
+import org.variset.reports.figures.FeatureText;
 import org.variset.reports.figures.SetFigures;
 import org.variset.reports.format.FigureFormat;
 import org.variset.reports.scoring.grades.GradeFigures;
@@ -37,7 +38,7 @@ public final class AuditText {
     private void write(Audit a, int shown) {
         SetResult s = a.audited();
         line(a.subject().title() + " · " + a.subject().gym() + " · "
-                + s.routes().size() + " routes");
+                + FigureFormat.count(s.routes().size(), "route"));
         line(score(s));
         line("");
         line("What stands out");
@@ -123,7 +124,8 @@ public final class AuditText {
         for (int i = 0; i < 8; i++) {
             sectors.add(CircularStatistics.sectorWord(i) + " " + g.sectors().get(i));
         }
-        line("Grip directions  " + g.n() + " hand grips (" + g.undirected() + " holds without a direction): "
+        line("Grip directions  " + FigureFormat.count(g.n(), "hand grip") + " ("
+                + FigureFormat.count(g.undirected(), "hold", "holds") + " without a direction): "
                 + String.join(", ", sectors) + "; mean direction "
                 + Figures.GRIP_MEAN_DIRECTION.text(g.meanDirectionDeg()) + "°, resultant length "
                 + Figures.GRIP_RESULTANT.text(g.resultantLength()) + ", Rayleigh p "
@@ -140,12 +142,12 @@ public final class AuditText {
         }
         line("Profiles         " + profiles(f));
         line("Repetition       " + repetition(s));
-        line("Route lines      " + f.line().withGie() + " routes with a full line: GIE mean "
+        line("Route lines      " + FigureFormat.count(f.line().withGie(), "route") + " with a full line: GIE mean "
                 + Figures.GIE_MEAN.text(f.line().gieMean()) + " (min "
                 + Figures.GIE_MIN.text(f.line().gieMin()) + ", max "
                 + Figures.GIE_MAX.text(f.line().gieMax()) + "); "
-                + f.line().flagged().size()
-                + " routes with a span over "
+                + FigureFormat.count(f.line().flagged().size(), "route")
+                + " with a span over "
                 + Figures.SPAN.text(f.line().reachK() * f.line().reachHeightM())
                 + " m (heuristic)");
     }
@@ -198,14 +200,16 @@ public final class AuditText {
         int near = s.repetition().nearRepeats().size();
         int inside = s.repetition().internalRepeats().size();
         String window = s.windowRoutes() > 0 || s.repetition().novelty() != null
-                ? near + " near-repeats of the " + s.windowRoutes() + " routes set in the look-back window; "
+                ? FigureFormat.count(near, "near-repeat") + " of the " + FigureFormat.count(s.windowRoutes(), "route")
+                        + " set in the look-back window; "
                 : "";
         return window + inside + " inside this set; novelty "
                 + Figures.NOVELTY.text(s.repetition().novelty())
                 + "; hold reuse " + FigureFormat.percent(s.holdReuseRate())
                 + (s.repetition().notEnoughDetail().isEmpty()
                         ? ""
-                        : "; " + s.repetition().notEnoughDetail().size() + " routes with too little detail to compare");
+                        : "; too little detail to compare: "
+                                + FeatureText.list(s.repetition().notEnoughDetail(), 5));
     }
 
     private static String settings(Audit a) {

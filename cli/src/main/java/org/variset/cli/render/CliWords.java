@@ -38,8 +38,8 @@ public final class CliWords {
             case CHECK_ARCHIVE -> "Run 'variset check' for details.";
             case REBUILD_INDEX -> "Run 'variset reindex' to build it again.";
             case NAME_GYM -> "name it with --gym";
-            case LIST_RESETS -> "see 'variset info' and the reset column of your files";
-            case ALLOW_UPDATE -> "give --update to replace it";
+            case LIST_RESETS -> "see 'variset resets' for the gym's reset labels";
+            case ALLOW_UPDATE -> "see what it would change with --update --dry-run, then give --update";
             case SET_TARGET ->
                 "set one with 'variset settings set target ... --discipline " + r.fact("discipline") + "'";
             case MERGE_SETTERS ->
@@ -67,6 +67,9 @@ public final class CliWords {
                                 .map(s -> "--scale " + s)
                                 .collect(Collectors.joining(" or "))
                         + ".";
+            case CONFIRM_NEW_NAME ->
+                "write it as '" + r.fact("known") + "', or give --new-name '" + r.fact("name") + "' if it is another "
+                        + r.fact("what");
         };
     }
 

@@ -32,9 +32,14 @@ public final class PlanText {
             b.append(line).append('\n');
         }
         b.append('\n')
-                .append("Bring back (share now below the last twelve months by ")
+                .append("Bring back (the share now, on ")
+                .append(String.join(", ", p.baseline().walls()))
+                .append(", at least ")
                 .append(FigureFormat.percent(p.margin()))
-                .append(" or more):\n");
+                .append(" below the median of their ")
+                .append(p.baseline().resets())
+                .append(p.baseline().resets() == 1 ? " reset" : " resets")
+                .append(" of the last twelve months):\n");
         if (p.gaps().isEmpty()) {
             b.append("  nothing: ")
                     .append(p.undefined()
@@ -46,16 +51,20 @@ public final class PlanText {
                     .append(label(g))
                     .append(": ")
                     .append(FigureFormat.percent(g.standingShare()))
-                    .append(" of the gym's ")
+                    .append(" of the ")
                     .append(unit(g.field()))
                     .append(" up now, ")
-                    .append(FigureFormat.percent(g.yearShare()))
-                    .append(" over the last twelve months\n");
+                    .append(FigureFormat.percent(g.baselineShare()))
+                    .append(" in the median reset\n");
         }
         b.append('\n')
-                .append("Hold shapes to rest (used on ")
+                .append("Hold shapes to rest (the hand-hold shapes ")
                 .append(p.wall())
-                .append(" in its last three resets):\n  ");
+                .append(" used most in its last three resets: ")
+                .append(p.shapesToRest().size())
+                .append(" of ")
+                .append(p.shapesOnWall())
+                .append(", by resets then placements; foot holds left out):\n  ");
         b.append(
                 p.shapesToRest().isEmpty()
                         ? "none: " + p.undefined().get("shapes_to_rest")

@@ -148,6 +148,58 @@ def jaccard(a, b):
         return None
     return Fraction(len(fa & fb), len(fa | fb))
 
+def longest_run(a, b):
+    best = 0
+    for i in range(len(a)):
+        for j in range(len(b)):
+            k = 0
+            while i + k < len(a) and j + k < len(b) and a[i + k] == b[j + k]:
+                k += 1
+            best = max(best, k)
+    return best
+
+def is_repeat(a, b):
+    # The evidence rule of docs/spec/metrics.md section 5, written from its text: shapes decide when both routes name
+    # three or more hand-hold shapes; otherwise the same grade band and the same run of moves.
+    sa = [h for h in ordered_hand(a) if h["ref"]]
+    sb = [h for h in ordered_hand(b) if h["ref"]]
+    if len(sa) >= 3 and len(sb) >= 3:
+        left, pairs = list(sb), []
+        for h in sa:
+            m = next((o for o in left if o["ref"] == h["ref"]), None)
+            if m is not None:
+                left.remove(m)
+                pairs.append((h, m))
+        offs = [(m["pos"][0] - h["pos"][0], m["pos"][1] - h["pos"][1]) for h, m in pairs if h["pos"] and m["pos"]]
+        apart = 0
+        if offs:
+            dx, dy = statistics.median(o[0] for o in offs), statistics.median(o[1] for o in offs)
+            apart = sum(1 for o in offs if math.hypot(o[0] - dx, o[1] - dy) > 0.2 + 1e-9)
+        return len(pairs) - apart >= max(3, 0.5 * min(len(sa), len(sb)))
+    run = longest_run(a["moves"], b["moves"])
+    same_seq = run >= 3 or run >= 2 and run >= min(len(a["moves"]), len(b["moves"]))
+    return a["grade"] == b["grade"] and same_seq
+
+def missing_share(standing_grades, own_grades=None):
+    # Target share of the bands missing as a range: runs of two or more adjacent empty target bands in the standing
+    # set, and such runs between the audited set's own easiest and hardest routes.
+    def runs(hist, bands):
+        out, run = set(), []
+        for b in bands + [None]:
+            if b is not None and hist.get(b, 0) == 0:
+                run.append(b)
+            else:
+                if len(run) >= 2:
+                    out |= set(run)
+                run = []
+        return out
+    bands = list(PYRAMID)
+    missing = runs(standing_grades["histogram"], bands)
+    if own_grades is not None:
+        present = [i for i, b in enumerate(bands) if own_grades["histogram"].get(b, 0) > 0]
+        missing |= runs(own_grades["histogram"], bands[present[0]:present[-1] + 1])
+    return sum(PYRAMID[b] for b in missing) / sum(PYRAMID.values())
+
 def figures(rs):
     hold_list = [h for r in rs for h in r["holds"]]
     return dict(grip=grip(rs), holds=variety([h["type"] for h in hold_list], VOCAB["holds"]),
@@ -167,16 +219,19 @@ def score(parts):
 day = date(2026, 2, 2)
 reset = [r for r in routes if r["reset"] == "Arch 2026-02-02"]
 window = [r for r in routes if r["reset"] != "Arch 2026-02-02" and day - timedelta(365) <= r["set_on"] < day]
-near, inside, best = [], [], []
+near, inside, aside, best = [], [], [], []
 for i, r in enumerate(reset):
     if features(r)[1] < 4:
         continue
     js = [(jaccard(r, w), w) for w in window]
     js = [(j, w) for j, w in js if j is not None]
     best.append(max([float(j) for j, _ in js], default=0.0))
-    near += [[name(r), name(w), float(j)] for j, w in js if j >= Fraction(3, 5)]
+    near += [[name(r), name(w), float(j)] for j, w in js if j >= Fraction(3, 5) and is_repeat(r, w)]
+    aside += [[name(r), name(w), float(j)] for j, w in js if j >= Fraction(3, 5) and not is_repeat(r, w)]
     inside += [[name(r), name(o), float(jaccard(r, o))] for o in reset[i + 1:]
-               if jaccard(r, o) is not None and jaccard(r, o) >= Fraction(3, 5)]
+               if jaccard(r, o) is not None and jaccard(r, o) >= Fraction(3, 5) and is_repeat(r, o)]
+    aside += [[name(r), name(o), float(jaccard(r, o))] for o in reset[i + 1:]
+              if jaccard(r, o) is not None and jaccard(r, o) >= Fraction(3, 5) and not is_repeat(r, o)]
 novelty = 1 - sum(best) / len(best)
 earlier = ["Arch 2026-01-05", "Arch 2025-12-08"]
 prev_keys = {(h["ref"], k) for r in routes if r["reset"] in earlier for h in r["holds"] if h["ref"]
@@ -188,9 +243,10 @@ f = figures(reset)
 gym_day = [r for r in standing(day) if r["discipline"] == "boulder"]
 g_standing = grades(gym_day)
 parts = dict(grip=f["grip"]["sector_entropy"], holds=f["holds"]["coverage"], moves=f["moves"]["coverage"],
-             grades=math.exp(-g_standing["emd_to_target"]), novelty=novelty)
+             grades=math.exp(-g_standing["emd_to_target"]) * (1 - missing_share(g_standing, grades(reset))),
+             novelty=novelty)
 reset_audit = dict(figures=f, grades_of_reset=grades(reset), gym_grades=g_standing, near_repeats=near,
-                   internal_repeats=inside, novelty=novelty, window_routes=len(window),
+                   internal_repeats=inside, similar_not_repeats=aside, novelty=novelty, window_routes=len(window),
                    hold_reuse_rate=reused / len(placements), parts=parts, score=score(parts),
                    gie_mean=float(np.mean(f["gie"])), gie_min=min(f["gie"]), gie_max=max(f["gie"]))
 
@@ -200,7 +256,7 @@ up = standing(sday)
 fs = figures(up)
 gs = grades([r for r in up if r["discipline"] == "boulder"])
 sparts = dict(grip=fs["grip"]["sector_entropy"], holds=fs["holds"]["coverage"], moves=fs["moves"]["coverage"],
-              grades=math.exp(-gs["emd_to_target"]), novelty=None)
+              grades=math.exp(-gs["emd_to_target"]) * (1 - missing_share(gs)), novelty=None)
 standing_audit = dict(routes=len(up), figures=fs, grades=gs, parts=sparts, score=score(sparts))
 
 # 3. Bo Renner's routes set 2025-12-01 to 2026-02-28, against the other setters' routes of the period.

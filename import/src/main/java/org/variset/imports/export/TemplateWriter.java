@@ -18,18 +18,19 @@ import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.variset.archive.file.AtomicFile;
 import org.variset.archive.vocabulary.Vocabulary;
 import org.variset.archive.vocabulary.VocabularyField;
+import org.variset.imports.table.ExampleRow;
 import org.variset.imports.table.TableKind;
 
 /**
  * Writes empty interchange files with the right headers and one invented example row, so a gym can start from
- * the right layout; the XLSX template has drop-down lists for hold type, role, size and discipline.
+ * the right layout (the example's gym is {@link ExampleRow#GYM}, which import refuses); the XLSX template has drop-down lists for hold type, role, size and discipline.
  */
 public final class TemplateWriter {
     private static final Map<TableKind, List<String>> EXAMPLE = Map.of(
-            TableKind.WALLS, List.of("Harbour Hall", "Cave", "boulder", "35", "4.2", "9.5", "28"),
+            TableKind.WALLS, List.of(ExampleRow.GYM, "Cave", "boulder", "35", "4.2", "9.5", "28"),
             TableKind.ROUTES,
                     List.of(
-                            "Harbour Hall",
+                            ExampleRow.GYM,
                             "Cave",
                             "Blue 3",
                             "2026-03-02",
@@ -44,10 +45,10 @@ public final class TemplateWriter {
                             "heel hook;dyno",
                             "power",
                             "3;4;8;3",
-                            "start matched on the jug"),
+                            "the template's example: delete this row; import refuses it"),
             TableKind.HOLDS,
                     List.of(
-                            "Harbour Hall",
+                            ExampleRow.GYM,
                             "Blue 3",
                             "2026-03-02",
                             "crimp",

@@ -142,10 +142,12 @@ final class ArchiveComparison {
             before.add(new HoldPlacement.Spec(
                     h.seq(), h.role(), h.type(), h.size(), h.grips(), h.holdRef(), h.xM(), h.yM(), h.extraFields()));
         }
-        return before.size() == file.size() && before.value() == file.value()
-                ? Optional.empty()
-                : Optional.of("holds: " + before.size() + " placements -> " + file.size() + " placements, not the same "
-                        + "list");
+        if (before.size() == file.size() && before.value() == file.value()) {
+            return Optional.empty();
+        }
+        plan.holdsChanged.add(key);
+        return Optional.of(
+                "holds: " + before.size() + " placements -> " + file.size() + " placements, not the same " + "list");
     }
 
     private void compareWall(WallRow w) {
@@ -155,8 +157,7 @@ final class ArchiveComparison {
                 .uniqueResult();
         List<String> key = List.of(w.gym(), w.wall());
         if (existing == null) {
-            plan.newWalls.add(key);
-            return;
+            return; // a new wall: NewNames records it
         }
         List<Object> before = java.util.Arrays.asList(
                 existing.discipline(),

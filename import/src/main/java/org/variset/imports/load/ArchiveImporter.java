@@ -58,18 +58,21 @@ public final class ArchiveImporter {
         clock.lap("reading routes");
         ImportSummary summary = archive.fromTransaction(session -> {
             RouteResolver resolver = new RouteResolver(session, plan.routes.keySet(), plan.badRows);
-            checkHolds(sources, parser, resolver, plan, progress);
+            HoldChecks holdChecks = new HoldChecks(session, plan);
+            checkHolds(sources, parser, resolver, holdChecks, plan, progress);
+            plan.warnings.addAll(holdChecks.warnings());
             clock.lap("checking holds");
             refuseUnlessSkipping(plan);
             new ArchiveComparison(session, archive, plan, resolver).run(sources, quiet);
+            new NewNames(session, plan).run();
             clock.lap("comparing with the archive");
             refuseUnlessSkipping(plan);
             if (plan.options.dryRun()) {
-                return plan.summary(plan.holdCount(), plan.newWalls.size(), extraColumns, parser.unknownTerms());
+                return plan.summary(plan.holdCount(), extraColumns, parser.unknownTerms());
             }
             ArchiveWriter writer = new ArchiveWriter(session, plan, quiet);
             long holds = writer.write(sources, resolver, progress, clock);
-            return plan.summary(holds, writer.wallsCreated(), extraColumns, parser.unknownTerms());
+            return plan.summary(holds, extraColumns, parser.unknownTerms());
         });
         if (!summary.dryRun()) {
             clock.lap("committing");
@@ -134,6 +137,7 @@ public final class ArchiveImporter {
             List<RowSource> sources,
             RowParser parser,
             RouteResolver resolver,
+            HoldChecks checks,
             ImportPlan plan,
             ImportProgress progress) {
         long n = 0;
@@ -148,6 +152,7 @@ public final class ArchiveImporter {
                     HoldRow h = parser.hold(c.next());
                     RouteKey key = h == null ? null : resolver.resolve(h, plan.problems);
                     if (key != null) {
+                        checks.check(key, h);
                         plan.addHold(key, h, resolver.archived(key));
                     }
                     if (++n % PROGRESS_EVERY == 0) {

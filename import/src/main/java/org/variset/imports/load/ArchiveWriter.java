@@ -55,7 +55,6 @@ final class ArchiveWriter {
 
     private final Map<String, Long> setters = new HashMap<>();
     private final Map<RouteKey, Long> routeIds = new HashMap<>();
-    private int wallsCreated;
 
     private record WallRef(long gymId, long wallId, Wall entity) {}
 
@@ -114,10 +113,6 @@ final class ArchiveWriter {
     }
 
     /** Walls the write created, named in a walls file or only in a routes file. */
-    int wallsCreated() {
-        return wallsCreated;
-    }
-
     private boolean writesRoute(RouteKey k) {
         return !plan.refused.contains(k)
                 && (plan.newRoutes.contains(k) || plan.changedRoutes.contains(k) && plan.options.update());
@@ -156,7 +151,6 @@ final class ArchiveWriter {
                 .orElseGet(() -> {
                     Wall created = new Wall(gym(key.get(0)), key.get(1));
                     session.persist(created);
-                    wallsCreated++;
                     return created;
                 });
         walls.put(key, new WallRef(w.gym().id(), w.id(), w));
@@ -290,7 +284,9 @@ final class ArchiveWriter {
     }
 
     private static void fill(Route r, RouteRow row) {
-        r.setStrippedOn(row.strippedOn());
+        if (row.strippedOn() != null) {
+            r.setStrippedOn(row.strippedOn()); // an empty cell keeps the archive's strip date (RouteDiff)
+        }
         r.setColor(row.color());
         r.setAngleDeg(row.angleDeg());
         r.setMoves(row.moves());

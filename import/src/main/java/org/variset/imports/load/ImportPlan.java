@@ -29,13 +29,30 @@ final class ImportPlan {
 
     final Set<RouteKey> newRoutes = new LinkedHashSet<>();
     final Set<RouteKey> changedRoutes = new LinkedHashSet<>();
+    /** Archived routes whose hold lists the files change (the others keep theirs, even when updated). */
+    final Set<RouteKey> holdsChanged = new LinkedHashSet<>();
+
     final Set<RouteKey> refused = new LinkedHashSet<>();
     /** Route rows with problems, by key: their holds are left out without a problem of their own. */
     final Set<RouteKey> badRows = new LinkedHashSet<>();
 
     final Set<List<String>> newWalls = new LinkedHashSet<>();
+    final List<String> newGymNames = new ArrayList<>();
+    final List<String> newSetterNames = new ArrayList<>();
+
+    /** Where a name is first written in the files. */
+    record Where(String file, int line) {}
+
+    /** The gyms, walls (gym and wall) and setters the files name, with where each first appears. */
+    final Map<String, Where> gymsSeen = new LinkedHashMap<>();
+
+    final Map<List<String>, Where> wallsSeen = new LinkedHashMap<>();
+    final Map<String, Where> settersSeen = new LinkedHashMap<>();
     final Set<List<String>> changedWalls = new LinkedHashSet<>();
     final List<String> changes = new ArrayList<>();
+    /** Located lines about rows imported as written that may still be wrong. */
+    final List<String> warnings = new ArrayList<>();
+
     long unchanged;
     private final Map<String, String> names = new HashMap<>();
 
@@ -83,6 +100,8 @@ final class ImportPlan {
         if (w == null) {
             return;
         }
+        gymsSeen.putIfAbsent(intern(w.gym()), new Where(intern(w.file()), w.line()));
+        wallsSeen.putIfAbsent(List.of(intern(w.gym()), intern(w.wall())), new Where(intern(w.file()), w.line()));
         WallRow before = walls.putIfAbsent(List.of(w.gym(), w.wall()), w);
         if (before != null) {
             problems.add(w.file(), w.line(), "wall", "the same wall as line " + before.line());
@@ -93,6 +112,10 @@ final class ImportPlan {
         if (r == null) {
             return;
         }
+        Where where = new Where(intern(r.file()), r.line());
+        gymsSeen.putIfAbsent(intern(r.key().gym()), where);
+        wallsSeen.putIfAbsent(List.of(intern(r.key().gym()), intern(r.key().wall())), where);
+        r.setters().forEach(s -> settersSeen.putIfAbsent(intern(s.strip()), where));
         PlannedRoute before =
                 routes.putIfAbsent(intern(r.key()), new PlannedRoute(intern(r.file()), r.line(), intern(r.reset())));
         if (before != null) {
@@ -129,11 +152,14 @@ final class ImportPlan {
         return d != null ? d.size() : routes.containsKey(k) ? routes.get(k).holds : 0;
     }
 
-    /** True when the route's holds are written: it is new, or changed and updated, and the files bring holds. */
+    /**
+     * True when the route's holds are written: it is new, or an update changes its hold list, and the files bring
+     * holds. An update of a route's fields alone leaves its holds as they are.
+     */
     boolean writesHoldsOf(RouteKey k) {
         return holdsOf(k) > 0
                 && !refused.contains(k)
-                && (newRoutes.contains(k) || changedRoutes.contains(k) && options.update());
+                && (newRoutes.contains(k) || holdsChanged.contains(k) && options.update());
     }
 
     long holdCount() {
@@ -143,16 +169,21 @@ final class ImportPlan {
                 .sum();
     }
 
-    ImportSummary summary(long holdsWritten, long wallsNew, Set<String> extraColumns, Set<String> unknownTerms) {
+    ImportSummary summary(long holdsWritten, Set<String> extraColumns, Set<String> unknownTerms) {
         return new ImportSummary(
                 options.dryRun(),
                 newRoutes.size(),
                 unchanged,
                 changedRoutes.size(),
-                wallsNew,
+                List.copyOf(newGymNames),
+                newWalls.stream()
+                        .map(k -> new ImportSummary.NewWall(k.get(0), k.get(1)))
+                        .toList(),
+                List.copyOf(newSetterNames),
                 changedWalls.size(),
                 holdsWritten,
                 List.copyOf(changes),
+                List.copyOf(warnings),
                 problems.lines(),
                 problems.count(),
                 Set.copyOf(extraColumns),

@@ -19,7 +19,11 @@ final class RouteDiff {
                 "grade",
                 r.gradeText() + " (" + r.gradeScale().word() + ")",
                 row.grade().text().strip() + " (" + row.grade().scale().word() + ")");
-        compare(d, "stripped_on", r.strippedOn(), row.strippedOn());
+        // An empty strip date in a file means "not given": a route stripped in the archive (by strip, say) stays down.
+        // Putting a route back up is an explicit act (amend --still-up), never a side effect of re-importing a sheet.
+        if (row.strippedOn() != null) {
+            compare(d, "stripped_on", r.strippedOn(), row.strippedOn());
+        }
         compare(d, "reset", r.reset(), row.reset());
         compare(d, "setters", r.setters(), row.setters());
         compare(d, "color", r.color(), row.color());

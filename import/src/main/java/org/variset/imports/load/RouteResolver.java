@@ -6,6 +6,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import org.hibernate.Session;
 import org.variset.imports.ProblemList;
 import org.variset.imports.row.HoldRow;
@@ -58,7 +59,11 @@ final class RouteResolver {
                         h.line(),
                         "route",
                         route + (h.wall() == null ? "" : " on " + h.wall())
-                                + " is neither in the import nor in the archive (expected a row for it in the routes file)");
+                                + " is neither in the import nor in the archive"
+                                + nearLabel(n)
+                                        .map(l -> "; did you mean '" + l + "', the route of that day "
+                                                + "with a label written almost the same?")
+                                        .orElse(" (expected a row for it in the routes file)"));
             } else {
                 problems.add(
                         h.file(),
@@ -72,6 +77,18 @@ final class RouteResolver {
             }
         }
         return null;
+    }
+
+    /** A label of the same gym and day, in the files or the archive, that the given one is probably a slip for. */
+    private Optional<String> nearLabel(Name n) {
+        List<Name> known = new ArrayList<>(inFile.keySet());
+        known.addAll(archivedByGym.computeIfAbsent(n.gym(), this::loadGym).keySet());
+        return known.stream()
+                .filter(k -> k.gym().equals(n.gym()) && k.setOn().equals(n.setOn()))
+                .map(Name::label)
+                .filter(l -> NearNames.near(n.label(), l))
+                .sorted()
+                .findFirst();
     }
 
     /** True when the archive already holds a route with this key. */

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
 import org.variset.imports.ProblemList;
+import org.variset.imports.table.ExampleRow;
 import org.variset.imports.table.TableKind;
 import org.variset.imports.table.TableRow;
 
@@ -47,6 +48,19 @@ final class CellReader {
         Object path = row.cells().get("@path");
         problems.add(row.file(), row.line(), path == null ? column : path + "." + column, message);
         ok = false;
+    }
+
+    /** The gym cell of a row; null, with a problem, when it is missing or is the template's example row. */
+    String gym() {
+        String gym = name("gym", true);
+        if (ExampleRow.is(gym)) {
+            problem(
+                    "gym",
+                    "this is the template's example row: delete it (your own rows go below the header, or in its "
+                            + "place)");
+            return null;
+        }
+        return gym;
     }
 
     /** The longest name or short text the archive keeps (its VARCHAR(255) columns). */

@@ -52,7 +52,7 @@ public final class RowParser {
     /** A route row, or null when it has problems. */
     public RouteRow route(TableRow row) {
         CellReader c = new CellReader(row, problems);
-        String gym = c.name("gym", true);
+        String gym = c.gym();
         String wall = c.name("wall", true);
         String label = c.name("route", true);
         LocalDate setOn = c.date("set_on", true);
@@ -114,7 +114,7 @@ public final class RowParser {
     /** A hold row, or null when it has problems. */
     public HoldRow hold(TableRow row) {
         CellReader c = new CellReader(row, problems);
-        String gym = c.name("gym", true);
+        String gym = c.gym();
         String wall = c.name("wall", false);
         String route = c.name("route", true);
         LocalDate setOn = c.date("set_on", true);
@@ -142,7 +142,7 @@ public final class RowParser {
     /** A wall row, or null when it has problems. */
     public WallRow wall(TableRow row) {
         CellReader c = new CellReader(row, problems);
-        String gym = c.name("gym", true);
+        String gym = c.gym();
         String wall = c.name("wall", true);
         WallDiscipline discipline = null;
         String d = c.text("discipline");

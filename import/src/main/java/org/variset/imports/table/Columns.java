@@ -34,7 +34,7 @@ public final class Columns {
      * Optimal string alignment distance: the Levenshtein distance (Levenshtein 1966) with a transposition of two
      * adjacent characters as one edit (Damerau 1964).
      */
-    static int distance(String a, String b) {
+    public static int distance(String a, String b) {
         int[][] d = new int[a.length() + 1][b.length() + 1];
         for (int i = 0; i <= a.length(); i++) {
             d[i][0] = i;

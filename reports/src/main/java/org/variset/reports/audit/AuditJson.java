@@ -12,6 +12,7 @@ import org.variset.archive.read.RouteRecord;
 import org.variset.reports.catalogue.Figure;
 import org.variset.reports.catalogue.Figures;
 import org.variset.reports.figures.FiguresJson;
+import org.variset.reports.scoring.repetition.RepeatEvidence;
 import org.variset.reports.scoring.repetition.RepetitionFigures;
 
 /**
@@ -83,6 +84,7 @@ public final class AuditJson {
         o.put("window_routes", s.windowRoutes());
         pairs(o.putArray("near_repeats"), r == null ? List.of() : r.nearRepeats());
         pairs(o.putArray("internal_repeats"), r == null ? List.of() : r.internalRepeats());
+        pairs(o.putArray("similar_not_repeats"), r == null ? List.of() : r.setAside());
         ArrayNode thin = o.putArray("not_enough_detail");
         if (r != null) {
             r.notEnoughDetail().forEach(thin::add);
@@ -99,7 +101,22 @@ public final class AuditJson {
                     .put("union_count", p.similarity().union());
             ArrayNode shared = x.putArray("shared");
             p.similarity().sharedFeatures().forEach(shared::add);
+            evidence(x.putObject("evidence"), p.evidence());
         }
+    }
+
+    private static void evidence(ObjectNode o, RepeatEvidence e) {
+        o.put("repeat", e.isRepeat())
+                .put("words", e.words())
+                .put("shapes_decide", e.shapesDecide())
+                .put("shared_shapes", e.sharedShapes())
+                .put("placed", e.placed())
+                .put("shared_in_place", e.sharedInPlace())
+                .put("shift_m", e.shiftM())
+                .put("same_grade_band", e.sameGradeBand())
+                .put("same_wall", e.sameWall());
+        ArrayNode moves = o.putArray("common_moves");
+        e.commonMoves().forEach(moves::add);
     }
 
     private static void context(ObjectNode o, Audit a) {

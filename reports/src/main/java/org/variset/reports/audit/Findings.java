@@ -70,6 +70,7 @@ final class Findings {
         profiles();
         reach();
         GradeFindings.add(audit, out);
+        GradeFindings.holes(audit, out);
         SetterHabits.add(audit, out);
         changes();
     }

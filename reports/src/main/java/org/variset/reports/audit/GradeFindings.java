@@ -49,7 +49,12 @@ final class GradeFindings {
             String example = isExample ? " (against the example pyramid)" : "";
             Remedy remedy = isExample ? setTarget : Remedy.NONE;
             long inside = GradeGaps.routesInTarget(g);
-            List<String> gaps = GradeGaps.notable(g);
+            List<GradeGaps.Run> runs = GradeGaps.runs(g);
+            ranges(audit, d, g, weight, example, remedy, out);
+            List<String> inRuns = runs.stream().flatMap(r -> r.bands().stream()).toList();
+            List<String> gaps = GradeGaps.notable(g).stream()
+                    .filter(b -> !inRuns.contains(b))
+                    .toList();
             if (!gaps.isEmpty()) {
                 List<String> wanted = new ArrayList<>();
                 gaps.forEach(b -> wanted.add(FigureFormat.round(g.target().get(b) * inside, 1)));
@@ -70,6 +75,56 @@ final class GradeFindings {
                                 + " bands from the "
                                 + "target" + skew(g) + (gaps.isEmpty() ? example : "") + ".",
                         gaps.isEmpty() ? remedy : Remedy.NONE));
+            }
+        }
+    }
+
+    /** "No boulder from V2 to V5 is up in the gym on DAY, a range where the target expects 6.4 of its 30 routes." */
+    private static void ranges(
+            Audit audit,
+            Discipline d,
+            GradeFigures g,
+            double weight,
+            String example,
+            Remedy remedy,
+            List<Finding> out) {
+        long inside = GradeGaps.routesInTarget(g);
+        for (GradeGaps.Run run : GradeGaps.runs(g)) {
+            out.add(new Finding(
+                    "grade_range_gap",
+                    weight + 2.5 + run.targetShare(),
+                    "No " + (d == Discipline.BOULDER ? "boulder" : "rope route") + " " + run.words()
+                            + " is up in the gym on " + audit.subject().on() + ", a range where the target "
+                            + "expects " + FigureFormat.round(run.expectedRoutes(), 1) + " of its " + inside
+                            + " routes" + example + ".",
+                    remedy));
+        }
+    }
+
+    /** A reset of at least this many routes with a hole in its own range is worth a sentence (heuristic of ours). */
+    private static final int HOLE_ROUTES = 4;
+
+    /** Holes in a reset's own grades: bands the target expects, missing between its easiest and hardest routes. */
+    static void holes(Audit audit, List<Finding> out) {
+        if (audit.subject().kind() != Subject.Kind.RESET
+                || audit.audited().routes().size() < HOLE_ROUTES) {
+            return;
+        }
+        for (Map.Entry<Discipline, GradeFigures> e :
+                audit.audited().figures().grades().entrySet()) {
+            GradeFigures g = e.getValue();
+            List<String> bands =
+                    g.target() == null ? List.of() : List.copyOf(g.target().keySet());
+            List<String> present = bands.stream()
+                    .filter(b -> g.histogram().getOrDefault(b, 0L) > 0)
+                    .toList();
+            for (GradeGaps.Run hole : GradeGaps.holes(g)) {
+                out.add(new Finding(
+                        "grade_hole",
+                        7.4 + hole.targetShare(),
+                        "This reset has no " + (e.getKey() == Discipline.BOULDER ? "boulder" : "rope route") + " "
+                                + hole.words() + ", between its " + present.get(0) + " and its "
+                                + present.get(present.size() - 1) + " routes."));
             }
         }
     }

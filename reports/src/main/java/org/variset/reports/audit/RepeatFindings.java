@@ -3,7 +3,6 @@ package org.variset.reports.audit;
 import java.util.ArrayList;
 import java.util.List;
 import org.variset.reports.catalogue.Figures;
-import org.variset.reports.figures.FeatureText;
 import org.variset.reports.scoring.repetition.RepetitionFigures;
 
 /** Sentences for near-repeats: against the look-back window, then inside the set itself. */
@@ -24,7 +23,7 @@ final class RepeatFindings {
                     "near_repeat",
                     9 - i * 0.01,
                     p.route() + " repeats " + p.other() + ": "
-                            + FeatureText.shared(p.similarity().sharedFeatures()) + " (Jaccard "
+                            + p.evidence().words() + " (Jaccard "
                             + Figures.JACCARD.text(p.similarity().jaccard()) + ")."));
         }
         if (near.size() > SHOWN) {
@@ -42,7 +41,7 @@ final class RepeatFindings {
                     8.5 - i * 0.01,
                     p.route() + " and " + p.other()
                             + " are near-repeats of each other in this set: "
-                            + FeatureText.shared(p.similarity().sharedFeatures()) + " (Jaccard "
+                            + p.evidence().words() + " (Jaccard "
                             + Figures.JACCARD.text(p.similarity().jaccard()) + ")."));
         }
     }

@@ -7,6 +7,7 @@ import java.util.Set;
 import org.variset.archive.grade.Discipline;
 import org.variset.archive.read.RouteRecord;
 import org.variset.archive.settings.GymSettings;
+import org.variset.reports.figures.GradeGaps;
 import org.variset.reports.figures.RouteFeatureMapper;
 import org.variset.reports.figures.SetFigures;
 import org.variset.reports.scoring.grades.GradeFigures;
@@ -51,16 +52,26 @@ public final class SetResults {
         return new SetResult(name, routes, f, rep, windowRoutes, reuse, score, why);
     }
 
-    /** A standing set or a setter's routes: repeats inside the set, no novelty (nothing before it to compare). */
+    /**
+     * A standing set or a setter's routes: repeats inside the set, no novelty (nothing before it to compare).
+     *
+     * @param gymStanding the gym's standing set, whose grades the score reads; null to leave the grades part out (a
+     *     wall's own score in a trend, which then moves only with the wall's own routes)
+     */
     public static SetResult standing(
             String name, List<RouteRecord> routes, SetFigures f, SetFigures gymStanding, GymSettings settings) {
         RouteFeatureMapper m = new RouteFeatureMapper(settings);
         RepetitionFigures inside = Repetition.of(m.features(routes), List.of(), settings.nearRepeatThreshold());
-        RepetitionFigures rep =
-                new RepetitionFigures(List.of(), inside.internalRepeats(), null, inside.notEnoughDetail());
+        RepetitionFigures rep = new RepetitionFigures(
+                List.of(), inside.internalRepeats(), inside.setAside(), null, inside.notEnoughDetail());
         Map<String, String> why = new LinkedHashMap<>();
         why.put("novelty", "novelty compares a reset with the routes set before it; this set is not one reset");
         why.put("hold_reuse_rate", "hold reuse compares a reset with the wall's previous resets");
+        if (gymStanding == null) {
+            why.put(
+                    "grades",
+                    "the grades part is the gym's (its routes up against the target), left out of a wall's own score");
+        }
         CompositeScore score = score(f, gymStanding, mainDiscipline(routes), null, settings, why);
         return new SetResult(name, routes, f, rep, 0, null, score, why);
     }
@@ -88,8 +99,12 @@ public final class SetResults {
         parts.put("grip", f.grip().sectorEntropy());
         parts.put("holds", cap(f.holds().coverage()));
         parts.put("moves", cap(f.moves().coverage()));
-        GradeFigures g = main == null ? null : gradesFrom.grades().get(main);
-        parts.put("grades", CompositeScore.gradesPart(g == null ? null : g.emdToTarget()));
+        GradeFigures g =
+                main == null || gradesFrom == null ? null : gradesFrom.grades().get(main);
+        GradeFigures own = main == null ? null : f.grades().get(main);
+        parts.put(
+                "grades",
+                g == null ? null : CompositeScore.gradesPart(g.emdToTarget(), GradeGaps.missingShare(g, own)));
         parts.put("novelty", novelty);
         CompositeScore s = CompositeScore.of(parts, settings.scoreWeights());
         if (s.score() == null) {

@@ -3,6 +3,7 @@ package org.variset.reports.audit;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Function;
 import org.variset.archive.read.HoldRecord;
 import org.variset.archive.read.RouteRecord;
 import org.variset.reports.format.FigureFormat;
@@ -10,9 +11,11 @@ import org.variset.reports.scoring.grip.CircularStatistics;
 import org.variset.reports.scoring.repetition.RouteFeatures;
 
 /**
- * A setter's habits against the other setters of the same period: the hold type and direction (among hand grips)
- * and the move (among routes) whose share is furthest above the others'. A habit is worth a sentence when the
- * setter's share is at least 20% and 15 points above the others' (heuristics of ours).
+ * A setter's habits against the other setters of the same period, at the levels a setter thinks in: the hold type of
+ * their hand holds, the direction their hand grips face, the moves their routes ask for, and only then a type facing a
+ * direction. Foot holds are left out: they say nothing of a setter's hands. The level with the largest lead is the
+ * habit named (a simpler level first when two lead alike). A habit is worth a sentence when the setter's share is at
+ * least 20% and 15 points above the others' (heuristics of ours).
  */
 final class SetterHabits {
     private static final double MIN_SHARE = 0.2;
@@ -20,25 +23,58 @@ final class SetterHabits {
 
     private SetterHabits() {}
 
+    /** One level of habit: how its shares are counted, and how its sentence reads. */
+    private record Level(Function<List<RouteRecord>, Map<String, Double>> shares, Sentence sentence) {}
+
     static void add(Audit audit, List<Finding> out) {
         if (audit.subject().kind() != Subject.Kind.SETTER || audit.reference() == null) {
             return;
         }
         String who = audit.subject().setter();
-        habit(
-                gripShares(audit.audited().routes()),
-                gripShares(audit.reference().routes()),
-                8.5,
-                out,
-                (key, mine, theirs) -> mine + " of " + who + "'s hand grips are " + describeGrip(key) + " (" + key
-                        + "), against " + theirs + " for the other setters in the same period.");
-        habit(
-                moveShares(audit.audited().routes()),
-                moveShares(audit.reference().routes()),
-                7.5,
-                out,
-                (key, mine, theirs) -> mine + " of " + who + "'s routes ask for a " + key + ", against " + theirs
-                        + " of the other setters' routes.");
+        List<Level> levels = List.of(
+                new Level(
+                        SetterHabits::typeShares,
+                        (key, mine, theirs) -> mine + " of " + who + "'s hand holds are " + key + "s, against " + theirs
+                                + " for the other setters in the same period."),
+                new Level(
+                        SetterHabits::directionShares,
+                        (key, mine, theirs) -> mine + " of " + who
+                                + "'s hand grips face " + key + ", against " + theirs
+                                + " for the other setters in the same "
+                                + "period."),
+                new Level(
+                        SetterHabits::moveShares,
+                        (key, mine, theirs) -> mine + " of " + who + "'s routes ask for a " + key + ", against "
+                                + theirs + " of the other setters' routes."),
+                new Level(
+                        SetterHabits::gripShares,
+                        (key, mine, theirs) -> mine + " of " + who + "'s hand grips are "
+                                + describeGrip(key) + " (" + key + "), against " + theirs
+                                + " for the other setters in the "
+                                + "same period."));
+        Finding best = null;
+        double bestLead = 0;
+        for (Level l : levels) {
+            Map<String, Double> mine = l.shares().apply(audit.audited().routes());
+            Map<String, Double> theirs = l.shares().apply(audit.reference().routes());
+            for (Map.Entry<String, Double> e : mine.entrySet()) {
+                double lead = e.getValue() - theirs.getOrDefault(e.getKey(), 0.0);
+                if (e.getValue() >= MIN_SHARE && lead >= MIN_LEAD && lead > bestLead + 1e-9) {
+                    bestLead = lead;
+                    best = new Finding(
+                            "setter_habit",
+                            8.5 + lead,
+                            l.sentence()
+                                    .of(
+                                            e.getKey(),
+                                            FigureFormat.percent(e.getValue()),
+                                            FigureFormat.percent(theirs.getOrDefault(e.getKey(), 0.0))));
+                }
+            }
+        }
+        if (best != null) {
+            out.add(best);
+        }
     }
 
     @FunctionalInterface
@@ -46,26 +82,40 @@ final class SetterHabits {
         String of(String key, String mine, String theirs);
     }
 
-    private static void habit(
-            Map<String, Double> mine, Map<String, Double> theirs, double weight, List<Finding> out, Sentence sentence) {
-        String best = null;
-        double lead = 0;
-        for (Map.Entry<String, Double> e : mine.entrySet()) {
-            double d = e.getValue() - theirs.getOrDefault(e.getKey(), 0.0);
-            if (e.getValue() >= MIN_SHARE && d >= MIN_LEAD && d > lead) {
-                best = e.getKey();
-                lead = d;
+    /** Share of hand-role placements per hold type. */
+    static Map<String, Double> typeShares(List<RouteRecord> routes) {
+        Map<String, Double> counts = new LinkedHashMap<>();
+        int n = 0;
+        for (RouteRecord r : routes) {
+            for (HoldRecord h : r.holds()) {
+                if (h.isHand()) {
+                    counts.merge(h.type(), 1.0, Double::sum);
+                    n++;
+                }
             }
         }
-        if (best != null) {
-            out.add(new Finding(
-                    "setter_habit",
-                    weight + lead,
-                    sentence.of(
-                            best,
-                            FigureFormat.percent(mine.get(best)),
-                            FigureFormat.percent(theirs.getOrDefault(best, 0.0)))));
+        int total = n;
+        counts.replaceAll((k, v) -> v / total);
+        return counts;
+    }
+
+    /** Share of directed hand grips per direction word ({@code up}, {@code down-left}). */
+    static Map<String, Double> directionShares(List<RouteRecord> routes) {
+        Map<String, Double> counts = new LinkedHashMap<>();
+        int n = 0;
+        for (RouteRecord r : routes) {
+            for (HoldRecord h : r.holds()) {
+                if (h.isHand()) {
+                    for (double g : h.grips()) {
+                        counts.merge(CircularStatistics.sectorWord(CircularStatistics.sector(g)), 1.0, Double::sum);
+                        n++;
+                    }
+                }
+            }
         }
+        int total = n;
+        counts.replaceAll((k, v) -> v / total);
+        return counts;
     }
 
     /** Share of directed hand grips per {@code type@direction}. */

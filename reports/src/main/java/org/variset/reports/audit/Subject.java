@@ -32,12 +32,17 @@ public record Subject(Kind kind, String gym, String wall, String reset, LocalDat
         }
     }
 
-    /** A title for the audit: {@code Reset Cave 2026-03-02}, {@code Cave, standing on 2026-03-02}, ... */
+    /**
+     * A title for the audit, without the gym (the renderers add it once): {@code Reset Cave 2026-03-02}, or with a
+     * label of the gym's own {@code Reset Spring A (Cave, 2026-03-02)}; {@code Cave, routes up on 2026-03-02};
+     * {@code Routes up on 2026-03-02} for the whole gym ...
+     */
     public String title() {
         return switch (kind) {
-            case RESET -> "Reset " + reset + " (" + wall + ", " + on + ")";
+            case RESET ->
+                (wall + " " + on).equals(reset) ? "Reset " + reset : "Reset " + reset + " (" + wall + ", " + on + ")";
             case WALL_STANDING -> wall + ", routes up on " + on;
-            case GYM_STANDING -> gym + ", routes up on " + on;
+            case GYM_STANDING -> "Routes up on " + on;
             case SETTER -> setter + ", routes set " + from + " to " + on;
         };
     }

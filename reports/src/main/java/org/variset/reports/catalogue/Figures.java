@@ -177,6 +177,18 @@ public final class Figures {
     /** Routes outside the target's bands (§3). */
     public static final Figure GRADES_OUTSIDE =
             add("grades.outside_target", "routes outside the target's bands", "outside", Unit.COUNT, 0, NEITHER, S3);
+    /** A run of missing bands: the target's share in it (§3). */
+    public static final Figure GAP_RUN_SHARE =
+            add("grades.gap_runs.target_share", "target share of a missing range", "missing", Unit.SHARE, 2, LOWER, S3);
+    /** A run of missing bands: the routes the target expects in it (§3). */
+    public static final Figure GAP_RUN_ROUTES = add(
+            "grades.gap_runs.expected_routes",
+            "routes the target expects in a missing range",
+            "expected",
+            Unit.NUMBER,
+            1,
+            LOWER,
+            S3);
 
     /** Spread of difficulty profiles (§4). */
     public static final Figure PROFILE_SPREAD = add(
@@ -212,6 +224,25 @@ public final class Figures {
     /** The Jaccard index of a pair of routes (§5). */
     public static final Figure JACCARD =
             add("repetition.jaccard", "Jaccard index", "jaccard", Unit.NUMBER, 3, NEITHER, "Jaccard 1912 (" + S5 + ")");
+
+    /** Hold shapes two routes share, by hold_ref (§5, the evidence of a repeat). */
+    public static final Figure SHARED_SHAPES =
+            add("repetition.evidence.shared_shapes", "hold shapes shared", "shapes", Unit.COUNT, 0, NEITHER, S5);
+    /** Of those, the ones not set apart by their places (§5). */
+    public static final Figure SHAPES_IN_PLACE = add(
+            "repetition.evidence.shared_in_place",
+            "hold shapes shared in the same place",
+            "in place",
+            Unit.COUNT,
+            0,
+            NEITHER,
+            S5);
+    /** Shared shapes placed on both routes (§5). */
+    public static final Figure SHAPES_PLACED =
+            add("repetition.evidence.placed", "shared shapes placed on both", "placed", Unit.COUNT, 0, NEITHER, S5);
+    /** The shift between two routes' shared shapes (§5). */
+    public static final Figure SHAPE_SHIFT = add(
+            "repetition.evidence.shift_m", "shift between the shared shapes", "shift (m)", Unit.METRES, 2, NEITHER, S5);
 
     /** Routes with a full line (three hand holds or more, all placed) (§6). */
     public static final Figure LINE_ROUTES =

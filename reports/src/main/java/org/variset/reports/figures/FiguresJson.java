@@ -98,6 +98,14 @@ public final class FiguresJson {
                 .put("chi_square_reliable", g.chiSquareReliable());
         ArrayNode gaps = o.putArray("gaps");
         g.gaps().forEach(gaps::add);
+        ArrayNode runs = o.putArray("gap_runs");
+        for (GradeGaps.Run r : GradeGaps.runs(g)) {
+            ArrayNode bands = runs.addObject()
+                    .put("target_share", r.targetShare())
+                    .put("expected_routes", r.expectedRoutes())
+                    .putArray("bands");
+            r.bands().forEach(bands::add);
+        }
         g.undefined().forEach((k, why) -> undefined.put(block + "." + k, why));
     }
 

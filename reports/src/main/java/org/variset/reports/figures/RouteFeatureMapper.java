@@ -9,6 +9,7 @@ import org.variset.archive.read.HoldRecord;
 import org.variset.archive.read.RouteRecord;
 import org.variset.archive.settings.GymSettings;
 import org.variset.reports.scoring.grip.CircularStatistics;
+import org.variset.reports.scoring.repetition.RouteEvidence;
 import org.variset.reports.scoring.repetition.RouteFeatures;
 import org.variset.reports.scoring.variety.AngleBand;
 
@@ -40,7 +41,20 @@ public final class RouteFeatureMapper {
                 .bandOf(r.ircra())
                 .map(Band::label)
                 .orElse(null);
-        return RouteFeatures.of(r.name(), r.discipline().word(), hand, r.moves(), angle, grade);
+        List<RouteEvidence.Shape> shapes = new ArrayList<>();
+        for (HoldRecord h : r.handHoldsInOrder()) {
+            if (h.holdRef() != null) {
+                shapes.add(new RouteEvidence.Shape(h.holdRef(), h.xM(), h.yM()));
+            }
+        }
+        return RouteFeatures.of(
+                r.name(),
+                r.discipline().word(),
+                hand,
+                r.moves(),
+                angle,
+                grade,
+                new RouteEvidence(r.wall(), grade, r.moves(), shapes));
     }
 
     /** The features of every route. */

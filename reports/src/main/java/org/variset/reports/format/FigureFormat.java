@@ -28,4 +28,14 @@ public final class FigureFormat {
     public static String percent(Double share) {
         return share == null ? NONE : round(100 * share, 0) + "%";
     }
+
+    /** A count and its noun, singular for one: {@code 1 route}, {@code 3 routes}. */
+    public static String count(long n, String noun) {
+        return count(n, noun, noun + "s");
+    }
+
+    /** A count and its noun, with the plural given: {@code 1 hold without a direction}, {@code 2 holds ...}. */
+    public static String count(long n, String singular, String plural) {
+        return n + " " + (n == 1 ? singular : plural);
+    }
 }

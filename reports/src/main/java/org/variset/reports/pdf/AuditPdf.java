@@ -81,7 +81,7 @@ public final class AuditPdf {
     private void firstPage() {
         SetResult s = a.audited();
         doc.paragraph(
-                s.routes().size() + " routes · "
+                FigureFormat.count(s.routes().size(), "route") + " · "
                         + (a.subject().kind() == Subject.Kind.SETTER
                                 ? "set " + a.subject().period()
                                 : "on " + a.subject().on()),
@@ -157,7 +157,8 @@ public final class AuditPdf {
         List<Map<String, Double>> values = cols.stream().map(Headline::of).toList();
         List<String> header = new ArrayList<>();
         header.add("figure");
-        cols.forEach(c -> header.add(c.name() + " (" + c.routes().size() + " routes)"));
+        cols.forEach(
+                c -> header.add(c.name() + " (" + FigureFormat.count(c.routes().size(), "route") + ")"));
         List<List<String>> rows = new ArrayList<>();
         for (Figure k : Figures.HEADLINE) {
             List<String> row = new ArrayList<>();
@@ -221,18 +222,15 @@ public final class AuditPdf {
             if (mine == null) {
                 continue;
             }
-            doc.paragraph(d.word() + " routes of this set", PdfDoc.BODY, true, Palette.INK);
+            doc.caption(d.word() + " routes of this set", 160);
             grade(mine, d);
             GradeFigures ref = reference == null || reference == a.audited()
                     ? null
                     : reference.figures().grades().get(d);
             if (ref != null) {
-                doc.paragraph(
-                        d.word() + " routes of the " + reference.name() + " (what the score's grades part "
-                                + "measures)",
-                        PdfDoc.BODY,
-                        true,
-                        Palette.INK);
+                doc.caption(
+                        d.word() + " routes of the " + reference.name() + " (what the score's grades part measures)",
+                        160);
                 grade(ref, d);
             }
         }
@@ -269,7 +267,10 @@ public final class AuditPdf {
                         ? " (too few routes for the test to be reliable: Cochran's rule)"
                         : "")
                 + (g.gaps().isEmpty() ? "" : "; no route in " + String.join(", ", g.gaps()))
-                + (g.outsideTarget() > 0 ? "; " + g.outsideTarget() + " routes outside the target's bands" : "") + "."
+                + (g.outsideTarget() > 0
+                        ? "; " + FigureFormat.count(g.outsideTarget(), "route") + " outside the target's bands"
+                        : "")
+                + "."
                 + (example
                         ? " The target is an example pyramid (common practice), not the gym's own: a heuristic to "
                                 + "replace: "
@@ -310,12 +311,24 @@ public final class AuditPdf {
         }
         doc.paragraph("Novelty " + Figures.NOVELTY.text(r.novelty())
                 + (r.novelty() == null ? " (" + s.undefined().getOrDefault("novelty", "") + ")" : "") + "; hold reuse "
-                + FigureFormat.percent(s.holdReuseRate()) + "; compared with " + s.windowRoutes()
-                + " routes of the look-back "
+                + FigureFormat.percent(s.holdReuseRate()) + "; compared with "
+                + FigureFormat.count(s.windowRoutes(), "route") + " of the look-back "
                 + "window; near-repeat threshold "
                 + a.settings().nearRepeatThreshold().toPlainString() + ".");
         pairs("Near-repeats of earlier routes", r.nearRepeats());
         pairs("Near-repeats inside this set", r.internalRepeats());
+        if (!r.setAside().isEmpty()) {
+            doc.paragraph(
+                    (r.setAside().size() == 1 ? "1 pair looks" : r.setAside().size() + " pairs look")
+                            + " alike by hold types, directions and moves but "
+                            + (r.setAside().size() == 1 ? "is" : "are")
+                            + " set aside: different hold shapes or places, "
+                            + "or another grade band and sequence (listed in the JSON).");
+        }
+        if (!r.notEnoughDetail().isEmpty()) {
+            doc.paragraph("Too little detail to compare (fewer than four hold and move features): "
+                    + FeatureText.list(r.notEnoughDetail(), 8) + ".");
+        }
     }
 
     private void pairs(String title, List<RepetitionFigures.Pair> pairs) {
@@ -329,9 +342,9 @@ public final class AuditPdf {
                     p.route(),
                     p.other(),
                     Figures.JACCARD.text(p.similarity().jaccard()),
-                    FeatureText.shared(p.similarity().sharedFeatures())));
+                    p.evidence().words()));
         }
-        doc.table(List.of("route", "repeats", "Jaccard", "shared"), rows, new float[] {2.2f, 2.2f, 0.8f, 4.5f});
+        doc.table(List.of("route", "repeats", "Jaccard", "evidence"), rows, new float[] {2.2f, 2.2f, 0.8f, 4.5f});
     }
 
     private void lines() {
@@ -339,7 +352,7 @@ public final class AuditPdf {
         doc.heading("Route lines and reach", false);
         doc.paragraph("Geometric index of entropy (0 straight, larger wandering): mean "
                 + Figures.GIE_MEAN.text(f.line().gieMean()) + " over "
-                + f.line().withGie() + " routes. A span longer than "
+                + FigureFormat.count(f.line().withGie(), "route") + ". A span longer than "
                 + Figures.REACH_FACTOR.text(f.line().reachK()) + " × "
                 + Figures.REACH_HEIGHT.text(f.line().reachHeightM())
                 + " m is flagged: a heuristic (arm span is close to height in most adults), not a measurement of any "
@@ -365,20 +378,30 @@ public final class AuditPdf {
             int perRow = (int) (doc.width() / cell);
             for (int i = 0; i < drawn.size(); i += perRow) {
                 List<RouteLineFigures> row = drawn.subList(i, Math.min(drawn.size(), i + perRow));
-                doc.drawing(doc.width(), cell + 12, (g, size) -> {
+                // A tall route (a rope route, 15 m of wall for 2 m across) gets a taller cell, so its holds do not
+                // crowd into a square: up to two and a half cells high.
+                float high = (float) Math.min(
+                        2.5 * cell,
+                        Math.max(
+                                cell,
+                                row.stream()
+                                        .mapToDouble(r -> cell * Drawings.aspect(r.points()))
+                                        .max()
+                                        .orElse(cell)));
+                doc.drawing(doc.width(), high + 12, (g, size) -> {
                     for (int k = 0; k < row.size(); k++) {
                         java.awt.Graphics2D sub = (java.awt.Graphics2D) g.create();
                         sub.translate(k * cell, 0);
                         Drawings.line(
                                 sub,
                                 cell - 8,
-                                cell - 4,
+                                high - 4,
                                 row.get(k).points(),
                                 row.get(k).longSpans(),
                                 doc.fonts());
                         sub.setColor(Palette.INK);
                         sub.setFont(doc.fonts().awt(6.5f, false));
-                        sub.drawString(row.get(k).route(), 0, cell + 8);
+                        sub.drawString(row.get(k).route(), 0, high + 8);
                         sub.dispose();
                     }
                 });

@@ -69,7 +69,7 @@ final class Charts {
             data.addSeries(s);
         });
         DateAxis x = new DateAxis();
-        x.setDateFormatOverride(new java.text.SimpleDateFormat("MMM yy", java.util.Locale.ENGLISH));
+        x.setDateFormatOverride(new java.text.SimpleDateFormat("MMM yyyy", java.util.Locale.ENGLISH));
         long months = series.values().stream()
                 .flatMap(m -> m.keySet().stream())
                 .distinct()

@@ -83,9 +83,21 @@ final class Drawings {
         }
     }
 
+    /** How much taller than wide a route's sketch is, margins included (1 for a square). */
+    static double aspect(List<Point> points) {
+        double w = points.stream().mapToDouble(Point::x).max().orElse(1)
+                - points.stream().mapToDouble(Point::x).min().orElse(0)
+                + 0.6;
+        double h = points.stream().mapToDouble(Point::y).max().orElse(1)
+                - points.stream().mapToDouble(Point::y).min().orElse(0)
+                + 0.6;
+        return h / w;
+    }
+
     /**
      * A route's hand holds on the wall, in climbing order, scaled to fit: numbered circles joined by the line;
-     * spans flagged as long are dashed and marked "long".
+     * spans flagged as long are dashed and marked "long". Circles shrink when holds lie close on the page (a long
+     * rope route in a small cell), and their numbers go when the circles get too small to hold them.
      */
     static void line(Graphics2D g, float w, float h, List<Point> points, List<Integer> longSpans, PdfFonts f) {
         double minX = points.stream().mapToDouble(Point::x).min().orElse(0) - 0.3;
@@ -118,17 +130,31 @@ final class Drawings {
                         py.applyAsDouble((a.y() + b.y()) / 2));
             }
         }
-        g.setFont(f.awt(5.5f, false));
+        double closest = Double.MAX_VALUE;
+        for (int i = 1; i < points.size(); i++) {
+            closest = Math.min(
+                    closest,
+                    scale
+                            * Math.hypot(
+                                    points.get(i).x() - points.get(i - 1).x(),
+                                    points.get(i).y() - points.get(i - 1).y()));
+        }
+        double r = Math.max(2, Math.min(4, closest / 2.2));
+        boolean numbered = r >= 3;
+        g.setFont(f.awt(r >= 3.8 ? 5.5f : 4.5f, false));
         for (int i = 0; i < points.size(); i++) {
             double x = px.applyAsDouble(points.get(i).x());
             double y = py.applyAsDouble(points.get(i).y());
             g.setColor(Color.WHITE);
-            g.fill(new Ellipse2D.Double(x - 4, y - 4, 8, 8));
+            g.fill(new Ellipse2D.Double(x - r, y - r, 2 * r, 2 * r));
             g.setColor(Palette.BLUE);
-            g.draw(new Ellipse2D.Double(x - 4, y - 4, 8, 8));
-            String n = Integer.toString(i + 1);
-            g.setColor(Palette.INK);
-            g.drawString(n, (float) (x - g.getFontMetrics().stringWidth(n) / 2.0), (float) (y + 2));
+            g.draw(new Ellipse2D.Double(x - r, y - r, 2 * r, 2 * r));
+            // Too small for its number: the first and last are still numbered, so the line reads from its start.
+            if (numbered || i == 0 || i == points.size() - 1) {
+                String n = Integer.toString(i + 1);
+                g.setColor(Palette.INK);
+                g.drawString(n, (float) (x - g.getFontMetrics().stringWidth(n) / 2.0), (float) (y + r / 2));
+            }
         }
     }
 }

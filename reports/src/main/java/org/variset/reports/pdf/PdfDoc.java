@@ -31,7 +31,7 @@ final class PdfDoc implements AutoCloseable {
     static final float BODY = 9f;
     private static final float MARGIN = 42f;
     /** Points of room a heading needs below it (a chart's height), else it starts the next page. */
-    private static final float KEEP_WITH_HEADING = 170f;
+    private static final float KEEP_WITH_HEADING = 190f;
 
     private final Document document;
     private final PdfWriter writer;
@@ -65,6 +65,17 @@ final class PdfDoc implements AutoCloseable {
         p.setSpacingBefore(10);
         p.setSpacingAfter(4);
         add(p);
+    }
+
+    /**
+     * A bold caption kept with what follows it: on the next page when less than {@code below} points (the height of
+     * the chart or table under it) and a line are left.
+     */
+    void caption(String text, float below) {
+        if (writer.getVerticalPosition(true) - document.bottom() < below + 2 * BODY * 1.3f + 6) {
+            document.newPage();
+        }
+        paragraph(text, BODY, true, Palette.INK);
     }
 
     /** Body text. */

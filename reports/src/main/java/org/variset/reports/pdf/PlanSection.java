@@ -14,7 +14,7 @@ final class PlanSection {
 
     static void write(PdfDoc doc, ResetPlan p) {
         doc.heading(
-                "Next reset of " + p.wall() + ": " + p.routes() + " "
+                "Next reset of " + p.wall() + ", due " + p.on() + ": " + p.routes() + " "
                         + p.discipline().word() + " routes",
                 true);
         if (p.grades() == null) {
@@ -41,17 +41,22 @@ final class PlanSection {
                     + (gs.targetIsDefault() ? "; the target is the example pyramid" : "") + ".");
         }
         doc.paragraph(
-                "Bring back (share now below the last twelve months by " + FigureFormat.percent(p.margin())
-                        + " or more): " + (p.gaps().isEmpty() ? "nothing." : ""),
+                "Bring back (the share now, on "
+                        + String.join(", ", p.baseline().walls()) + ", at least "
+                        + FigureFormat.percent(p.margin()) + " below the median of their "
+                        + p.baseline().resets()
+                        + (p.baseline().resets() == 1 ? " reset" : " resets") + " of the last twelve months): "
+                        + (p.gaps().isEmpty() ? "nothing." : ""),
                 PdfDoc.BODY,
                 true,
                 Palette.INK);
         doc.bullets(p.gaps().stream().limit(12).map(PlanSection::gap).toList());
-        doc.paragraph("Hold shapes to rest (used on " + p.wall() + " in its last three resets): "
+        doc.paragraph("Hold shapes to rest (the hand-hold shapes " + p.wall() + " used most in its last three "
+                + "resets: " + p.shapesToRest().size() + " of " + p.shapesOnWall() + ", by resets then placements; "
+                + "foot holds left out): "
                 + (p.shapesToRest().isEmpty()
                         ? "none recorded."
                         : p.shapesToRest().entrySet().stream()
-                                        .limit(40)
                                         .map(e -> e.getKey() + " (" + e.getValue() + ")")
                                         .collect(Collectors.joining(", "))
                                 + "."));
@@ -64,7 +69,7 @@ final class PlanSection {
             case "moves" -> g.category() + " (move)";
             default -> g.category() + " (style)";
         };
-        return what + ": " + FigureFormat.percent(g.standingShare()) + " now, " + FigureFormat.percent(g.yearShare())
-                + " over the last twelve months";
+        return what + ": " + FigureFormat.percent(g.standingShare()) + " now, "
+                + FigureFormat.percent(g.baselineShare()) + " in the median reset";
     }
 }

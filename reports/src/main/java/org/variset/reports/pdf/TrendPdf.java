@@ -72,11 +72,7 @@ public final class TrendPdf {
                         .filter(p -> p.scope().equals("gym"))
                         .forEach(p -> line.put(p.day(), p.figures().get(Figures.SCORE.key())));
             }
-            doc.paragraph(
-                    "Month-end score of each gym's routes up (a heuristic, without novelty here)",
-                    PdfDoc.BODY,
-                    true,
-                    Palette.INK);
+            doc.caption("Month-end score of each gym's routes up (a heuristic, without novelty here)", 200);
             doc.chart(Charts.lines(doc.fonts(), "score", score), doc.width(), 200);
             doc.safety();
             for (Trend t : trends) {
@@ -186,19 +182,13 @@ public final class TrendPdf {
                         .put(p.day(), p.figures().get(Figures.GRADES_DISTANCE.key()));
             }
         }
-        doc.paragraph(
-                "Score of the whole gym and of each wall (a heuristic, without novelty here)",
-                PdfDoc.BODY,
-                true,
-                Palette.INK);
+        doc.caption("Score of the whole gym and of each wall (a heuristic, without novelty here)", 215);
+        doc.paragraph("A wall's line is its own score: it leaves out the grades part, which is the gym's (its routes "
+                + "up against the target), so it moves only when the wall's own routes change.");
         doc.chart(Charts.lines(doc.fonts(), "score", score), doc.width(), 190);
-        doc.paragraph("Variety of the whole gym (0 to 1)", PdfDoc.BODY, true, Palette.INK);
+        doc.caption("Variety of the whole gym (0 to 1)", 170);
         doc.chart(Charts.lines(doc.fonts(), "value", variety), doc.width(), 170);
-        doc.paragraph(
-                "Grades of the whole gym: distance to the target in bands (0 on target)",
-                PdfDoc.BODY,
-                true,
-                Palette.INK);
+        doc.caption("Grades of the whole gym: distance to the target in bands (0 on target)", 130);
         doc.chart(Charts.lines(doc.fonts(), "bands", grades), doc.width(), 130);
         List<String> gaps = t.gymGaps().stream()
                 .map(p -> p.day() + ": no " + p.gapWords(", "))
@@ -215,7 +205,7 @@ public final class TrendPdf {
         doc.heading("Grades of the routes set in the period", true);
         for (Map.Entry<Discipline, GradeFigures> e : t.grades().entrySet()) {
             GradeFigures g = e.getValue();
-            doc.paragraph(e.getKey().word() + " routes", PdfDoc.BODY, true, Palette.INK);
+            doc.caption(e.getKey().word() + " routes", 130);
             if (g.target() == null) {
                 Map<String, Long> h = new LinkedHashMap<>();
                 g.histogram().forEach((k, v) -> {

@@ -41,8 +41,11 @@ public final class PlanJson {
                         .put("field", g.field())
                         .put("category", g.category())
                         .put("standing_share", g.standingShare())
-                        .put("year_share", g.yearShare()));
+                        .put("baseline_share", g.baselineShare()));
         o.put("margin", p.margin());
+        ObjectNode baseline = o.putObject("baseline").put("resets", p.baseline().resets());
+        p.baseline().walls().forEach(baseline.putArray("walls")::add);
+        o.put("shapes_on_wall", p.shapesOnWall());
         ObjectNode shapes = o.putObject("shapes_to_rest");
         p.shapesToRest().forEach(shapes::put);
         ObjectNode undefined = o.putObject("undefined");

@@ -17,7 +17,10 @@ import org.variset.archive.problem.Remedy;
  * @param grades the proposed grade slots, or null without a target (see {@code undefined})
  * @param gaps categories whose standing share is below their twelve-month share by the margin
  * @param margin the margin, in share points
- * @param shapesToRest hold shapes (hold_ref) used on the wall in its last three resets, with how often
+ * @param baseline what the gaps are measured against
+ * @param shapesToRest the hand-hold shapes (hold_ref) the wall used most in its last three resets, with how many
+ *     placements, at most twelve, most used first
+ * @param shapesOnWall how many hand-hold shapes those resets used in all
  * @param undefined for each part that could not be planned, why
  */
 public record ResetPlan(
@@ -29,13 +32,24 @@ public record ResetPlan(
         GradeSlots grades,
         List<VarietyGaps.Gap> gaps,
         double margin,
+        Baseline baseline,
         Map<String, Long> shapesToRest,
+        int shapesOnWall,
         Map<String, String> undefined) {
 
     /** What the gym can do for a fuller plan: set a grade target when there is none for the discipline. */
     public Remedy remedy() {
         return grades == null ? Remedy.of(Remedy.Kind.SET_TARGET, "discipline", discipline.word()) : Remedy.NONE;
     }
+
+    /**
+     * What the variety gaps are measured against: the median share over the last twelve months' resets of walls
+     * like this one.
+     *
+     * @param walls the walls (this one, and those of a similar angle)
+     * @param resets how many resets of theirs the medians are over
+     */
+    public record Baseline(List<String> walls, int resets) {}
 
     /**
      * The grade slots proposed for the reset, against the gym's target.

@@ -3,9 +3,14 @@ package org.variset.reports.plan;
 import java.sql.Connection;
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.function.Function;
 import org.variset.archive.grade.Band;
 import org.variset.archive.grade.BandSet;
 import org.variset.archive.grade.Discipline;
@@ -35,6 +40,10 @@ public final class ResetPlanner {
     public static final double DEFAULT_MARGIN = 0.05;
 
     private static final int YEAR_DAYS = 365;
+    /** Walls within this many degrees of each other are alike for the baseline (a heuristic of ours). */
+    static final double LIKE_ANGLE_DEG = 15;
+    /** How many shapes to rest a plan lists (a heuristic of ours: a setter's morning, not an inventory). */
+    static final int SHAPES_LISTED = 12;
 
     private final ArchiveCatalog catalog;
     private final RouteReader reader;
@@ -73,26 +82,42 @@ public final class ResetPlanner {
                 standing.stream().filter(r -> r.discipline() == d).toList();
         List<RouteRecord> rest =
                 sameStanding.stream().filter(r -> !r.wall().equals(wall.name())).toList();
-        List<RouteRecord> year = reader.read(
-                RouteFilter.gym(gym.id()).withDiscipline(d).setBetween(on.minusDays(YEAR_DAYS), on.plusDays(1)));
+        List<String> like = similarWalls(gym, wall);
+        List<RouteRecord> year = reader
+                .read(RouteFilter.gym(gym.id()).withDiscipline(d).setBetween(on.minusDays(YEAR_DAYS), on.plusDays(1)))
+                .stream()
+                .filter(r -> like.contains(r.wall()))
+                .toList();
+        List<RouteRecord> standingLike =
+                sameStanding.stream().filter(r -> like.contains(r.wall())).toList();
         Map<String, String> why = new LinkedHashMap<>();
-        List<VarietyGaps.Gap> gaps = gaps(SetFigures.of(sameStanding, settings), SetFigures.of(year, settings), margin);
+        Map<String, List<RouteRecord>> byReset = new LinkedHashMap<>();
+        year.forEach(
+                r -> byReset.computeIfAbsent(r.reset(), k -> new ArrayList<>()).add(r));
+        List<SetFigures> resets =
+                byReset.values().stream().map(rs -> SetFigures.of(rs, settings)).toList();
+        List<VarietyGaps.Gap> gaps = gaps(SetFigures.of(standingLike, settings), resets, margin);
         if (year.isEmpty()) {
-            why.put("gaps", "no " + d.word() + " route was set in the twelve months before " + on);
+            why.put(
+                    "gaps",
+                    "no " + d.word() + " route was set on " + String.join(", ", like) + " in the twelve months before "
+                            + on);
         }
-        Map<String, Long> shapes = shapes(recent);
-        if (shapes.isEmpty()) {
+        ResetPlan.Baseline baseline = new ResetPlan.Baseline(like, resets.size());
+        Shapes shapes = shapes(recent);
+        if (shapes.ranked().isEmpty()) {
             why.put(
                     "shapes_to_rest",
                     recent.isEmpty()
                             ? "the wall has no reset yet"
-                            : "no hold_ref recorded on the " + "wall's last three resets");
+                            : "no hand hold of the wall's last three resets names its hold shape (hold_ref)");
         }
         ResetPlan.GradeSlots slots = slots(settings, d, n, sameStanding, rest, latest);
         if (slots == null) {
             why.put("slots", "the gym has no grade target for " + d.word() + " routes");
         }
-        return new ResetPlan(gym.name(), wall.name(), on, d, n, slots, gaps, margin, shapes, why);
+        return new ResetPlan(
+                gym.name(), wall.name(), on, d, n, slots, gaps, margin, baseline, shapes.ranked(), shapes.all(), why);
     }
 
     /** The grade slots closest to the target once the wall's routes come down, or null without a target. */
@@ -113,12 +138,12 @@ public final class ResetPlanner {
         long[] restCounts = counts(rest, bandSet, bands);
         long[] prevCounts = counts(latest, bandSet, bands);
         double[] shares = bands.stream().mapToDouble(target::get).toArray();
-        double sum = java.util.Arrays.stream(shares).sum();
-        shares = java.util.Arrays.stream(shares).map(s -> s / sum).toArray();
+        double sum = Arrays.stream(shares).sum();
+        shares = Arrays.stream(shares).map(s -> s / sum).toArray();
         GradeSlotPlanner.Result r = GradeSlotPlanner.plan(restCounts, shares, n, prevCounts);
         GradeFigures now = GradeDistribution.of(
                 sameStanding.stream().mapToDouble(RouteRecord::ircra).toArray(), bandSet, target);
-        long outside = rest.size() - java.util.Arrays.stream(restCounts).sum();
+        long outside = rest.size() - Arrays.stream(restCounts).sum();
         return new ResetPlan.GradeSlots(
                 bands,
                 restCounts,
@@ -170,15 +195,46 @@ public final class ResetPlanner {
         return c;
     }
 
-    private static List<VarietyGaps.Gap> gaps(SetFigures standing, SetFigures year, double margin) {
+    /**
+     * Categories behind: each field's share now (on walls like this one) against the median share of the last
+     * twelve months' resets there, so that one reset unlike the others does not set the baseline.
+     */
+    private static List<VarietyGaps.Gap> gaps(SetFigures now, List<SetFigures> resets, double margin) {
         List<VarietyGaps.Gap> out = new ArrayList<>();
-        out.addAll(VarietyGaps.of("grip", sectors(standing), sectors(year), margin));
-        out.addAll(
-                VarietyGaps.of("holds", standing.holds().counts(), year.holds().counts(), margin));
-        out.addAll(
-                VarietyGaps.of("moves", standing.moves().counts(), year.moves().counts(), margin));
-        out.addAll(VarietyGaps.of(
-                "styles", standing.styles().counts(), year.styles().counts(), margin));
+        out.addAll(gap("grip", ResetPlanner::sectors, now, resets, margin));
+        out.addAll(gap("holds", f -> f.holds().counts(), now, resets, margin));
+        out.addAll(gap("moves", f -> f.moves().counts(), now, resets, margin));
+        out.addAll(gap("styles", f -> f.styles().counts(), now, resets, margin));
+        return out;
+    }
+
+    private static List<VarietyGaps.Gap> gap(
+            String field,
+            Function<SetFigures, Map<String, Long>> counts,
+            SetFigures now,
+            List<SetFigures> resets,
+            double margin) {
+        return VarietyGaps.ofShares(
+                field,
+                VarietyGaps.shares(counts.apply(now)),
+                VarietyGaps.medianShares(resets.stream().map(counts).toList()),
+                margin);
+    }
+
+    /**
+     * The walls whose resets make the baseline: the gym's walls within {@value #LIKE_ANGLE_DEG} degrees of this
+     * wall's angle (a cave's moves are not a slab's), all walls when this one has no angle; always this one.
+     */
+    private List<String> similarWalls(GymRecord gym, WallRecord wall) {
+        List<String> out = new ArrayList<>();
+        for (WallRecord w : catalog.walls(gym.id())) {
+            boolean like = w.id() == wall.id()
+                    || wall.angleDeg() == null
+                    || w.angleDeg() != null && Math.abs(w.angleDeg() - wall.angleDeg()) <= LIKE_ANGLE_DEG;
+            if (like) {
+                out.add(w.name());
+            }
+        }
         return out;
     }
 
@@ -190,21 +246,35 @@ public final class ResetPlanner {
         return m;
     }
 
-    private Map<String, Long> shapes(List<ResetRecord> recent) {
-        Map<String, Long> out = new LinkedHashMap<>();
+    /** The hand-hold shapes of the last resets, ranked, and how many there were in all. */
+    private record Shapes(Map<String, Long> ranked, int all) {}
+
+    /**
+     * The hand-hold shapes (hold_ref) of the wall's last three resets, most used first (by how many of those resets
+     * used them, then by placements), at most {@value #SHAPES_LISTED}: the shapes a setter would rest first. Foot
+     * holds are left out (a foot chip rested teaches nothing).
+     */
+    private Shapes shapes(List<ResetRecord> recent) {
+        Map<String, Long> placements = new LinkedHashMap<>();
+        Map<String, Set<Long>> resetsUsing = new LinkedHashMap<>();
         for (ResetRecord r : recent) {
             for (RouteRecord route : reader.read(RouteFilter.reset(r.id()))) {
-                for (HoldRecord h : route.holds()) {
+                for (HoldRecord h : route.handHoldsInOrder()) {
                     if (h.holdRef() != null) {
-                        out.merge(h.holdRef(), 1L, Long::sum);
+                        placements.merge(h.holdRef(), 1L, Long::sum);
+                        resetsUsing
+                                .computeIfAbsent(h.holdRef(), k -> new HashSet<>())
+                                .add(r.id());
                     }
                 }
             }
         }
-        List<Map.Entry<String, Long>> sorted = new ArrayList<>(out.entrySet());
-        sorted.sort(Map.Entry.<String, Long>comparingByValue().reversed().thenComparing(Map.Entry.comparingByKey()));
-        Map<String, Long> ordered = new LinkedHashMap<>();
-        sorted.forEach(e -> ordered.put(e.getKey(), e.getValue()));
-        return ordered;
+        List<String> sorted = new ArrayList<>(placements.keySet());
+        sorted.sort(Comparator.comparing((String k) -> -resetsUsing.get(k).size())
+                .thenComparing(k -> -placements.get(k))
+                .thenComparing(k -> k));
+        Map<String, Long> ranked = new LinkedHashMap<>();
+        sorted.stream().limit(SHAPES_LISTED).forEach(k -> ranked.put(k, placements.get(k)));
+        return new Shapes(ranked, placements.size());
     }
 }

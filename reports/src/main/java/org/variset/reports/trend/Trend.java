@@ -115,7 +115,7 @@ public record Trend(
      * @param routes routes they set (alone or with others)
      * @param share their share of the period's routes
      * @param gripShares share of their hand grips per direction word, sector 0 first
-     * @param holdShares share of their placements per hold type, most first
+     * @param holdShares share of their hand-role placements per hold type, most first (foot holds left out)
      * @param moveShares share of their routes listing each move, most first
      */
     public record SetterProfile(

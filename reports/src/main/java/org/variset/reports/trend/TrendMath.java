@@ -80,7 +80,9 @@ final class TrendMath {
 
     private static Map<String, Double> holds(List<RouteRecord> routes) {
         Map<String, Long> c = new LinkedHashMap<>();
-        routes.forEach(r -> r.holds().forEach(h -> c.merge(h.type(), 1L, Long::sum)));
+        // Hand holds only: foot chips lead every setter's table otherwise, and say nothing of a setter's hands.
+        routes.forEach(
+                r -> r.holds().stream().filter(HoldRecord::isHand).forEach(h -> c.merge(h.type(), 1L, Long::sum)));
         return sortedShares(c, c.values().stream().mapToLong(Long::longValue).sum());
     }
 

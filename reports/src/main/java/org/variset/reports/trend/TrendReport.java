@@ -102,7 +102,11 @@ public final class TrendReport {
     private List<Trend.MonthPoint> months(
             GymRecord gym, List<WallRecord> walls, List<RouteRecord> all, LocalDate from, LocalDate to) {
         List<Trend.MonthPoint> out = new ArrayList<>();
-        for (YearMonth m = YearMonth.from(from); !m.atDay(1).isAfter(to); m = m.plusMonths(1)) {
+        // Months before the gym's first set have nothing to show: the points start at the month of the first set.
+        LocalDate first =
+                all.stream().map(RouteRecord::setOn).min(LocalDate::compareTo).orElse(from);
+        YearMonth start = YearMonth.from(first.isAfter(from) ? first : from);
+        for (YearMonth m = start; !m.atDay(1).isAfter(to); m = m.plusMonths(1)) {
             LocalDate day = m.atEndOfMonth().isAfter(to) ? to : m.atEndOfMonth();
             GymSettings s = settingsReader.inEffectOn(gym.id(), day);
             List<RouteRecord> up = all.stream().filter(r -> r.standingOn(day)).toList();
@@ -111,8 +115,8 @@ public final class TrendReport {
             for (WallRecord w : walls) {
                 List<RouteRecord> onWall =
                         up.stream().filter(r -> r.wall().equals(w.name())).toList();
-                out.add(point(
-                        day, w.name(), SetResults.standing(w.name(), onWall, SetFigures.of(onWall, s), gymFigures, s)));
+                // A wall's own score: without the gym's grades part, it moves only when the wall's routes do.
+                out.add(point(day, w.name(), SetResults.standing(w.name(), onWall, SetFigures.of(onWall, s), null, s)));
             }
         }
         return out;

@@ -178,7 +178,7 @@ final class RouteMaker {
                     s.size(),
                     List.of(),
                     s.ref(),
-                    round(Math.max(0.2, h.x() + (r.nextDouble() - 0.5) * 0.8)),
+                    round(Math.max(0.2, Math.min(w.widthM() - 0.2, h.x() + (r.nextDouble() - 0.5) * 0.8))),
                     round(Math.max(0.15, h.y() - 0.9))));
         }
         return out;

@@ -164,7 +164,7 @@ public final class SampleGenerator {
                         if (template == null && Stories.isRepeatSource(day, o.end()) && i == 0) {
                             template = route;
                         } else if (template != null && k == days.size() - 1 && i == 2) {
-                            route = Stories.repeatOf(template, route, r);
+                            route = Stories.repeatOf(template, route, w.widthM(), r);
                         }
                     }
                     write(w, day, stripped, route);

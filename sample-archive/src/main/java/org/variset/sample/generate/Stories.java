@@ -51,10 +51,23 @@ public final class Stories {
         return !day.isBefore(end.minusDays(200)) && day.isBefore(end.minusDays(160));
     }
 
-    /** A problem that repeats an earlier one: its holds (shifted a little), moves and grade, under a new label. */
-    static GeneratedRoute repeatOf(GeneratedRoute earlier, GeneratedRoute now, SplittableRandom r) {
+    /**
+     * A problem that repeats an earlier one: its holds shifted a little along the wall (all by the same amount, the
+     * whole route staying on the wall), its moves and grade, under a new label.
+     */
+    static GeneratedRoute repeatOf(GeneratedRoute earlier, GeneratedRoute now, double wallWidthM, SplittableRandom r) {
         List<GeneratedRoute.Hold> holds = new ArrayList<>();
-        double dx = (r.nextDouble() - 0.5) * 2;
+        double left = earlier.holds().stream()
+                .mapToDouble(GeneratedRoute.Hold::x)
+                .min()
+                .orElse(0);
+        double right = earlier.holds().stream()
+                .mapToDouble(GeneratedRoute.Hold::x)
+                .max()
+                .orElse(0);
+        double lo = Math.max(-1, 0.2 - left);
+        double hi = Math.min(1, wallWidthM - 0.2 - right);
+        double dx = lo > hi ? 0 : lo + r.nextDouble() * (hi - lo);
         for (GeneratedRoute.Hold h : earlier.holds()) {
             holds.add(new GeneratedRoute.Hold(
                     h.seq(),
@@ -63,7 +76,7 @@ public final class Stories {
                     h.size(),
                     h.grips(),
                     h.ref(),
-                    Math.round(Math.max(0.2, h.x() + dx) * 100) / 100.0,
+                    Math.round((h.x() + dx) * 100) / 100.0,
                     h.y()));
         }
         return new GeneratedRoute(

@@ -15,8 +15,9 @@ import java.util.Set;
  * @param group routes are compared only within one group (the discipline: boulders with boulders)
  * @param features the features
  * @param detail how many distinct hold and move features it has (fewer than 4: too little detail to compare)
+ * @param evidence what decides whether a similar route is a repeat ({@link RepeatEvidence})
  */
-public record RouteFeatures(String id, String group, Set<String> features, int detail) {
+public record RouteFeatures(String id, String group, Set<String> features, int detail, RouteEvidence evidence) {
 
     /** Routes with fewer hold and move features than this are not compared (docs/spec/metrics.md). */
     public static final int MIN_DETAIL = 4;
@@ -35,9 +36,22 @@ public record RouteFeatures(String id, String group, Set<String> features, int d
         return of(id, "", handHolds, moves, angleBand, gradeBand);
     }
 
-    /** The features of a route. */
+    /** The features of a route, with only its moves and grade band as evidence. */
     public static RouteFeatures of(
             String id, String group, List<HandHold> handHolds, List<String> moves, String angleBand, String gradeBand) {
+        return of(
+                id, group, handHolds, moves, angleBand, gradeBand, new RouteEvidence("", gradeBand, moves, List.of()));
+    }
+
+    /** The features of a route with the evidence that tells a repeat. */
+    public static RouteFeatures of(
+            String id,
+            String group,
+            List<HandHold> handHolds,
+            List<String> moves,
+            String angleBand,
+            String gradeBand,
+            RouteEvidence evidence) {
         Set<String> f = new LinkedHashSet<>();
         for (HandHold h : handHolds) {
             if (h.sectors().isEmpty()) {
@@ -58,7 +72,7 @@ public record RouteFeatures(String id, String group, Set<String> features, int d
         if (gradeBand != null) {
             f.add("grade:" + gradeBand);
         }
-        return new RouteFeatures(id, group, Set.copyOf(f), detail);
+        return new RouteFeatures(id, group, Set.copyOf(f), detail, evidence);
     }
 
     /** The direction of a sector's centre in degrees: sector k faces 45k degrees. */

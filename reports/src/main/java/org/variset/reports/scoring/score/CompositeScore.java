@@ -20,7 +20,22 @@ public record CompositeScore(
 
     /** The grades part from the standing set's distance to target: exp(−emd), null when the distance is. */
     public static Double gradesPart(Double emdToTarget) {
-        return emdToTarget == null ? null : Math.exp(-emdToTarget);
+        return gradesPart(emdToTarget, 0);
+    }
+
+    /**
+     * The grades part: exp(−emd) × (1 − m), where m is the target's share in runs of two or more adjacent bands the
+     * set has no route in. The distance alone can improve while a whole range empties (it measures how far routes are
+     * from where they should be, and a range with none moves little mass); the factor makes such a gap cost what the
+     * target gives it. A heuristic of ours (docs/spec/metrics.md section 7).
+     *
+     * @param missingShare m, in [0, 1]
+     */
+    public static Double gradesPart(Double emdToTarget, double missingShare) {
+        if (missingShare < 0 || missingShare > 1 + 1e-12) {
+            throw new IllegalArgumentException("the missing share " + missingShare + " is outside [0, 1]");
+        }
+        return emdToTarget == null ? null : Math.exp(-emdToTarget) * (1 - Math.min(1, missingShare));
     }
 
     /**
