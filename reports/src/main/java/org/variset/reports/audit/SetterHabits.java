@@ -14,12 +14,15 @@ import org.variset.reports.scoring.repetition.RouteFeatures;
  * A setter's habits against the other setters of the same period, at the levels a setter thinks in: the hold type of
  * their hand holds, the direction their hand grips face, the moves their routes ask for, and only then a type facing a
  * direction. Foot holds are left out: they say nothing of a setter's hands. The level with the largest lead is the
- * habit named (a simpler level first when two lead alike). A habit is worth a sentence when the setter's share is at
+ * habit named; a later level replaces an earlier one only when it leads by {@value #CLEARER} more (so "93% of their hand
+ * holds are crimps" is said rather than the near-equal "91% of their grips are crimps facing up"). A habit is worth a sentence when the setter's share is at
  * least 20% and 15 points above the others' (heuristics of ours).
  */
 final class SetterHabits {
     private static final double MIN_SHARE = 0.2;
     private static final double MIN_LEAD = 0.15;
+    /** How much more a later, finer level must lead by to be named instead (a heuristic of ours). */
+    private static final double CLEARER = 0.10;
 
     private SetterHabits() {}
 
@@ -54,13 +57,17 @@ final class SetterHabits {
                                 + "same period."));
         Finding best = null;
         double bestLead = 0;
-        for (Level l : levels) {
+        int bestLevel = -1;
+        for (int i = 0; i < levels.size(); i++) {
+            Level l = levels.get(i);
             Map<String, Double> mine = l.shares().apply(audit.audited().routes());
             Map<String, Double> theirs = l.shares().apply(audit.reference().routes());
             for (Map.Entry<String, Double> e : mine.entrySet()) {
                 double lead = e.getValue() - theirs.getOrDefault(e.getKey(), 0.0);
-                if (e.getValue() >= MIN_SHARE && lead >= MIN_LEAD && lead > bestLead + 1e-9) {
+                double needed = bestLevel >= 0 && bestLevel < i ? CLEARER : 1e-9;
+                if (e.getValue() >= MIN_SHARE && lead >= MIN_LEAD && lead > bestLead + needed) {
                     bestLead = lead;
+                    bestLevel = i;
                     best = new Finding(
                             "setter_habit",
                             8.5 + lead,
