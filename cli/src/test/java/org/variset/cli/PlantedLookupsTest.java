@@ -54,6 +54,23 @@ class PlantedLookupsTest {
                 .by("Ilse Marrow")
                 .hold("hand", "jug", "xl", "0", "", 4, 1)
                 .hold("hand", "sloper", "s", "0", "", 5, 2);
+        // Grades on both sides of V3..V5 in the V scale, a slash grade at each edge, and two in Font.
+        String[][] more = {
+            {"G2", "V2"},
+            {"G3", "V3"},
+            {"G34", "V3/4"},
+            {"G5", "V5"},
+            {"G56", "V5/6"},
+            {"G6", "V6"},
+            {"F6A", "6A"},
+            {"F6B", "6B"},
+            {"F6C", "6C"}
+        };
+        for (int i = 0; i < more.length; i++) {
+            g.route("Kiln", more[i][0], "2026-02-02", "boulder", more[i][1])
+                    .by("Ilse Marrow")
+                    .hand("edge", "90", "", 6 + 0.3 * i, 1);
+        }
         String[] files = g.write(home.resolve("planted"));
         run("import", files[0], files[1], files[2]).exits(ExitCode.OK);
     }
@@ -77,6 +94,28 @@ class PlantedLookupsTest {
                 .startsWith("5b: French 5b, IRCRA 9.5");
         assertThat(hits("grade:5b")).containsExactly("T2");
         assertThat(hits("grade:5a")).containsExactly("T1");
+    }
+
+    /**
+     * docs/spec/grades.md, "Grade ranges", on the IRCRA table (Draper et al. 2015, secondary transcription for the V
+     * and Font columns): V2 spans rows 15-16 (centre 15.5), V3 16-17 (16.5), V4 18, V5 19, V6 20; V3/4 is the mean of
+     * V3 and V4 (17.25), V5/6 of V5 and V6 (19.5); Font 6A spans 15-16 (15.5), 6B 17, 6C 18-19 (18.5).
+     */
+    @Test
+    void readsARangeInItsOwnScaleByOrderAndOtherScalesByTheCentreOfTheirSpan() throws IOException {
+        // V routes by their order in V: V3 up to V5, no V2 or V6, and the slash grades by the mean of their halves.
+        // Font routes by their centre within rows 16 to 19 (15.5 to 19.5 on the axis, edges included).
+        assertThat(hits("grade:V3..V5")).containsExactlyInAnyOrder("B1", "B2", "G3", "G34", "G5", "F6A", "F6B", "F6C");
+        // The other way round: Font 6B..6C covers rows 17 to 19 (16.5 to 19.5).
+        assertThat(hits("grade:6B..6C")).containsExactlyInAnyOrder("F6B", "F6C", "B1", "G3", "G34", "B2", "G5", "G56");
+        // V3 alone: the V3 routes, and the Font routes centred within its rows 16-17 (15.5 to 17.5): 6A and 6B.
+        assertThat(hits("grade:V3")).containsExactlyInAnyOrder("B1", "G3", "F6A", "F6B");
+    }
+
+    @Test
+    void showsAGradeItselfInItsOwnScale() {
+        String v2 = run("grade", "V2").exits(ExitCode.OK).out();
+        assertThat(v2).containsPattern("\\bV\\s+V2\\n");
     }
 
     @Test

@@ -37,15 +37,16 @@ public record Grade(
     }
 
     /**
-     * The lowest IRCRA value a search for this grade matches: half a level below the levels its table cell covers
-     * (docs/spec/grades.md); a quarter below an older French letter grade, which sits half a level from its neighbours.
+     * The lower edge, on the IRCRA axis, of the table rows the grade covers: a row {@code n} covers {@code n ± 0.5}, so
+     * this is half a level below its first row; an older French letter grade, half a level from its neighbours, covers
+     * a quarter of a level either side of its value (docs/spec/grades.md, "Grade ranges").
      */
-    public double searchLow() {
+    public double rowsLow() {
         return olderFrench() ? ircra - 0.25 : lowLevel - 0.5;
     }
 
-    /** The value a search for this grade matches up to, not included: as {@link #searchLow}, above. */
-    public double searchHigh() {
+    /** The upper edge of the rows the grade covers: as {@link #rowsLow}, above. */
+    public double rowsHigh() {
         return olderFrench() ? ircra + 0.25 : highLevel + 0.5;
     }
 

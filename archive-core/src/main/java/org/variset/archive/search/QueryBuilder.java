@@ -18,6 +18,7 @@ import org.variset.archive.grade.Discipline;
 import org.variset.archive.grade.Grade;
 import org.variset.archive.grade.GradeException;
 import org.variset.archive.grade.GradeReader;
+import org.variset.archive.grade.GradeScale;
 import org.variset.archive.gym.PartialDate;
 import org.variset.archive.route.GripDirection;
 import org.variset.archive.route.HoldSize;
@@ -26,9 +27,10 @@ import org.variset.archive.vocabulary.VocabularyField;
 
 /**
  * Turns a query's syntax tree into a Lucene query. Terms go through the vocabulary ({@link TermKeys}); bare words
- * that together spell a vocabulary term ({@code toe catch}) search that term's field as well as the text. A grade
- * matches routes within the levels its table cell covers, ± half a level on the IRCRA axis (docs/spec/grades.md); a grade that
- * reads in both disciplines ({@code 6a}: Font 6A for boulders, French 6a for rope) searches each discipline with its
+ * that together spell a vocabulary term ({@code toe catch}) search that term's field as well as the text. A grade or
+ * a range of grades matches as docs/spec/grades.md, "Grade ranges", says: routes graded in the range's own scale by
+ * their order in it, routes graded in another scale when the centre of their span lies within the rows the range
+ * covers; a grade that reads in both disciplines ({@code 6a}: Font 6A for boulders, French 6a for rope) searches each discipline with its
  * own reading.
  */
 final class QueryBuilder {
@@ -254,22 +256,15 @@ final class QueryBuilder {
         boolean any = false;
         for (Discipline d : Discipline.values()) {
             try {
-                double lo = ends[0].isEmpty()
-                        ? Double.NEGATIVE_INFINITY
-                        : read(ends[0], d).searchLow();
-                double hi = ends[1].isEmpty()
-                        ? Double.POSITIVE_INFINITY
-                        : Math.nextDown(read(ends[1], d).searchHigh());
-                if (lo > hi) {
+                Grade lo = ends[0].isEmpty() ? null : read(ends[0], d);
+                Grade hi = ends[1].isEmpty() ? null : read(ends[1], d);
+                if (lo != null && hi != null && lo.ircra() > hi.ircra()) {
                     throw new QuerySyntaxException(
                             query,
                             f.valuePosition(),
                             "the range " + v + " runs from harder " + "to easier (expected the easier grade first)");
                 }
-                BooleanQuery.Builder one = new BooleanQuery.Builder();
-                one.add(new TermQuery(new Term(SearchFields.DISCIPLINE, d.word())), Occur.FILTER);
-                one.add(DoublePoint.newRangeQuery(SearchFields.IRCRA, lo, hi), Occur.MUST);
-                b.add(one.build(), Occur.SHOULD);
+                b.add(gradeRange(d, lo, hi), Occur.SHOULD);
                 any = true;
             } catch (GradeException e) {
                 if (e.ambiguous()) {
@@ -282,6 +277,44 @@ final class QueryBuilder {
             throw new QuerySyntaxException(query, f.valuePosition(), problems.get(problems.size() - 1));
         }
         return b.build();
+    }
+
+    /**
+     * Routes of a discipline between two grades (either may be null: open). Routes graded in the range's scale
+     * compare by their order in it (their IRCRA values, which keep that order); others match when the centre of their
+     * span lies within the rows the range covers, edges included (at least half of the route's span inside).
+     */
+    private static Query gradeRange(Discipline d, Grade lo, Grade hi) {
+        GradeScale scale = lo == null ? hi.scale() : hi == null || hi.scale() == lo.scale() ? lo.scale() : null;
+        BooleanQuery.Builder one = new BooleanQuery.Builder();
+        one.add(new TermQuery(new Term(SearchFields.DISCIPLINE, d.word())), Occur.FILTER);
+        Query rows = DoublePoint.newRangeQuery(
+                SearchFields.IRCRA,
+                lo == null ? Double.NEGATIVE_INFINITY : lo.rowsLow(),
+                hi == null ? Double.POSITIVE_INFINITY : hi.rowsHigh());
+        if (scale == null) {
+            one.add(rows, Occur.MUST);
+            return one.build();
+        }
+        Term own = new Term(SearchFields.SCALE, scale.name());
+        BooleanQuery.Builder inScale = new BooleanQuery.Builder()
+                .add(new TermQuery(own), Occur.FILTER)
+                .add(
+                        DoublePoint.newRangeQuery(
+                                SearchFields.IRCRA,
+                                lo == null ? Double.NEGATIVE_INFINITY : lo.ircra(),
+                                hi == null ? Double.POSITIVE_INFINITY : hi.ircra()),
+                        Occur.MUST);
+        BooleanQuery.Builder otherScale =
+                new BooleanQuery.Builder().add(rows, Occur.MUST).add(new TermQuery(own), Occur.MUST_NOT);
+        one.add(
+                new BooleanQuery.Builder()
+                        .add(inScale.build(), Occur.SHOULD)
+                        .add(otherScale.build(), Occur.SHOULD)
+                        .setMinimumNumberShouldMatch(1)
+                        .build(),
+                Occur.MUST);
+        return one.build();
     }
 
     private Grade read(String text, Discipline d) {

@@ -38,6 +38,13 @@ final class RouteDocuments {
         return c;
     }
 
+    /** The grade's value (points for ranges, doc values for sorting) and the scale it was written in. */
+    private static void grade(Document d, RouteRecord r) {
+        d.add(new DoublePoint(SearchFields.IRCRA, r.ircra()));
+        d.add(new DoubleDocValuesField(SearchFields.IRCRA, r.ircra()));
+        d.add(new StringField(SearchFields.SCALE, r.gradeScale().name(), Field.Store.NO));
+    }
+
     /** The document of a route, with the bands and vocabulary of the settings in effect on its set date. */
     static Document of(RouteRecord r, GymSettings s) {
         TermKeys keys = TermKeys.of(s.vocabulary());
@@ -54,8 +61,7 @@ final class RouteDocuments {
                 .flatMap(x -> Arrays.stream(TermKeys.keyword(x).split(" ")))
                 .distinct()
                 .forEach(w -> keyword(d, SearchFields.SETTER_WORD, w));
-        d.add(new DoublePoint(SearchFields.IRCRA, r.ircra()));
-        d.add(new DoubleDocValuesField(SearchFields.IRCRA, r.ircra()));
+        grade(d, r);
         d.add(new LongPoint(SearchFields.SET, r.setOn().toEpochDay()));
         d.add(new NumericDocValuesField(SearchFields.SET, r.setOn().toEpochDay()));
         d.add(new LongPoint(

@@ -18,6 +18,9 @@ final class SearchFields {
     static final String BAND = "band";
     /** The IRCRA value: points for ranges, doc values for sorting. */
     static final String IRCRA = "ircra";
+    /** The scale the route's grade was written in ({@code V}, {@code FONT}, ...): a grade range of that scale reads
+     * the route by its order in it (docs/spec/grades.md, "Grade ranges"). */
+    static final String SCALE = "scale";
     /** The set date as an epoch day: points for ranges, doc values for sorting. */
     static final String SET = "set";
     /** The strip date as an epoch day, {@link Long#MAX_VALUE} while up. */

@@ -45,7 +45,7 @@ import org.variset.archive.store.Archive;
  */
 public final class SearchIndex implements AutoCloseable {
     /** The document layout; a change of layout rebuilds every index made with another. */
-    static final String FORMAT = "3";
+    static final String FORMAT = "4";
 
     private static final String FORMAT_KEY = "variset-index-format";
     private static final String STAMP_KEY = "variset-change-stamp";

@@ -21,6 +21,21 @@ class GradeConverterTest {
         assertThat(converter.equivalents(reader.read("V2"), GradeScale.FONT)).containsExactly("5+", "6A", "6A+");
     }
 
+    /**
+     * docs/spec/grades.md, "Grade ranges": a grade shows itself in its own scale, though V2 and V3 share row 16 of the
+     * table (Draper et al. 2015, secondary transcription); in another scale, the grades centred within its rows.
+     */
+    @Test
+    void showsAGradeItselfInItsOwnScaleAndCentredGradesInAnother() {
+        assertThat(converter.equivalents(reader.read("V2"), GradeScale.V)).containsExactly("V2");
+        // Font 6B+ spans row 18 (18), 6C rows 18-19 (18.5); 6A+|6B on row 17 and 6C+ (19.5) lie outside 17.5..18.5.
+        assertThat(converter.equivalents(reader.read("V4"), GradeScale.FONT)).containsExactly("6B+", "6C");
+        // Font 6A+ (rows 16-17, 15.5 to 17.5): V2 (15.5) and V3 (16.5) are centred within it.
+        assertThat(converter.equivalents(
+                        reader.read("6A+", Discipline.BOULDER, null, java.util.Set.of()), GradeScale.V))
+                .containsExactly("V2", "V3");
+    }
+
     @Test
     void givesNothingWhereTheTargetColumnIsEmpty() {
         assertThat(converter.equivalents(reader.read("5.4"), GradeScale.V)).isEmpty();

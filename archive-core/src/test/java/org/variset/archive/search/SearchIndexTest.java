@@ -154,9 +154,9 @@ class SearchIndexTest {
     @Nested
     class Grades {
         /**
-         * A grade matches within half a level of the levels its cell of the IRCRA table covers (docs/spec/grades.md, Draper et
-         * al. 2015): V3 covers levels 16 and 17, V5 level 19, so V3..V5 is [15.5, 19.5); Font 6A (levels 15 and 16,
-         * value 15.5) overlaps V3 at level 16 and is in.
+         * docs/spec/grades.md, "Grade ranges", on the IRCRA table (Draper et al. 2015): V routes by their order in V
+         * (V3 16.5 to V5 19); a Font route by the centre of its span within the rows V3..V5 covers (16 to 19, so 15.5
+         * to 19.5): Font 6A (rows 15 and 16, centre 15.5) has half its span on row 16 and is in.
          */
         @Test
         void findARangeInOneScale() {

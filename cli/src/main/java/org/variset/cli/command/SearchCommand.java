@@ -36,7 +36,7 @@ import picocli.CommandLine.Parameters;
             "                         any hand grip facing a direction",
             "  hold:sloper+xl  hold:crimp@up+s   one hold's type, direction and size together (size:xl hold:sloper",
             "                         asks for an xl hold and a sloper, maybe two holds)",
-            "  grade:V4  grade:V3..V5  grade:6a..6b+  grade:V5..   grades in any scale, compared on the IRCRA axis",
+            "  grade:V4  grade:V3..V5  grade:6a..6b+  grade:V5..   grades: the range's own scale by order (V3..V5 never gives V2), other scales by the centre of their span",
             "  band:V4                a band of the gym's grade bands",
             "  set:2026-03  set:2026-01..2026-06  stripped:2026-04  standing:2026-03-02   dates",
             "  gym:  wall:  route:  color:  setter:  discipline:  size:  angle:20..45  notes:",
