@@ -268,6 +268,22 @@ class PlantedFindingsTest {
         assertThat(text).doesNotContainPattern("\\b1 routes\\b");
     }
 
+    @Test
+    void stopsAPeriodThatReachesPastTodayAtTodayAndSaysSo() throws IOException {
+        java.time.LocalDate ahead =
+                java.time.LocalDate.now(java.time.ZoneOffset.UTC).plusDays(40);
+        String text = run("trend", "--from", "2025-12-01", "--to", ahead.toString())
+                .exits(ExitCode.OK)
+                .out();
+        assertThat(text)
+                .contains("The period runs to " + ahead + ", which has not come yet: its figures stop at today");
+        JsonNode j = json("trend", "--from", "2025-12-01", "--to", ahead.toString(), "--format", "json");
+        assertThat(j.required("stops_at_today").asBoolean()).isTrue();
+        java.time.LocalDate asOf = java.time.LocalDate.parse(j.required("as_of").asText());
+        assertThat(asOf).isBefore(ahead);
+        assertThat(j.toString()).doesNotContain(ahead.toString().substring(0, 7) + "-" + ahead.lengthOfMonth());
+    }
+
     private static String firstPage(Path pdf) throws IOException {
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             PDFTextStripper s = new PDFTextStripper();

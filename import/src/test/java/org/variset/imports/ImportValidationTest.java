@@ -128,6 +128,16 @@ class ImportValidationTest {
                     .contains("grade_scale");
         }
 
+        /** docs/spec/interchange.md: move difficulties are whole numbers 1 to 10; 6.0 reads as 6. */
+        @Test
+        void refusesADecimalMoveDifficultyWithTheWholeNumberRule() {
+            List<String> p = problems(routes("Harbour Hall,Slab,R1,2026-03-02,boulder,V2,,,,,,,,6.0;6.5;7,"));
+            assertThat(p)
+                    .singleElement()
+                    .asString()
+                    .contains(":2: move_difficulty: '6.5' is not a whole number (expected whole numbers 1 to 10");
+        }
+
         @Test
         void reportsSeveralProblemsOfOneRun() {
             List<String> p = problems(routes(
@@ -136,7 +146,9 @@ class ImportValidationTest {
                     GOOD,
                     GOOD));
             assertThat(p).hasSize(3);
-            assertThat(p.get(2)).contains(":5: route: the same route as").contains(":4");
+            assertThat(p.get(2))
+                    .contains(":5: route: route R1 of 2026-03-02 on Slab (Harbour Hall) is already at ")
+                    .contains(":4");
         }
     }
 

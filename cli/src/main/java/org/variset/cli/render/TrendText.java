@@ -25,6 +25,9 @@ public final class TrendText {
                 .append(" to ")
                 .append(t.to())
                 .append("\n\n");
+        if (t.stopsAtToday()) {
+            b.append(t.stopsAtTodayWords()).append("\n\n");
+        }
         months(b, t);
         walls(b, t);
         lifetimeAndSetters(b, t);
@@ -88,7 +91,7 @@ public final class TrendText {
                 .append(" days up; ")
                 .append(l.stillUp())
                 .append(" up on ")
-                .append(t.to())
+                .append(t.asOf())
                 .append(".\n");
         b.append("\nSetters (a route set by two setters counts for both)\n");
         for (Trend.SetterProfile s : t.setters()) {

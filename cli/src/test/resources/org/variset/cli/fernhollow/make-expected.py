@@ -246,7 +246,8 @@ parts = dict(grip=f["grip"]["sector_entropy"], holds=f["holds"]["coverage"], mov
              grades=math.exp(-g_standing["emd_to_target"]) * (1 - missing_share(g_standing, grades(reset))),
              novelty=novelty)
 reset_audit = dict(figures=f, grades_of_reset=grades(reset), gym_grades=g_standing, near_repeats=near,
-                   internal_repeats=inside, similar_not_repeats=aside, novelty=novelty, window_routes=len(window),
+                   internal_repeats=inside, similar_not_repeats=aside, novelty=novelty,
+                   window_routes=len([w for w in window if w["discipline"] == reset[0]["discipline"]]),
                    hold_reuse_rate=reused / len(placements), parts=parts, score=score(parts),
                    gie_mean=float(np.mean(f["gie"])), gie_min=min(f["gie"]), gie_max=max(f["gie"]))
 

@@ -123,7 +123,11 @@ final class ImportPlan {
                     r.file(),
                     r.line(),
                     "route",
-                    "the same route as " + before.where() + " (a route is identified by gym, wall, route and set_on)");
+                    "route " + r.key().label() + " of " + r.key().setOn() + " on "
+                            + r.key().wall() + " ("
+                            + r.key().gym() + ") is already at " + before.where()
+                            + "; a route is identified by gym, wall, route and set_on, so give one of them another "
+                            + "label or date, or delete the second row");
         }
     }
 

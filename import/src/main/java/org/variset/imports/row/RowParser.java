@@ -230,13 +230,14 @@ public final class RowParser {
                 if (d < 1 || d > 10) {
                     c.problem(
                             "move_difficulty",
-                            d + " is out of range (expected numbers 1 to 10, one per hand move, " + "separated by ;)");
+                            d + " is out of range (expected whole numbers 1 to 10, one per hand move, separated by ;)");
                 }
                 out.add(d);
             } catch (NumberFormatException e) {
                 c.problem(
                         "move_difficulty",
-                        "'" + t + "' is not a whole number (expected numbers 1 to 10 " + "separated by ;)");
+                        "'" + t + "' is not a whole number (expected whole numbers 1 to 10, one per hand move, "
+                                + "separated by ;: the scale is coarse on purpose, so round a half up or down)");
             }
         }
         return out;

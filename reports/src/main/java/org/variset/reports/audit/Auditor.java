@@ -125,7 +125,13 @@ public final class Auditor {
         Set<String> previousKeys = new HashSet<>();
         before.forEach(b -> RouteFeatureMapper.reuseKeys(reader.read(RouteFilter.reset(b.id())))
                 .forEach(previousKeys::addAll));
-        return SetResults.reset(name, routes, window.size(), rep, before.isEmpty(), previousKeys, standing, settings);
+        // Routes compare within a discipline: the window's count is of the routes this reset is compared with.
+        Set<Discipline> disciplines = new HashSet<>();
+        routes.forEach(r -> disciplines.add(r.discipline()));
+        int compared = (int) window.stream()
+                .filter(w -> disciplines.contains(w.discipline()))
+                .count();
+        return SetResults.reset(name, routes, compared, rep, before.isEmpty(), previousKeys, standing, settings);
     }
 
     /** The gym's routes set in [day − look-back, day), not of the reset (docs/spec/metrics.md section 5). */

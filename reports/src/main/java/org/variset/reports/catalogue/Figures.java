@@ -261,7 +261,9 @@ public final class Figures {
             Unit.NUMBER,
             3,
             NEITHER,
-            "geometric index of entropy (Cordier et al. 1994), on hand holds; " + S6);
+            "geometric index of entropy (Cordier et al. 1994), adapted to the line through the hand holds (not a "
+                    + "climber's path, so not comparable with published values); "
+                    + S6);
     /** Least GIE of the routes (§6). */
     public static final Figure GIE_MIN =
             add("line.gie_min", "route line wander, least", "gie min", Unit.NUMBER, 3, NEITHER, S6);

@@ -7,6 +7,7 @@ import org.variset.archive.grade.Discipline;
 import org.variset.reports.catalogue.Figures;
 import org.variset.reports.scoring.grades.GradeFigures;
 import org.variset.reports.scoring.grip.GripStatistics;
+import org.variset.reports.scoring.line.RouteLine;
 import org.variset.reports.scoring.profile.ProfileClass;
 import org.variset.reports.scoring.variety.VarietyFigures;
 
@@ -114,6 +115,7 @@ public final class FiguresJson {
                 .put("gie_mean", l.gieMean())
                 .put("gie_min", l.gieMin())
                 .put("gie_max", l.gieMax())
+                .put("gie_note", "GIE here is " + RouteLine.ADAPTATION)
                 .put("reach_height_m", l.reachHeightM())
                 .put("reach_factor", l.reachK());
         if (l.gieMean() == null) {

@@ -21,6 +21,7 @@ import org.variset.reports.format.FigureFormat;
 import org.variset.reports.plan.ResetPlan;
 import org.variset.reports.scoring.grades.GradeFigures;
 import org.variset.reports.scoring.grip.GripStatistics;
+import org.variset.reports.scoring.line.RouteLine;
 import org.variset.reports.scoring.profile.ProfileClass;
 import org.variset.reports.scoring.repetition.RepetitionFigures;
 import org.variset.reports.scoring.variety.VarietyFigures;
@@ -352,7 +353,8 @@ public final class AuditPdf {
         doc.heading("Route lines and reach", false);
         doc.paragraph("Geometric index of entropy (0 straight, larger wandering): mean "
                 + Figures.GIE_MEAN.text(f.line().gieMean()) + " over "
-                + FigureFormat.count(f.line().withGie(), "route") + ". A span longer than "
+                + FigureFormat.count(f.line().withGie(), "route") + "; "
+                + RouteLine.ADAPTATION + ". A span longer than "
                 + Figures.REACH_FACTOR.text(f.line().reachK()) + " × "
                 + Figures.REACH_HEIGHT.text(f.line().reachHeightM())
                 + " m is flagged: a heuristic (arm span is close to height in most adults), not a measurement of any "

@@ -33,6 +33,9 @@ public final class TrendPdf {
                 && t.to().equals(t.from().withDayOfYear(t.from().lengthOfYear()));
         String title = year ? "Annual report " + t.from().getYear() : "Trend report";
         try (PdfDoc doc = new PdfDoc(out, options, title, t.gym() + " · " + t.from() + " to " + t.to())) {
+            if (t.stopsAtToday()) {
+                doc.paragraph(t.stopsAtTodayWords());
+            }
             walls(doc, t);
             repeats(doc, t);
             doc.safety();
@@ -136,7 +139,7 @@ public final class TrendPdf {
         doc.paragraph(l.stripped() + " routes came down in the period after a median of "
                 + (Figures.LIFETIME.text(l.medianDays())) + " days up; "
                 + l.stillUp() + " were up "
-                + "on " + t.to() + ". A wall is due after its cycle and overdue "
+                + "on " + t.asOf() + ". A wall is due after its cycle and overdue "
                 + (t.walls().isEmpty() ? 14 : t.walls().get(0).overdueAfterDays())
                 + " days later (common practice: boulders due at four "
                 + "weeks and overdue at six, rope routes at eight and ten). The mean score is a heuristic.");

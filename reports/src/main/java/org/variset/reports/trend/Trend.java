@@ -38,6 +38,17 @@ public record Trend(
         List<Repeat> repeats,
         int routesSet,
         Double meanResetScore) {
+    /** True when the period reaches past today: its figures stop at {@link #asOf}. */
+    public boolean stopsAtToday() {
+        return asOf.isBefore(to);
+    }
+
+    /** "" or, when the period reaches past today, the sentence that says its figures stop there. */
+    public String stopsAtTodayWords() {
+        return stopsAtToday()
+                ? "The period runs to " + to + ", which has not come yet: its figures stop at today, " + asOf + "."
+                : "";
+    }
 
     /**
      * The standing set of the gym or one wall on a month's last day (or the period's last day).

@@ -21,7 +21,8 @@ public final class TrendJson {
                 .put("gym", t.gym())
                 .put("from", t.from().toString())
                 .put("to", t.to().toString())
-                .put("as_of", t.asOf().toString());
+                .put("as_of", t.asOf().toString())
+                .put("stops_at_today", t.stopsAtToday());
         ArrayNode months = o.putArray("months");
         for (Trend.MonthPoint p : t.months()) {
             ObjectNode m = months.addObject()

@@ -81,7 +81,7 @@ public final class TrendReport {
                 asOf,
                 months(gym, walls, all, from, asOf),
                 status(gym, walls, resets, scores, asOf),
-                TrendMath.lifetime(all, from, to),
+                TrendMath.lifetime(all, from, asOf),
                 TrendMath.setters(setInPeriod),
                 SetFigures.of(setInPeriod, endSettings).grades(),
                 example,

@@ -11,6 +11,8 @@ import java.util.List;
  * than k × climber height is flagged, a heuristic (arm span is close to height in most adults; common practice, no
  * source).
  *
+ * <p>This is an adaptation ({@link #ADAPTATION}): the published index is computed on a climber's path.
+ *
  * <p>Edge cases: fewer than three hand holds, or any without a position, give no GIE (null).
  *
  * <p>References:
@@ -23,6 +25,11 @@ import java.util.List;
  * </ul>
  */
 public final class RouteLine {
+    /** What the index is here, beside what it is in the literature, for every place that shows it. */
+    public static final String ADAPTATION = "an adaptation: the published index is computed on a climber's hip or "
+            + "centre-of-mass path as they climb; here it is computed on the line through a route's hand holds, so its "
+            + "values are not comparable with published ones";
+
     private RouteLine() {}
 
     /** The path length: the sum of straight segments between consecutive points. */
