@@ -71,6 +71,21 @@ class DemoCommandTest {
         assertThat(first.out()).contains("of Rafe Kalder's hand holds are crimps");
     }
 
+    /** Every font of every report is embedded, so an archived copy looks the same in any viewer. */
+    @Test
+    void embedsEveryFontInEveryReport() throws IOException {
+        List<Path> pdfs;
+        try (var files = Files.list(demo.resolve("reports"))) {
+            pdfs = files.filter(p -> p.toString().endsWith(".pdf")).sorted().toList();
+        }
+        assertThat(pdfs).hasSize(9);
+        List<String> fonts = new ArrayList<>();
+        for (Path pdf : pdfs) {
+            PdfFontList.of(pdf).forEach(f -> fonts.add(pdf.getFileName() + ": " + f));
+        }
+        assertThat(fonts).isNotEmpty().allMatch(f -> f.endsWith(" (embedded)"));
+    }
+
     /** Story: the Prow keeps reusing the same hold shapes, turned the same way. */
     @Test
     void findsTheWallThatReusesItsHoldShapes() throws IOException {

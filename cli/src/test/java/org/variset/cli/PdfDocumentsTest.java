@@ -10,13 +10,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.pdfbox.Loader;
-import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.pdmodel.PDDocument;
-import org.apache.pdfbox.pdmodel.PDPage;
-import org.apache.pdfbox.pdmodel.PDResources;
-import org.apache.pdfbox.pdmodel.font.PDFont;
-import org.apache.pdfbox.pdmodel.graphics.PDXObject;
-import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Nested;
@@ -165,30 +159,9 @@ class PdfDocumentsTest {
 
         @Test
         void embedsEveryFont() throws IOException {
-            try (PDDocument d = Loader.loadPDF(pdf.toFile())) {
-                List<String> fonts = new ArrayList<>();
-                for (PDPage p : d.getPages()) {
-                    collectFonts(p.getResources(), fonts);
-                }
-                assertThat(fonts).isNotEmpty().allMatch(f -> f.endsWith(" embedded"));
-                assertThat(fonts).anyMatch(f -> f.contains("DejaVuSans"));
-            }
-        }
-    }
-
-    private static void collectFonts(PDResources res, List<String> out) throws IOException {
-        if (res == null) {
-            return;
-        }
-        for (COSName n : res.getFontNames()) {
-            PDFont f = res.getFont(n);
-            out.add(f.getName() + (f.isEmbedded() ? " embedded" : " NOT embedded"));
-        }
-        for (COSName n : res.getXObjectNames()) {
-            PDXObject x = res.getXObject(n);
-            if (x instanceof PDFormXObject form) {
-                collectFonts(form.getResources(), out);
-            }
+            List<String> fonts = PdfFontList.of(pdf);
+            assertThat(fonts).isNotEmpty().allMatch(f -> f.endsWith(" (embedded)"));
+            assertThat(fonts).anyMatch(f -> f.contains("DejaVuSans"));
         }
     }
 

@@ -62,6 +62,20 @@ class ReliabilityCommandsTest {
     }
 
     @Test
+    void callsAMissingIndexANoteWithExitZero() throws Exception {
+        try (Stream<Path> files = Files.walk(archive.resolve("index"))) {
+            for (Path f : files.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.delete(f);
+            }
+        }
+        CliRun r = run("check").exits(ExitCode.OK);
+        assertThat(r.out())
+                .contains("note    Lucene CheckIndex: there is no index yet: the next search builds it")
+                .contains("The archive is healthy. The search index is only behind the database");
+        assertThat(run("check").exits(ExitCode.OK).out()).doesNotContain("PROBLEM");
+    }
+
+    @Test
     void backsUpAndRestoresAndRefusesADamagedBackup() throws Exception {
         Path backup = home.resolve("b.zip");
         assertThat(run("backup", backup.toString()).exits(ExitCode.OK).out())

@@ -29,6 +29,7 @@ public final class CheckArchive {
                             .put("part", i.part())
                             .put("check", i.name())
                             .put("ok", i.ok())
+                            .put("note", i.note())
                             .put("detail", i.detail()));
             return o;
         }

@@ -18,7 +18,14 @@ import org.variset.archive.schema.SchemaVersion;
 /**
  * Opens the archive written by the first schema version, committed under {@code fixtures/archive-v1} and kept
  * for good: every later migration must bring it up to date without losing anything. The fixture was written
- * once by {@link #main} (the ResetFixture data) with schema version 1 and H2 2.5.252.
+ * once by {@link #main} (the ResetFixture data) with schema version 1 and H2 2.5.252; its gym's time zone was later
+ * set to the fixture's America/Denver by {@link #rezone}, in SQL that leaves the schema at version 1:
+ *
+ * <pre>
+ * ./mvnw -q -pl archive-core test-compile dependency:build-classpath -Dmdep.outputFile=/tmp/cp.txt
+ * java -cp archive-core/target/test-classes:archive-core/target/classes:$(cat /tmp/cp.txt) \
+ *   org.variset.archive.store.ArchiveV1FixtureTest --rezone archive-core/src/test/resources/fixtures/archive-v1
+ * </pre>
  */
 class ArchiveV1FixtureTest {
 
@@ -43,6 +50,7 @@ class ArchiveV1FixtureTest {
             archive.inTransaction(s -> {
                 ArchiveQueries q = new ArchiveQueries(s);
                 Gym gym = q.gym(ResetFixture.GYM).orElseThrow();
+                assertThat(gym.zone()).isEqualTo(ResetFixture.ZONE);
                 List<Route> routes = q.standingSet(gym, ResetFixture.SET_ON.plusDays(1));
                 assertThat(routes).extracting(Route::label).containsExactly("Blue 3", "Green 1");
                 assertThat(routes.get(0).holds())
@@ -58,9 +66,26 @@ class ArchiveV1FixtureTest {
      *
      * @param args the folder to write the archive to
      */
-    public static void main(String[] args) {
+    public static void main(String[] args) throws java.sql.SQLException {
+        if (args.length == 2 && args[0].equals("--rezone")) {
+            rezone(Path.of(args[1]));
+            return;
+        }
         try (Archive archive = Archive.create(Path.of(args[0]))) {
             archive.inTransaction(ResetFixture::storeFullReset);
+        }
+    }
+
+    /** Sets the fixture gym's time zone to the fixture's, by SQL on the file (no migration runs). */
+    static void rezone(Path folder) throws java.sql.SQLException {
+        String url = "jdbc:h2:file:" + folder.toAbsolutePath().resolve("archive");
+        try (java.sql.Connection c = java.sql.DriverManager.getConnection(url, "", "");
+                java.sql.PreparedStatement u = c.prepareStatement("UPDATE gym SET time_zone = ? WHERE name = ?")) {
+            u.setString(1, ResetFixture.ZONE.getId());
+            u.setString(2, ResetFixture.GYM);
+            if (u.executeUpdate() != 1) {
+                throw new IllegalStateException("no gym " + ResetFixture.GYM + " in " + folder);
+            }
         }
     }
 }

@@ -50,12 +50,17 @@ final class CheckCommand extends VarisetSubcommand {
                 part = i.part();
                 out().println(part.equals("database") ? "Database" : "Search index");
             }
-            out().println("  " + (i.ok() ? "ok      " : "PROBLEM ") + i.name() + ": " + i.detail());
+            out().println("  " + (i.ok() ? "ok      " : i.note() ? "note    " : "PROBLEM ") + i.name() + ": "
+                    + i.detail());
         }
         if (repaired) {
             out().println("The search index was rebuilt from the database.");
         }
-        if (report.healthy()) {
+        if (report.healthy() && report.hasNotes() && !repaired) {
+            out().println("The archive is healthy. The search index is only behind the database (as after a crash "
+                    + "between their commits): the next search brings it up to date, or run 'variset check --repair'"
+                    + " now.");
+        } else if (report.healthy()) {
             out().println("The archive is healthy.");
         } else if (report.databaseHealthy()) {
             out().println("The database is healthy; the search index is not. Rebuild it with 'variset check --repair'"

@@ -95,6 +95,7 @@ final class PdfDoc implements AutoCloseable {
     void bullets(List<String> items) {
         for (String i : items) {
             Paragraph p = new Paragraph();
+            p.setFont(fonts.font(BODY, false, Palette.INK));
             p.add(fonts.phrase("•  ", BODY, true, Palette.BLUE));
             p.add(fonts.phrase(i, BODY, false, Palette.INK));
             p.setIndentationLeft(10);
@@ -150,6 +151,7 @@ final class PdfDoc implements AutoCloseable {
         t.setSpacingBefore(6);
         t.setSpacingAfter(6);
         Paragraph p = new Paragraph();
+        p.setFont(fonts.font(BODY, false, Palette.INK));
         p.add(fonts.phrase(title + "  ", BODY, true, Palette.INK));
         p.add(fonts.phrase(text, BODY, false, Palette.INK));
         PdfPCell c = new PdfPCell(p);

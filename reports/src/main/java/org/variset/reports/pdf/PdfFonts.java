@@ -81,7 +81,16 @@ final class PdfFonts {
                 .filter(c ->
                         c >= 0x20 && !main.charExists(c) && fallbacks.stream().noneMatch(f -> f.charExists(c)))
                 .forEach(c -> missing.add(new String(Character.toChars(c))));
-        return s.process(t);
+        Phrase p = s.process(t);
+        // A processed phrase's own font is the library's default (Helvetica, not embedded), used for the line
+        // ends it writes: give it the document's.
+        p.setFont(new Font(main, size, Font.NORMAL, color));
+        return p;
+    }
+
+    /** The document's font at a size, for paragraphs and cells that hold phrases (their line ends use it). */
+    Font font(float size, boolean isBold, Color color) {
+        return new Font(isBold ? bold : regular, size, Font.NORMAL, color);
     }
 
     /** The characters that no font could print, for a warning. */
