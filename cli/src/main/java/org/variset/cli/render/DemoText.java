@@ -40,7 +40,7 @@ public final class DemoText {
         Trend t = s.annual();
         t.gymGaps()
                 .forEach(p -> out.println("  On " + p.day() + " the gym had no " + p.gapWords(" or ")
-                        + " up, though its target expects them."));
+                        + " up, though its target expects routes there."));
         t.walls().stream()
                 .filter(w -> !w.status().equals("ok"))
                 .forEach(w -> out.println("  " + w.wall() + " is " + w.status() + ": last reset " + w.lastReset() + ", "
