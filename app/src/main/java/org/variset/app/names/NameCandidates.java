@@ -50,28 +50,25 @@ public final class NameCandidates {
      * @param gym the gym, or null when the archive holds one (every gym's, for {@link Kind#GYMS})
      */
     public List<String> names(Kind kind, String gym) {
-        ArchiveCatalog catalog = new ArchiveCatalog(workspace.archive().connection());
-        if (kind == Kind.GYMS) {
-            return catalog.gyms().stream().map(GymRecord::name).toList();
-        }
-        GymRecord g = catalog.gym(gym);
-        NameListings listings = new NameListings(workspace.archive().connection());
         return switch (kind) {
+            case GYMS ->
+                new ArchiveCatalog(workspace.archive().connection())
+                        .gyms().stream().map(GymRecord::name).toList();
             case WALLS ->
-                listings.walls(g.id(), workspace.today(g.name())).stream()
-                        .map(NameListings.WallLine::name)
-                        .toList();
+                new ListWalls(workspace)
+                        .list(gym, null).walls().stream()
+                                .map(NameListings.WallLine::name)
+                                .toList();
             case SETTERS ->
                 new ListSetters(workspace)
-                        .list(g.name()).setters().stream()
+                        .list(gym).setters().stream()
                                 .map(NameListings.SetterLine::name)
                                 .toList();
             case RESETS ->
                 new ListResets(workspace)
-                        .list(g.name(), null, null).resets().stream()
+                        .list(gym, null, null).resets().stream()
                                 .map(NameListings.ResetLine::label)
                                 .toList();
-            case GYMS -> List.of();
         };
     }
 }

@@ -19,7 +19,7 @@ import picocli.CommandLine.Parameters;
         description = {
             "Print a completion script for bash or zsh: commands and options complete with TAB, and the names after "
                     + "--gym, --wall, --setter and --reset come from the archive as you type (the one the "
-                    + "command line would use: --archive, VARISET_ARCHIVE, ...).",
+                    + "line being typed names with --archive, --db or --gym, else the usual default).",
             "",
             "Add this line to ~/.bashrc (bash) or ~/.zshrc (zsh), with the path to ./variset or a 'variset' on "
                     + "your PATH:",
@@ -71,7 +71,8 @@ final class CompletionCommand extends VarisetSubcommand {
 
     /**
      * Wraps the generated completion function: after --gym, --wall, --setter or --reset it asks the archive for
-     * names (quoted for the shell), otherwise it completes as generated.
+     * names (quoted for the shell), with the --archive, --db and --gym already typed on the line; otherwise it
+     * completes as generated.
      */
     private static final String NAMES_HOOK = """
 
@@ -85,9 +86,16 @@ final class CompletionCommand extends VarisetSubcommand {
                 --reset) kind=resets ;;
               esac
               if [[ -n "$kind" ]]; then
-                local IFS=$'\\n' name
+                local IFS=$'\\n' name i
+                local -a archive=() gym=()
+                for ((i = 1; i < COMP_CWORD - 1; i++)); do
+                  case "${COMP_WORDS[i]}" in
+                    --archive|--db) archive+=("${COMP_WORDS[i]}" "${COMP_WORDS[i+1]}") ;;
+                    --gym) gym+=(--gym "${COMP_WORDS[i+1]}") ;;
+                  esac
+                done
                 COMPREPLY=()
-                for name in $("${COMP_WORDS[0]}" completion --names "$kind" 2>/dev/null); do
+                for name in $("${COMP_WORDS[0]}" "${archive[@]}" completion --names "$kind" "${gym[@]}" 2>/dev/null); do
                   if [[ "$name" == "$cur"* ]]; then
                     COMPREPLY+=("$(printf '%q' "$name")")
                   fi
