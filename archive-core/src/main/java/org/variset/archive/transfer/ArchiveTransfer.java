@@ -37,7 +37,8 @@ public final class ArchiveTransfer {
             new Table("route", "id", "route_seq"),
             new Table("route_setter", "route_id, ord", null),
             new Table("hold_placement", "id", "hold_seq"),
-            new Table("gym_setting", "id", "gym_setting_seq"));
+            new Table("gym_setting", "id", "gym_setting_seq"),
+            new Table("account", "name", null));
 
     private static final int BATCH = 1_000;
     /** Hibernate's pooled ids take blocks of this many below each sequence value (the migrations' INCREMENT BY). */
