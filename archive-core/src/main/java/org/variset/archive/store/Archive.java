@@ -329,6 +329,16 @@ public final class Archive implements AutoCloseable {
         return server != null ? server.shown() : dir != null ? dir.toString() : "(memory)";
     }
 
+    /**
+     * Says what this process is doing with the archive, for another process that finds it in use (an embedded
+     * archive's lock file); a shared archive has no lock, so nothing is written.
+     */
+    public synchronized void describeUse(String doing) {
+        if (lock != null) {
+            lock.describe(doing);
+        }
+    }
+
     /** The data source of the archive's database (each connection from it is new; close it when done). */
     public DataSource dataSource() {
         return dataSource;

@@ -96,7 +96,9 @@ public final class ArchiveLock implements AutoCloseable {
                         .atZone(ZoneId.systemDefault())
                         .toLocalTime()
                         .truncatedTo(ChronoUnit.SECONDS);
-                return "process " + f[0] + " on host " + f[1] + " (since " + since + ")";
+                String doing =
+                        f.length > 3 ? ", " + String.join(" ", java.util.Arrays.copyOfRange(f, 3, f.length)) : "";
+                return "process " + f[0] + " on host " + f[1] + " (since " + since + ")" + doing;
             }
         } catch (IOException | RuntimeException e) {
             // The holder is writing its name right now, or the file is from an older Variset: say less.
@@ -104,7 +106,23 @@ public final class ArchiveLock implements AutoCloseable {
         return "another Variset process";
     }
 
+    /**
+     * Says in the lock file what the holder is doing, for the message another process shows ("variset serve at
+     * http://127.0.0.1:7070/; stop it to use the archive here").
+     */
+    public void describe(String doing) {
+        try {
+            writeHolder(channel, doing.replace('\n', ' '));
+        } catch (IOException e) {
+            // The lock still holds; the other process just says less.
+        }
+    }
+
     private static void writeHolder(FileChannel ch) throws IOException {
+        writeHolder(ch, "");
+    }
+
+    private static void writeHolder(FileChannel ch, String doing) throws IOException {
         String host;
         try {
             host = InetAddress.getLocalHost().getHostName();
@@ -112,6 +130,7 @@ public final class ArchiveLock implements AutoCloseable {
             host = "unknown";
         }
         byte[] text = (ProcessHandle.current().pid() + " " + host.replace(' ', '_') + " " + System.currentTimeMillis()
+                        + (doing.isEmpty() ? "" : " " + doing)
                         + "\n")
                 .getBytes(StandardCharsets.UTF_8);
         ch.truncate(0);

@@ -1,0 +1,2 @@
+/** The web workspace: {@link org.variset.web.WebServer} and what it serves. */
+package org.variset.web;
