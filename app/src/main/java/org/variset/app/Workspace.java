@@ -60,6 +60,19 @@ public final class Workspace implements AutoCloseable {
         return archive;
     }
 
+    /** The archive in words: its folder, or the server and schema of a shared one. */
+    public String describe() {
+        return archive.describe();
+    }
+
+    /**
+     * Says what this process is doing with the archive, for another process that finds an embedded archive in use
+     * ("variset serve at http://127.0.0.1:7070/").
+     */
+    public void describeUse(String doing) {
+        archive.describeUse(doing);
+    }
+
     /** The clock that decides "today". */
     public Clock clock() {
         return clock;

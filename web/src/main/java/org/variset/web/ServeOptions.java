@@ -63,6 +63,11 @@ public record ServeOptions(
         return new ServeOptions(host, port, tlsKeystore, tlsPassword, idle, lifetime, uploadLimitBytes);
     }
 
+    /** The same options with another upload limit. */
+    public ServeOptions withUploadLimit(long bytes) {
+        return new ServeOptions(host, port, tlsKeystore, tlsPassword, sessionIdle, sessionLifetime, bytes);
+    }
+
     /** True when served over TLS. */
     public boolean tls() {
         return tlsKeystore != null;

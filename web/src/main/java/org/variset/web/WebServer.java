@@ -26,6 +26,7 @@ import org.variset.app.account.Accounts;
 import org.variset.archive.problem.ArchiveException;
 import org.variset.web.page.Frame;
 import org.variset.web.page.GymPages;
+import org.variset.web.page.ImportPages;
 import org.variset.web.page.ResetPages;
 import org.variset.web.page.RoutePages;
 import org.variset.web.page.SearchPages;
@@ -86,6 +87,9 @@ public final class WebServer implements AutoCloseable {
             config.jetty.host = options.host();
             config.jetty.port = options.port();
             config.http.maxRequestSize = options.uploadLimitBytes();
+            config.jetty.multipartConfig.maxFileSize(options.uploadLimitBytes(), io.javalin.config.SizeUnit.BYTES);
+            config.jetty.multipartConfig.maxTotalRequestSize(
+                    options.uploadLimitBytes() * 2, io.javalin.config.SizeUnit.BYTES);
             config.staticFiles.add(s -> {
                 s.hostedPath = "/static";
                 s.directory = "/static";
@@ -101,6 +105,7 @@ public final class WebServer implements AutoCloseable {
             new ResetPages(site).register(config.routes);
             new RoutePages(site).register(config.routes);
             new SearchPages(site).register(config.routes);
+            new ImportPages(site, options.uploadLimitBytes()).register(config.routes);
             problems(config.routes, site);
         });
         app.start();
@@ -122,6 +127,16 @@ public final class WebServer implements AutoCloseable {
                 ArchiveException.class,
                 (e, ctx) -> problem(site, ctx, 503, "The archive cannot answer", e.getMessage()));
         r.exception(Exception.class, (e, ctx) -> {
+            if (tooLarge(e)) {
+                problem(
+                        site,
+                        ctx,
+                        413,
+                        "Upload too large",
+                        "The upload is larger than the server takes. Split the "
+                                + "files, or import them with 'variset import' on the server. Nothing was imported.");
+                return;
+            }
             LOG.log(Level.SEVERE, "request " + ctx.method() + " " + ctx.path() + " failed", e);
             problem(
                     site,
@@ -136,6 +151,21 @@ public final class WebServer implements AutoCloseable {
                 problem(site, ctx, 404, "Not found", "There is no page at " + ctx.path() + ".");
             }
         });
+    }
+
+    /** True when Jetty refused a request body for its size (it reports that as a bad multipart, deep inside). */
+    static boolean tooLarge(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            String m = t.getMessage();
+            if (m != null
+                    && (m.contains("max file size exceeded")
+                            || m.contains("max length exceeded")
+                            || m.contains("Request Entity Too Large")
+                            || m.contains("413"))) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static Connector tls(Server server, ServeOptions options) {
@@ -156,7 +186,7 @@ public final class WebServer implements AutoCloseable {
         ctx.status(status);
         Map<String, Object> p = new HashMap<>();
         Account a = Guard.account(ctx);
-        p.put("frame", a == null ? new Frame(title, null, null, "", false) : Frame.of(ctx, title));
+        p.put("frame", a == null ? new Frame(title, null, null, "", false, false) : Frame.of(ctx, title));
         p.put("message", Optional.ofNullable(message).orElse(""));
         site.views().render(ctx, "problem.jte", p);
     }

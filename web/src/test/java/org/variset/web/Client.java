@@ -58,6 +58,36 @@ final class Client {
         return r;
     }
 
+    /** Posts a multipart form (fields, then files by name), with the token of the last page. */
+    HttpResponse<String> postFiles(String path, Map<String, String> fields, Map<String, byte[]> files)
+            throws Exception {
+        String boundary = "----variset-test-" + System.nanoTime();
+        java.io.ByteArrayOutputStream body = new java.io.ByteArrayOutputStream();
+        Map<String, String> f = new LinkedHashMap<>(fields);
+        f.put("csrf", csrf);
+        for (Map.Entry<String, String> e : f.entrySet()) {
+            body.write(("--" + boundary + "\r\nContent-Disposition: form-data; name=\"" + e.getKey() + "\"\r\n\r\n"
+                            + e.getValue() + "\r\n")
+                    .getBytes(StandardCharsets.UTF_8));
+        }
+        for (Map.Entry<String, byte[]> e : files.entrySet()) {
+            body.write(("--" + boundary + "\r\nContent-Disposition: form-data; name=\"files\"; filename=\"" + e.getKey()
+                            + "\"\r\nContent-Type: application/octet-stream\r\n\r\n")
+                    .getBytes(StandardCharsets.UTF_8));
+            body.write(e.getValue());
+            body.write("\r\n".getBytes(StandardCharsets.UTF_8));
+        }
+        body.write(("--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8));
+        HttpResponse<String> r = http.send(
+                HttpRequest.newBuilder(URI.create(base + path))
+                        .header("Content-Type", "multipart/form-data; boundary=" + boundary)
+                        .POST(HttpRequest.BodyPublishers.ofByteArray(body.toByteArray()))
+                        .build(),
+                HttpResponse.BodyHandlers.ofString());
+        remember(r);
+        return r;
+    }
+
     /** Posts a form with the token of the last page. */
     HttpResponse<String> postWithToken(String path, Map<String, String> form) throws Exception {
         Map<String, String> f = new LinkedHashMap<>(form);

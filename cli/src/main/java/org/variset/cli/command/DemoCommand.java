@@ -45,6 +45,8 @@ final class DemoCommand extends VarisetSubcommand {
         DemoText.print(s, out());
         err().printf("Done in %.0f s.%n", (System.nanoTime() - start) / 1e9);
         out().println("Try: ./variset --archive " + s.archiveDir() + " search heel hook grade:V4..V5 --facets");
+        out().println("In a browser: ./variset --archive " + s.archiveDir() + " user add NAME --role admin, then "
+                + "./variset --archive " + s.archiveDir() + " serve, and open http://127.0.0.1:7070/");
         return ExitCode.OK;
     }
 }

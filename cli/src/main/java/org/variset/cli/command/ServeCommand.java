@@ -64,12 +64,12 @@ final class ServeCommand extends VarisetSubcommand {
                         + "with: variset user add NAME --role admin");
             }
             try (WebServer server = WebServer.start(w, options, Clock.systemUTC())) {
-                w.archive().describeUse("variset serve at " + server.address() + "; stop it to use the archive here");
+                w.describeUse("variset serve at " + server.address() + "; stop it to use the archive here");
                 if (!options.loopbackOnly() && !options.tls()) {
                     err().println("warning: serving plain HTTP on " + options.host() + ", open to the network: "
                             + "passwords and pages cross it unencrypted. Give --tls-keystore to serve HTTPS.");
                 }
-                out().println("Serving " + w.archive().describe() + " at " + server.address());
+                out().println("Serving " + w.describe() + " at " + server.address());
                 out().println("Open it in a browser; stop with Ctrl-C.");
                 out().flush();
                 waitUntilStopped(server, w);

@@ -12,12 +12,19 @@ import org.variset.web.security.Guard;
  * @param account the account's name, or null on the sign-in page
  * @param role the account's role in words, or null
  * @param csrf the session's CSRF token, or the sign-in form's
+ * @param setter true when the account may import and amend
  * @param headSetter true when the account may strip, remove and change settings
  */
-public record Frame(String title, String account, String role, String csrf, boolean headSetter) {
+public record Frame(String title, String account, String role, String csrf, boolean setter, boolean headSetter) {
     /** The frame of a signed-in request. */
     public static Frame of(Context ctx, String title) {
         Account a = Guard.account(ctx);
-        return new Frame(title, a.name(), a.role().label(), Guard.session(ctx).csrf(), a.may(Role.HEAD_SETTER));
+        return new Frame(
+                title,
+                a.name(),
+                a.role().label(),
+                Guard.session(ctx).csrf(),
+                a.may(Role.SETTER),
+                a.may(Role.HEAD_SETTER));
     }
 }

@@ -7,10 +7,9 @@ import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import org.variset.app.account.Account;
+import org.variset.app.names.ListGyms;
 import org.variset.app.names.ListResets;
 import org.variset.app.names.ListWalls;
-import org.variset.archive.read.ArchiveCatalog;
-import org.variset.archive.read.GymRecord;
 import org.variset.archive.read.NameListings;
 import org.variset.web.security.Guard;
 import org.variset.web.security.Need;
@@ -83,17 +82,15 @@ public final class GymPages {
         Account account = Guard.account(ctx);
         List<GymBlock> gyms = site.gate().use(w -> {
             List<GymBlock> out = new ArrayList<>();
-            for (GymRecord g : new ArchiveCatalog(w.archive().connection()).gyms()) {
-                if (!account.reaches(g.name())) {
+            for (String g : new ListGyms(w).names()) {
+                if (!account.reaches(g)) {
                     continue;
                 }
-                ListWalls.Result walls = new ListWalls(w).list(g.name(), null);
+                ListWalls.Result walls = new ListWalls(w).list(g, null);
                 out.add(new GymBlock(
-                        g.name(),
+                        g,
                         walls.on().toString(),
-                        walls.walls().stream()
-                                .map(l -> row(g.name(), l, walls.on()))
-                                .toList()));
+                        walls.walls().stream().map(l -> row(g, l, walls.on())).toList()));
             }
             return out;
         });

@@ -60,7 +60,7 @@ public final class SignInPages {
         String token = org.variset.web.security.FormTokens.next();
         ctx.cookie(cookie(FORM_COOKIE, token, 600));
         Map<String, Object> p = new HashMap<>();
-        p.put("frame", new Frame("Sign in", null, null, token, false));
+        p.put("frame", new Frame("Sign in", null, null, token, false, false));
         p.put("view", new SignInView(next, message, name));
         site.views().render(ctx, "signin.jte", p);
     }
